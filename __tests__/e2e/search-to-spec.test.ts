@@ -1,0 +1,61 @@
+import type { Browser } from 'playwright-core';
+import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
+import { useTestDatabase } from '../helpers/test-db';
+
+useTestDatabase();
+let web: Awaited<ReturnType<typeof startWebServer>>;
+let browser: Browser;
+
+beforeAll(async () => {
+  web = await startWebServer();
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+  await web?.close();
+});
+
+describe.each([
+  ['phone', PHONE],
+  ['desktop', DESKTOP],
+])('search → spec card at %s size', (name, viewport) => {
+  it('a query with typos in model and parameter opens the right spec card and shows its value', async () => {
+    const page = await browser.newPage({ viewport });
+    const errors: string[] = [];
+    page.on('pageerror', (e) => errors.push(e.message));
+    await page.goto(web.url);
+    const search = page.getByTestId('search-screen');
+    await search.getByLabel('Search specs').fill('kestrl 900 primry');
+    const firstHit = search.getByTestId('search-results').locator('[data-testid^="hit-"]').first();
+    await firstHit.waitFor();
+    await expect(firstHit.innerText()).resolves.toMatch(/primary/i);
+    await screenshot(page, `search-${name}`);
+
+    await firstHit.click();
+    const card = page.getByTestId('spec-screen');
+    await card.waitFor();
+    await expect(card.getByTestId('spec-values').innerText()).resolves.toMatch(/primary/i);
+    await expect(card.getByTestId('spec-display').innerText()).resolves.toMatch(/^\d[\d.]*–\d[\d.]* Ω$/);
+    await expect(card.getByTestId('spec-citation').innerText()).resolves.toMatch(/Page/);
+    await expect(card.getByTestId('caution-high-voltage').isVisible()).resolves.toBe(true);
+    await screenshot(page, `spec-${name}`);
+
+    // A deep link to the same card works on a fresh load (single-page fallback).
+    const deepLink = page.url();
+    await page.goto(deepLink);
+    await page.getByTestId('spec-display').waitFor();
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+});
+
+it('the model sheet lists components with inline values', async () => {
+  const page = await browser.newPage({ viewport: PHONE });
+  await page.goto(web.url);
+  await page.getByTestId('model-list').getByRole('link').first().click();
+  const sheet = page.getByTestId('model-screen');
+  await sheet.waitFor();
+  await expect(sheet.locator('[data-testid^="component-"]').count()).resolves.toBeGreaterThan(2);
+  await screenshot(page, 'model-phone');
+  await page.close();
+});

@@ -1,0 +1,37 @@
+/**
+ * End-to-end helpers: the real app (API + exported web build) on a loopback port,
+ * and Debian's Chromium driven by playwright-core.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { createApp } from '../../server/app';
+
+export const ROOT = path.resolve(__dirname, '../..');
+export const SCREENSHOTS = path.join(ROOT, '__tests__', 'screenshots');
+export const PHONE = { width: 390, height: 844 };
+export const DESKTOP = { width: 1280, height: 800 };
+
+export async function startWebServer(): Promise<{ url: string; close: () => Promise<void> }> {
+  const webDist = path.join(ROOT, 'dist');
+  if (!fs.existsSync(path.join(webDist, 'index.html'))) throw new Error('No web build in dist/: run `npm test` (it builds) or `npm run build:web`.');
+  const server: Server = createApp({ webDist }).listen(0, '127.0.0.1');
+  await new Promise((resolve) => server.once('listening', resolve));
+  const { port } = server.address() as AddressInfo;
+  return { url: `http://127.0.0.1:${port}`, close: () => new Promise((resolve) => server.close(() => resolve())) };
+}
+
+export function launchChromium(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
+      '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'],
+  });
+}
+
+export async function screenshot(page: Page, name: string) {
+  fs.mkdirSync(SCREENSHOTS, { recursive: true });
+  await page.screenshot({ path: path.join(SCREENSHOTS, `${name}.png`), fullPage: true });
+}

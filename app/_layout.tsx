@@ -1,0 +1,47 @@
+import { useState } from 'react';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { Stack } from 'expo-router';
+import { useFonts } from 'expo-font';
+import { SourceSans3_400Regular } from '@expo-google-fonts/source-sans-3/400Regular';
+import { SourceSans3_600SemiBold } from '@expo-google-fonts/source-sans-3/600SemiBold';
+import { SourceSans3_700Bold } from '@expo-google-fonts/source-sans-3/700Bold';
+import { ApiError } from '../lib/api/client';
+import { Fonts } from '../lib/theme';
+import { useTheme } from '../lib/theme/use-theme';
+
+export { ErrorBoundary } from 'expo-router';
+
+function makeQueryClient() {
+  return new QueryClient({
+    defaultOptions: {
+      queries: {
+        staleTime: 60_000,
+        // 4xx answers will not change on retry; network and 5xx faults may.
+        retry: (count, err) => !(err instanceof ApiError && err.status < 500) && count < 2,
+      },
+    },
+  });
+}
+
+export default function RootLayout() {
+  const [queryClient] = useState(makeQueryClient);
+  const [fontsLoaded, fontError] = useFonts({ SourceSans3_400Regular, SourceSans3_600SemiBold, SourceSans3_700Bold });
+  const t = useTheme();
+  if (!fontsLoaded && !fontError) return null;
+  return (
+    <QueryClientProvider client={queryClient}>
+      <Stack
+        screenOptions={{
+          headerStyle: { backgroundColor: t.surface },
+          headerTintColor: t.primary,
+          headerTitleStyle: { fontFamily: Fonts.semibold, color: t.text },
+          contentStyle: { backgroundColor: t.background },
+        }}
+      >
+        <Stack.Screen name="index" options={{ title: 'Specbench' }} />
+        <Stack.Screen name="models/[modelId]" options={{ title: 'Model sheet' }} />
+        <Stack.Screen name="specs/[specId]" options={{ title: 'Spec' }} />
+      </Stack>
+    </QueryClientProvider>
+  );
+}

@@ -1,0 +1,82 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { useRouter } from 'expo-router';
+import { SearchResults } from '../components/library/search-results';
+import { ModelList } from '../components/library/model-list';
+import { Screen } from '../components/ui/screen';
+import { Text } from '../components/ui/text';
+import { TextField } from '../components/ui/text-field';
+import { EmptyState, ErrorState, LoadingState } from '../components/ui/states';
+import { describeError } from '../lib/api/describe-error';
+import { useDebouncedValue } from '../lib/hooks/use-debounced-value';
+import { useModelsQuery, useSearchQuery } from '../lib/hooks/use-library';
+import { Spacing } from '../lib/theme';
+import { useIsWide } from '../lib/theme/use-theme';
+
+export default function SearchScreen() {
+  const router = useRouter();
+  const wide = useIsWide();
+  const [text, setText] = useState('');
+  const q = useDebouncedValue(text, 200);
+  const openSpec = (id: number) => router.push(`/specs/${id}`);
+  const openModel = (id: number) => router.push(`/models/${id}`);
+
+  return (
+    <Screen testID="search-screen">
+      <View style={styles.intro}>
+        <Text variant="title">Find a spec</Text>
+        <Text color="textMuted">Make, model, year, component or parameter — typos are fine.</Text>
+      </View>
+      <TextField
+        label="Search specs"
+        hideLabel
+        placeholder="e.g. kestrel 900 primary winding"
+        value={text}
+        onChangeText={setText}
+        autoFocus
+        autoCapitalize="none"
+        autoCorrect={false}
+        returnKeyType="search"
+        inputMode="search"
+        testID="search-input"
+      />
+      <View style={[styles.columns, wide && styles.columnsWide]}>
+        <View style={styles.main}>
+          <SearchArea q={q} onOpenSpec={openSpec} onOpenModel={openModel} />
+        </View>
+        {(wide || q.trim() === '') && (
+          <View style={[styles.side, wide && styles.sideWide]}>
+            <Text variant="heading">Browse the library</Text>
+            <BrowseModels onOpenModel={openModel} />
+          </View>
+        )}
+      </View>
+    </Screen>
+  );
+}
+
+function SearchArea({ q, onOpenSpec, onOpenModel }: { q: string; onOpenSpec: (id: number) => void; onOpenModel: (id: number) => void }) {
+  const search = useSearchQuery(q);
+  if (q.trim() === '') return null;
+  if (search.isPending) return <LoadingState label="Searching" />;
+  if (search.error) return <ErrorState message={describeError(search.error)} onRetry={search.refetch} />;
+  if (search.data.total === 0) return <EmptyState message={`Nothing matches “${q}”. Try a make, a model or a part name.`} />;
+  return <SearchResults result={search.data} onOpenSpec={onOpenSpec} onOpenModel={onOpenModel} />;
+}
+
+function BrowseModels({ onOpenModel }: { onOpenModel: (id: number) => void }) {
+  const models = useModelsQuery();
+  if (models.isPending) return <LoadingState label="Loading models" />;
+  if (models.error) return <ErrorState message={describeError(models.error)} onRetry={models.refetch} />;
+  if (models.data.length === 0) return <EmptyState message="The library is empty. An editor can import specs from CSV." />;
+  return <ModelList models={models.data} onOpenModel={onOpenModel} />;
+}
+
+const styles = StyleSheet.create({
+  intro: { gap: Spacing.xs },
+  columns: { gap: Spacing.xl },
+  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
+  main: { flex: 1, minWidth: 0 },
+  side: { gap: Spacing.md },
+  sideWide: { width: 380 },
+});

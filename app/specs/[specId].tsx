@@ -1,0 +1,49 @@
+import { Pressable, StyleSheet, View } from 'react-native';
+import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
+import { Citation } from '../../components/library/citation';
+import { modelTitle } from '../../components/library/model-title';
+import { RevisionList } from '../../components/library/revision-list';
+import { SafetyNotes } from '../../components/library/safety-notes';
+import { SpecValues } from '../../components/library/spec-values';
+import { Screen } from '../../components/ui/screen';
+import { Text } from '../../components/ui/text';
+import { ErrorState, LoadingState } from '../../components/ui/states';
+import { describeError } from '../../lib/api/describe-error';
+import { useSpecQuery } from '../../lib/hooks/use-library';
+import { Spacing } from '../../lib/theme';
+import { useIsWide } from '../../lib/theme/use-theme';
+
+export default function SpecCardScreen() {
+  const { specId } = useLocalSearchParams<{ specId: string }>();
+  const router = useRouter();
+  const wide = useIsWide();
+  const spec = useSpecQuery(Number(specId));
+
+  if (spec.isPending) return <Screen><LoadingState label="Loading the spec" /></Screen>;
+  if (spec.error) return <Screen><ErrorState message={describeError(spec.error)} onRetry={spec.refetch} /></Screen>;
+  const s = spec.data;
+  return (
+    <Screen testID="spec-screen">
+      <Stack.Screen options={{ title: s.parameter }} />
+      <Pressable accessibilityRole="link" accessibilityLabel={`Open model sheet ${modelTitle(s.model)}`} onPress={() => router.push(`/models/${s.model.id}`)}>
+        <Text color="primary">{modelTitle(s.model)}</Text>
+      </Pressable>
+      <View style={[styles.columns, wide && styles.columnsWide]}>
+        <View style={styles.column}>
+          <SpecValues spec={s} />
+          <SafetyNotes component={s.component.name} parameter={s.parameter} />
+        </View>
+        <View style={styles.column}>
+          <Citation spec={s} />
+          <RevisionList revisions={s.revisions} />
+        </View>
+      </View>
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  columns: { gap: Spacing.lg },
+  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
+  column: { flex: 1, gap: Spacing.lg, minWidth: 0 },
+});

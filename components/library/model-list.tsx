@@ -1,0 +1,42 @@
+import { Pressable, StyleSheet, View } from 'react-native';
+import type { ModelSummaryDto } from '../../lib/contracts/library';
+import { Spacing } from '../../lib/theme';
+import { useTheme } from '../../lib/theme/use-theme';
+import { Card } from '../ui/card';
+import { Text } from '../ui/text';
+import { modelTitle } from './model-title';
+
+export type ModelListProps = { models: ModelSummaryDto[]; onOpenModel: (id: number) => void };
+
+/** Every model in the library, by make: the way in when you do not know what to type. */
+export function ModelList({ models, onOpenModel }: ModelListProps) {
+  const t = useTheme();
+  const makes = [...new Set(models.map((m) => m.make.name))];
+  return (
+    <View style={styles.list} testID="model-list">
+      {makes.map((make) => (
+        <Card key={make}>
+          <Text variant="heading">{make}</Text>
+          {models.filter((m) => m.make.name === make).map((m) => (
+            <Pressable
+              key={m.id}
+              accessibilityRole="link"
+              accessibilityLabel={`Open model sheet ${modelTitle(m)}`}
+              onPress={() => onOpenModel(m.id)}
+              style={({ pressed }) => [styles.row, { borderTopColor: t.border, backgroundColor: pressed ? t.surfaceMuted : 'transparent' }]}
+            >
+              <Text style={styles.name}>{modelTitle(m).slice(make.length + 1)}</Text>
+              <Text variant="small" color="textMuted">{m.specCount} specs</Text>
+            </Pressable>
+          ))}
+        </Card>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: Spacing.md },
+  row: { flexDirection: 'row', alignItems: 'center', gap: Spacing.md, minHeight: 44, borderTopWidth: StyleSheet.hairlineWidth },
+  name: { flex: 1 },
+});

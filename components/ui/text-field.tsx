@@ -1,0 +1,42 @@
+import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
+import { Radius, Spacing, Type } from '../../lib/theme';
+import { useTheme } from '../../lib/theme/use-theme';
+import { Text } from './text';
+
+export type TextFieldProps = TextInputProps & {
+  /** Visible label, also the accessible name. Required: no input without a label. */
+  label: string;
+  hideLabel?: boolean;
+  error?: string | null;
+  hint?: string;
+};
+
+export function TextField({ label, hideLabel, error, hint, style, ...rest }: TextFieldProps) {
+  const t = useTheme();
+  return (
+    <View style={styles.wrap}>
+      {!hideLabel && <Text variant="label" color="textMuted">{label}</Text>}
+      <TextInput
+        accessibilityLabel={label}
+        aria-label={label}
+        aria-invalid={!!error}
+        placeholderTextColor={t.textMuted}
+        style={[styles.input, { color: t.text, backgroundColor: t.surface, borderColor: error ? t.fail : t.border }, style]}
+        {...rest}
+      />
+      {hint && !error ? <Text variant="small" color="textMuted">{hint}</Text> : null}
+      {error ? <Text variant="small" color="fail" accessibilityRole="alert">{error}</Text> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: Spacing.xs },
+  input: {
+    ...Type.body,
+    minHeight: 48,
+    paddingHorizontal: Spacing.md,
+    borderWidth: 1,
+    borderRadius: Radius.md,
+  },
+});

@@ -1,0 +1,51 @@
+/**
+ * The only place that calls fetch. Adds the base URL, sends and reads JSON, and turns
+ * any answer that is not ok into an ApiError built from the problem details.
+ */
+export type FieldError = { path: string; message: string };
+
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly errors: FieldError[] = [],
+    readonly body: Record<string, unknown> = {},
+  ) {
+    super(message);
+    this.name = 'ApiError';
+  }
+}
+
+const BASE_URL = process.env.EXPO_PUBLIC_API_URL ?? '';
+
+let accessToken: string | null = null;
+export function setAccessToken(token: string | null) {
+  accessToken = token;
+}
+
+export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
+  const headers = new Headers(init.headers);
+  headers.set('Accept', 'application/json, application/problem+json');
+  if (init.body && typeof init.body === 'string' && !headers.has('Content-Type')) headers.set('Content-Type', 'application/json');
+  if (accessToken) headers.set('Authorization', `Bearer ${accessToken}`);
+  const res = await fetch(`${BASE_URL}${path}`, { ...init, headers, credentials: 'include' });
+  const text = await res.text();
+  let body: unknown = null;
+  if (text) {
+    try { body = JSON.parse(text); } catch { body = null; }
+  }
+  if (!res.ok) {
+    const p = (body ?? {}) as { code?: string; detail?: string; errors?: FieldError[] };
+    throw new ApiError(res.status, p.code ?? 'http_error', p.detail ?? `The server answered ${res.status}.`, p.errors ?? [], (body ?? {}) as Record<string, unknown>);
+  }
+  return body as T;
+}
+
+/** Builds a query string from defined values only. */
+export function query(params: Record<string, string | number | undefined | null>): string {
+  const q = new URLSearchParams();
+  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== null && v !== '') q.set(k, String(v));
+  const s = q.toString();
+  return s ? `?${s}` : '';
+}

@@ -1,0 +1,115 @@
+/**
+ * Request schemas and response shapes of the read API, shared by the client and the
+ * server: the server validates with these schemas, the client is typed by them.
+ */
+import { z } from 'zod';
+
+export const IdParams = z.object({
+  id: z.coerce.number({ error: 'id must be a number' }).int('id must be a whole number').positive('id must be positive').max(2_147_483_647),
+});
+export type IdParams = z.infer<typeof IdParams>;
+
+export const SearchQuery = z.object({
+  q: z.string({ error: 'q is required' }).trim().min(1, 'Type at least one character').max(200, 'Keep the query under 200 characters'),
+  limit: z.coerce.number().int().min(1).max(100).default(40),
+});
+export type SearchQuery = z.infer<typeof SearchQuery>;
+
+export const ModelsQuery = z.object({
+  make: z.string().trim().max(120).optional(),
+});
+export type ModelsQuery = z.infer<typeof ModelsQuery>;
+
+export type QuantityKind = 'resistance' | 'voltage' | 'current' | 'length';
+
+export type ModelRefDto = {
+  id: number;
+  make: { id: number; name: string };
+  name: string;
+  yearFrom: number;
+  yearTo: number | null;
+  variant: string;
+};
+
+export type ModelSummaryDto = ModelRefDto & { componentCount: number; specCount: number };
+
+export type SpecSummaryDto = {
+  id: number;
+  componentId: number;
+  parameter: string;
+  quantityKind: QuantityKind;
+  min: number | null;
+  nominal: number | null;
+  max: number | null;
+  unit: string;
+  refTempC: number | null;
+  material: 'copper' | 'none';
+  status: 'published' | 'draft';
+  version: number;
+  /** e.g. '2.9–3.7 Ω', ready to show inline. */
+  display: string;
+};
+
+export type ComponentDto = {
+  id: number;
+  name: string;
+  locationNotes: string | null;
+  connectorNotes: string | null;
+};
+
+export type ModelDetailDto = ModelSummaryDto & {
+  components: Array<ComponentDto & { specs: SpecSummaryDto[] }>;
+};
+
+export type SourceDto = {
+  id: number;
+  title: string;
+  edition: string;
+  publisher: string | null;
+  year: number | null;
+  kind: 'service_manual' | 'bulletin' | 'datasheet' | 'handbook';
+  url: string | null;
+};
+
+export type RevisionDto = {
+  id: number;
+  version: number;
+  changedFields: string[];
+  authorName: string;
+  reason: string;
+  origin: 'edit' | 'import' | 'correction' | 'revert';
+  originRef: string | null;
+  createdAt: string;
+  snapshot: Record<string, unknown>;
+};
+
+export type SpecDetailDto = SpecSummaryDto & {
+  testPoints: string | null;
+  conditions: string | null;
+  notes: string | null;
+  sourcePage: string | null;
+  source: SourceDto | null;
+  component: ComponentDto;
+  model: ModelRefDto;
+  updatedAt: string;
+  revisions: RevisionDto[];
+};
+
+export type SearchHitDto = {
+  specId: number;
+  component: string;
+  parameter: string;
+  quantityKind: QuantityKind;
+  min: number | null;
+  nominal: number | null;
+  max: number | null;
+  unit: string;
+  display: string;
+  score: number;
+};
+
+export type SearchGroupDto = { model: ModelRefDto; hits: SearchHitDto[] };
+
+export type SearchResultDto = { query: string; total: number; groups: SearchGroupDto[] };
+
+export type HealthDto = { status: 'ok'; database: 'up'; specs: number; time: string };

@@ -1,0 +1,50 @@
+/**
+ * POST /api/verdicts: the request body (units as the technician typed them) and the
+ * response. Structure is checked here (400); impossible values — a unit of the wrong
+ * quantity, a negative corrected reading, non-finite numbers, min > max — are the
+ * engine's to refuse (422, naming the field).
+ */
+import { z } from 'zod';
+import type { VerdictStep } from '../verdict';
+
+/** Any JSON number, finite or not: non-finite values are refused by the engine with 422. */
+const Num = z.custom<number>((v) => typeof v === 'number', { message: 'must be a number' });
+const UnitText = z.string({ error: 'unit is required' }).trim().min(1, 'unit is required').max(12);
+const QuantityBody = z.object({ value: Num, unit: UnitText }).strict();
+
+export const SpecLimitsBody = z.object({
+  min: Num.optional(),
+  nominal: Num.optional(),
+  max: Num.optional(),
+  unit: UnitText,
+  refTempC: Num.optional(),
+  material: z.enum(['copper', 'none']).optional(),
+  nearLimitPct: Num.optional(),
+}).strict();
+
+export const VerdictBody = z.object({
+  specId: z.number().int().positive().optional(),
+  spec: SpecLimitsBody.optional(),
+  reading: QuantityBody,
+  leadResistance: QuantityBody.optional(),
+  seriesResistance: z.object({ value: Num, unit: UnitText, tolerancePct: Num.optional() }).strict().optional(),
+  temperatureC: Num.optional(),
+  meter: z.object({ percent: Num, counts: Num, countValue: Num, unit: UnitText }).strict().optional(),
+}).strict().refine((b) => (b.specId === undefined) !== (b.spec === undefined), {
+  message: 'Give exactly one of specId or spec.',
+  path: ['specId'],
+});
+export type VerdictBody = z.infer<typeof VerdictBody>;
+
+export type VerdictResponse = {
+  verdict: 'pass' | 'marginal' | 'fail';
+  value: number;
+  unit: string;
+  expandedUncertainty: number | null;
+  conformanceProbability: number | null;
+  reason: string;
+  steps: VerdictStep[];
+  zones: { lower?: number; upper?: number; nearBand?: number; interval?: [number, number] };
+  /** The spec the reading was judged against, when given by id. */
+  specVersion?: number;
+};

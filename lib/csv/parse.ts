@@ -1,0 +1,125 @@
+/**
+ * RFC 4180 parsing (papaparse) of a spec CSV into raw rows keyed by column name, with the
+ * physical line each record starts on and the file-level problems: empty file, bad header,
+ * wrong delimiter, unclosed quotes, rows with the wrong number of cells.
+ *
+ * Papaparse runs with header: false so that we see duplicated header names (header: true
+ * silently renames them) and can give each record its true starting line: we follow
+ * papaparse's cursor and count line breaks (CRLF, LF or CR) up to each record's start, so
+ * line numbers stay right after quoted multi-line cells.
+ */
+import Papa from 'papaparse';
+import { REQUIRED_COLUMNS, SPEC_CSV_COLUMNS, type RowProblem, type SpecCsvColumn } from './columns';
+
+export type ParsedCsv = { rows: Array<{ line: number; raw: Record<string, string> }>; fileErrors: RowProblem[] };
+
+/** As ParsedCsv, but problems confined to one record (wrong cell count) kept apart. */
+export type DetailedParse = ParsedCsv & { rowErrors: RowProblem[] };
+
+type CsvRecord = { line: number; cells: string[]; errors: Papa.ParseError[] };
+
+const LINE_BREAK = /\r\n?|\n/g;
+const QUOTE_REASONS: Record<string, string> = {
+  MissingQuotes: 'a quoted cell that starts on this line is never closed (a closing " is missing), so the rest of the file cannot be read',
+  InvalidQuotes: 'a quoted cell has text after its closing quote; inside a quoted cell write a quote as two quotes ("")',
+};
+
+function readRecords(text: string): CsvRecord[] {
+  const records: CsvRecord[] = [];
+  let pos = 0;
+  let line = 1;
+  Papa.parse<string[]>(text, {
+    delimiter: ',',
+    header: false,
+    skipEmptyLines: false,
+    step: (result) => {
+      records.push({ line, cells: result.data, errors: result.errors });
+      const end = result.meta.cursor;
+      line += (text.slice(pos, end).match(LINE_BREAK) ?? []).length;
+      pos = end;
+    },
+  });
+  return records;
+}
+
+const isBlank = (cells: string[]) => cells.every((c) => c.trim() === '');
+const normaliseHeader = (h: string) => h.trim().toLowerCase().replace(/[\s-]+/g, '_');
+const list = (names: string[]) => names.join(', ');
+
+/** Header problems; an empty list means every column is known, unique, and the required ones are there. */
+function checkHeader(header: string[], raw: string[], line: number): RowProblem[] {
+  const problem = (reason: string, column: SpecCsvColumn | null = null): RowProblem => ({ line, column, reason });
+  if (header.length === 1 && /[;\t|]/.test(raw[0])) {
+    const sep = raw[0].includes(';') ? 'semicolons' : raw[0].includes('\t') ? 'tabs' : 'bars (|)';
+    return [problem(`the header is one single column separated by ${sep}; use commas between columns (in a spreadsheet: save as "CSV UTF-8 (comma delimited)")`)];
+  }
+  const problems: RowProblem[] = [];
+  const known = SPEC_CSV_COLUMNS as readonly string[];
+  const seen = new Set<string>();
+  const duplicated = new Set<string>();
+  header.forEach((h) => (seen.has(h) ? duplicated.add(h) : seen.add(h)));
+  for (const d of duplicated) problems.push(problem(`column ${d || '(unnamed)'} appears more than once in the header`, known.includes(d) ? (d as SpecCsvColumn) : null));
+  const unknown = [...seen].filter((h) => !known.includes(h));
+  if (unknown.length) {
+    const names = unknown.map((h) => (h === '' ? '(an unnamed column)' : h));
+    problems.push(problem(`unknown column${unknown.length > 1 ? 's' : ''}: ${list(names)}; the allowed columns are ${list([...known])}`));
+  }
+  const missing = REQUIRED_COLUMNS.filter((c) => !seen.has(c));
+  if (missing.length) problems.push(problem(`missing required column${missing.length > 1 ? 's' : ''}: ${list(missing)}`, missing[0]));
+  if (!['min', 'nominal', 'max'].some((c) => seen.has(c))) problems.push(problem('the header needs at least one of the columns min, nominal or max'));
+  return problems;
+}
+
+/** Cell-count check; surplus cells that are all empty (trailing commas) are tolerated. */
+function cellCountProblem(cells: string[], width: number, line: number): RowProblem | null {
+  if (cells.length > width && !isBlank(cells.slice(width))) {
+    return { line, column: null, reason: `this row has ${cells.length} cells but the header has ${width} columns; a value that contains a comma must be put in double quotes` };
+  }
+  if (cells.length < width) {
+    return { line, column: null, reason: `this row has ${cells.length} cells but the header has ${width} columns; every row needs a cell (maybe empty) for every column` };
+  }
+  return null;
+}
+
+export function parseSpecCsvDetailed(input: string): DetailedParse {
+  const text = input.startsWith('\uFEFF') ? input.slice(1) : input;
+  const result: DetailedParse = { rows: [], fileErrors: [], rowErrors: [] };
+  if (text.trim() === '') {
+    result.fileErrors.push({ line: 1, column: null, reason: 'the file is empty' });
+    return result;
+  }
+  const records = readRecords(text).filter((r) => !isBlank(r.cells) || r.errors.length > 0);
+  const [headerRecord, ...data] = records;
+  const header = headerRecord.cells.map(normaliseHeader);
+  const headerProblems = checkHeader(header, headerRecord.cells, headerRecord.line);
+  if (headerProblems.length) return { ...result, fileErrors: headerProblems };
+  for (const record of data) {
+    const codes = [...new Set(record.errors.map((e) => e.code as string))];
+    if (codes.length) {
+      for (const code of codes) {
+        result.fileErrors.push({ line: record.line, column: null, reason: QUOTE_REASONS[code] ?? `this row could not be read (${code})` });
+      }
+      continue;
+    }
+    const countProblem = cellCountProblem(record.cells, header.length, record.line);
+    if (countProblem) {
+      result.rowErrors.push(countProblem);
+      continue;
+    }
+    const raw: Record<string, string> = {};
+    header.forEach((column, i) => (raw[column] = record.cells[i]));
+    result.rows.push({ line: record.line, raw });
+  }
+  if (data.length === 0) result.fileErrors.push({ line: headerRecord.line, column: null, reason: 'the file has a header but no data rows' });
+  return result;
+}
+
+/**
+ * Parses a spec CSV (header row required). `line` is the physical 1-based line where each
+ * record starts. When the header is unusable, `rows` is empty. Rows with the wrong number
+ * of cells are left out and reported in `fileErrors` with their line.
+ */
+export function parseSpecCsv(text: string): ParsedCsv {
+  const { rows, fileErrors, rowErrors } = parseSpecCsvDetailed(text);
+  return { rows, fileErrors: [...fileErrors, ...rowErrors].sort((a, b) => a.line - b.line) };
+}

@@ -1,0 +1,173 @@
+/**
+ * The one zod schema that turns a raw CSV row (column name → cell text) into a SpecCsvRow,
+ * with reasons a technician-editor can act on. Client forms can use it too: give it the
+ * cells as strings, keyed by CSV column name.
+ */
+import { z } from 'zod';
+import { parseUnit, unitKind, type CanonicalUnit, type QuantityKind } from '../units';
+import { SPEC_CSV_COLUMNS, type RowProblem, type SpecCsvColumn, type SpecCsvRow } from './columns';
+import { unneutraliseCell } from './injection';
+import { defaultMaterial, expectedKindForParameter, plausibilityWarnings } from './plausibility';
+
+/** Cells are trimmed, and a neutralising ' added by our export is removed (see injection.ts). */
+export function cleanCell(value: string | undefined): string {
+  return unneutraliseCell((value ?? '').trim()).trim();
+}
+
+const CONTROL_CHARS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
+const ACCEPTED_UNITS = 'Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil)';
+
+/**
+ * Free text. A cell beginning with = + - @ is accepted as plain text: it is stored and
+ * displayed, never evaluated, and neutralised again on export.
+ */
+const text = (column: SpecCsvColumn, max: number, required = false) =>
+  z.string().optional().transform((value, ctx) => {
+    const s = cleanCell(value);
+    if (required && s === '') ctx.addIssue({ code: 'custom', message: `${column} is required` });
+    else if (s.length > max) ctx.addIssue({ code: 'custom', message: `${column} is ${s.length} characters long; the limit is ${max}` });
+    else if (CONTROL_CHARS.test(s)) ctx.addIssue({ code: 'custom', message: `${column} contains an invisible control character; retype the cell` });
+    return s;
+  });
+
+const PLAIN_NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+const DECIMAL_COMMA = /^[+-]?\d*,\d+$/;
+const NOT_FINITE = /^[+-]?(nan|inf|infinity|∞)$/i;
+
+/** Parses a plain decimal number (dot separator); returns the reason when it is not one. */
+function readNumber(column: SpecCsvColumn, s: string): number | string {
+  if (DECIMAL_COMMA.test(s)) return `${column} "${s}" has a decimal comma; use a dot as the decimal separator (${s.replace(',', '.')})`;
+  if (NOT_FINITE.test(s)) return `${column} "${s}" is not a finite number`;
+  if (!PLAIN_NUMBER.test(s)) return `${column} "${s}" is not a number; write a plain number such as 3.5 and put the unit in the unit column`;
+  const n = Number(s);
+  return Number.isFinite(n) ? n : `${column} "${s}" is too large: not a finite number`;
+}
+
+type NumberRule = { required?: boolean; integer?: boolean; range?: [number, number]; what?: string };
+
+/** Empty → null; a problem → NaN plus an issue (NaN never reaches a valid row). */
+const number = (column: SpecCsvColumn, rule: NumberRule = {}) =>
+  z.string().optional().transform((value, ctx): number | null => {
+    const s = cleanCell(value);
+    const fail = (message: string) => (ctx.addIssue({ code: 'custom', message }), NaN);
+    if (s === '') return rule.required ? fail(`${column} is required`) : null;
+    const n = readNumber(column, s);
+    if (typeof n === 'string') return fail(rule.integer ? `${column} "${s}" is not a year; write a whole year such as 2016` : n);
+    if (rule.integer && !Number.isInteger(n)) return fail(`${column} ${s} is not a whole year`);
+    if (rule.range && (n < rule.range[0] || n > rule.range[1])) {
+      return fail(`${column} ${s} is outside ${rule.range[0]} to ${rule.range[1]}${rule.what ?? ''}`);
+    }
+    return n;
+  });
+
+const unit = z.string().optional().transform((value, ctx) => {
+  const s = cleanCell(value);
+  if (s === '') return (ctx.addIssue({ code: 'custom', message: 'unit is required' }), null);
+  const parsed = parseUnit(s);
+  if (!parsed) ctx.addIssue({ code: 'custom', message: `unit "${s}" is not recognised; use one of ${ACCEPTED_UNITS}` });
+  return parsed;
+});
+
+const material = z.string().optional().transform((value, ctx): 'copper' | 'none' | null => {
+  const s = cleanCell(value).toLowerCase();
+  if (s === '') return null;
+  if (s === 'copper' || s === 'none') return s;
+  ctx.addIssue({ code: 'custom', message: `material "${cleanCell(value)}" is not allowed; use copper, none, or leave it empty` });
+  return null;
+});
+
+const url = z.string().optional().transform((value, ctx) => {
+  const s = cleanCell(value);
+  if (s === '') return null;
+  if (s.length > 500) ctx.addIssue({ code: 'custom', message: `source_url is ${s.length} characters long; the limit is 500` });
+  else if (!/^https?:\/\/[^\s/?#"<>]+[^\s"<>]*$/i.test(s)) ctx.addIssue({ code: 'custom', message: 'source_url must be a web address starting with http:// or https://' });
+  return s;
+});
+
+const RawRowSchema = z.object({
+  make: text('make', 120, true),
+  model: text('model', 120, true),
+  year_from: number('year_from', { required: true, integer: true, range: [1900, 2100] }),
+  year_to: number('year_to', { integer: true, range: [1900, 2100] }),
+  variant: text('variant', 120),
+  component: text('component', 120, true),
+  parameter: text('parameter', 120, true),
+  min: number('min'),
+  nominal: number('nominal'),
+  max: number('max'),
+  unit,
+  ref_temp_c: number('ref_temp_c', { range: [-40, 200], what: ' °C' }),
+  material,
+  test_points: text('test_points', 1000),
+  conditions: text('conditions', 1000),
+  source_title: text('source_title', 200, true),
+  source_edition: text('source_edition', 200),
+  source_page: text('source_page', 200, true),
+  source_url: url,
+  notes: text('notes', 1000),
+});
+type RawRow = z.output<typeof RawRowSchema>;
+
+const KIND_NAME: Record<QuantityKind, string> = { resistance: 'resistance', voltage: 'voltage', current: 'current', length: 'length' };
+const ok = (n: number | null): n is number => n !== null && Number.isFinite(n);
+
+/** Rules between cells. Runs even when some cells failed, skipping the comparisons they spoil. */
+function crossCheck(r: RawRow, ctx: z.RefinementCtx<RawRow>) {
+  const issue = (column: SpecCsvColumn | null, message: string) =>
+    ctx.addIssue({ code: 'custom', message, path: column ? [column] : [] });
+  const limits: Array<[SpecCsvColumn, number | null]> = [['min', r.min], ['nominal', r.nominal], ['max', r.max]];
+  if (limits.every(([, v]) => v === null)) issue(null, 'give at least one of min, nominal or max');
+  if (ok(r.min) && ok(r.max) && r.min > r.max) issue('min', `min ${r.min} is greater than max ${r.max}`);
+  if (ok(r.min) && ok(r.nominal) && r.min > r.nominal) issue('nominal', `nominal ${r.nominal} is less than min ${r.min}`);
+  if (ok(r.nominal) && ok(r.max) && r.nominal > r.max) issue('nominal', `nominal ${r.nominal} is greater than max ${r.max}`);
+  if (ok(r.year_from) && ok(r.year_to) && r.year_to < r.year_from) {
+    issue('year_to', `year_to ${r.year_to} is before year_from ${r.year_from}`);
+  }
+  if (!r.unit) return;
+  const needed = expectedKindForParameter(r.parameter);
+  if (needed && needed !== r.unit.kind) {
+    issue('unit', `unit ${r.unit.unit} is a ${KIND_NAME[r.unit.kind]} unit but parameter '${r.parameter}' needs a ${KIND_NAME[needed]} unit`);
+  }
+  if (r.unit.kind === 'resistance' || r.unit.kind === 'length') {
+    for (const [column, v] of limits) {
+      if (ok(v) && v < 0) issue(column, `${column} ${v} is negative; a ${KIND_NAME[r.unit.kind]} cannot be below zero`);
+    }
+  }
+}
+
+function toRow(r: RawRow): SpecCsvRow {
+  const u = r.unit as { unit: CanonicalUnit; kind: QuantityKind };
+  return {
+    make: r.make, model: r.model, yearFrom: r.year_from as number, yearTo: r.year_to, variant: r.variant,
+    component: r.component, parameter: r.parameter, min: r.min, nominal: r.nominal, max: r.max,
+    unit: u.unit, refTempC: r.ref_temp_c, material: r.material ?? defaultMaterial(r.parameter, u.kind),
+    testPoints: r.test_points, conditions: r.conditions, sourceTitle: r.source_title,
+    sourceEdition: r.source_edition, sourcePage: r.source_page, sourceUrl: r.source_url, notes: r.notes,
+  };
+}
+
+/** Raw row (all strings, keyed by CSV column; missing columns count as empty) → SpecCsvRow. */
+export const SpecCsvRowSchema: z.ZodType<SpecCsvRow, Partial<Record<SpecCsvColumn, string>>> = RawRowSchema
+  .superRefine(crossCheck, { when: () => true })
+  .transform(toRow);
+
+const asColumn = (key: unknown): SpecCsvColumn | null =>
+  (SPEC_CSV_COLUMNS as readonly unknown[]).includes(key) ? (key as SpecCsvColumn) : null;
+
+/** Validates one raw row; `line` is the physical line it starts on, used in every problem. */
+export function validateSpecRow(
+  raw: Record<string, string>,
+  line: number,
+): { ok: true; row: SpecCsvRow; warnings: RowProblem[] } | { ok: false; errors: RowProblem[] } {
+  const result = SpecCsvRowSchema.safeParse(raw);
+  if (!result.success) {
+    return { ok: false, errors: result.error.issues.map((i) => ({ line, column: asColumn(i.path[0]), reason: i.message })) };
+  }
+  const row = result.data;
+  const values: Array<[SpecCsvColumn, number | null]> = [['min', row.min], ['nominal', row.nominal], ['max', row.max]];
+  const warnings = plausibilityWarnings(
+    { component: row.component, parameter: row.parameter, unit: row.unit, kind: unitKind(row.unit), values },
+    line,
+  );
+  return { ok: true, row, warnings };
+}

@@ -1,0 +1,35 @@
+import 'reflect-metadata';
+import path from 'node:path';
+import { DataSource, type DataSourceOptions } from 'typeorm';
+import { config } from '../config';
+import { Make } from '../modules/library/make.entity';
+import { VehicleModel } from '../modules/library/vehicle-model.entity';
+import { Component } from '../modules/library/component.entity';
+import { Source } from '../modules/library/source.entity';
+import { Spec } from '../modules/specs/spec.entity';
+import { SpecRevision } from '../modules/specs/spec-revision.entity';
+import { ImportBatch } from '../modules/imports/import-batch.entity';
+
+export const ENTITIES = [Make, VehicleModel, Component, Source, Spec, SpecRevision, ImportBatch];
+
+export function dataSourceOptions(database = config.DB_NAME): DataSourceOptions {
+  return {
+    type: 'mariadb',
+    host: config.DB_HOST,
+    port: config.DB_PORT,
+    username: config.DB_USER,
+    password: config.DB_PASSWORD,
+    database,
+    charset: 'utf8mb4_unicode_ci',
+    timezone: 'Z',
+    synchronize: false,
+    migrationsRun: false,
+    entities: ENTITIES,
+    // .ts under ts-jest and tsx, .js once compiled.
+    migrations: [path.join(__dirname, 'migrations', '*.{ts,js}').replace(/\\/g, '/')],
+    extra: { connectionLimit: 20, connectTimeout: 5000 },
+  };
+}
+
+/** The application's one DataSource (the TypeORM CLI reads this export too). */
+export const AppDataSource = new DataSource(dataSourceOptions());

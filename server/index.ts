@@ -1,0 +1,30 @@
+/** The server process: connect to MariaDB, then serve the app on config.PORT. */
+import 'reflect-metadata';
+import type { Server } from 'node:http';
+import { config } from './config';
+import { AppDataSource } from './db/data-source';
+import { createApp } from './app';
+
+let server: Server | undefined;
+
+function shutdown(code: number) {
+  const done = () => AppDataSource.destroy().catch(() => undefined).finally(() => process.exit(code));
+  if (server) server.close(done);
+  else done();
+  const force = setTimeout(() => process.exit(code), 5000) as unknown as { unref(): void };
+  force.unref();
+}
+
+process.on('unhandledRejection', (reason) => { console.error('Unhandled rejection:', reason); shutdown(1); });
+process.on('uncaughtException', (err) => { console.error('Uncaught exception:', err); shutdown(1); });
+process.on('SIGINT', () => shutdown(0));
+process.on('SIGTERM', () => shutdown(0));
+
+async function main() {
+  await AppDataSource.initialize();
+  server = createApp().listen(config.PORT, '0.0.0.0', () => {
+    console.log(`Specbench is running at http://localhost:${config.PORT}  (API under /api, Ctrl-C stops it)`);
+  });
+}
+
+main().catch((err) => { console.error('Specbench could not start:', err); process.exit(1); });

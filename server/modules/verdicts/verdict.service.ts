@@ -1,0 +1,60 @@
+/**
+ * Judging a reading over HTTP: units as typed become canonical units, a spec named by
+ * id is read from the library, and the shared engine (lib/verdict) decides. Every
+ * impossible input is refused with 422 naming its field.
+ */
+import type { VerdictBody, VerdictResponse } from '../../../lib/contracts/verdicts';
+import { CANONICAL_UNITS, parseUnit, type CanonicalUnit } from '../../../lib/units';
+import { evaluateReading, VerdictInputError, type SpecLimits, type VerdictInput } from '../../../lib/verdict';
+import { AppDataSource } from '../../db/data-source';
+import { AppError } from '../../errors/app-error';
+import { Spec } from '../specs/spec.entity';
+
+function unitAt(text: string, field: string): CanonicalUnit {
+  const parsed = parseUnit(text);
+  if (!parsed) throw AppError.unprocessable(`Unknown unit "${text}".`, [{ path: field, message: `Unknown unit "${text}". Use one of: ${CANONICAL_UNITS.join(', ')}, ohm, kohm, Mohm.` }]);
+  return parsed.unit;
+}
+
+async function specLimits(body: VerdictBody): Promise<{ limits: SpecLimits; version?: number }> {
+  if (body.spec) {
+    const { unit, ...rest } = body.spec;
+    return { limits: { ...rest, unit: unitAt(unit, 'spec.unit') } };
+  }
+  const spec = await AppDataSource.getRepository(Spec).findOneBy({ id: body.specId!, status: 'published' });
+  if (!spec) throw AppError.notFound('spec', body.specId);
+  return {
+    limits: { min: spec.min, nominal: spec.nominal, max: spec.max, unit: spec.unit as CanonicalUnit, refTempC: spec.refTempC, material: spec.material },
+    version: spec.version,
+  };
+}
+
+/** The body with canonical units, ready for the engine. */
+export async function toVerdictInput(body: VerdictBody): Promise<{ input: VerdictInput; specVersion?: number }> {
+  const { limits, version } = await specLimits(body);
+  const input: VerdictInput = {
+    spec: limits,
+    reading: { value: body.reading.value, unit: unitAt(body.reading.unit, 'reading.unit') },
+  };
+  if (body.leadResistance) input.leadResistance = { value: body.leadResistance.value, unit: unitAt(body.leadResistance.unit, 'leadResistance.unit') };
+  if (body.seriesResistance) input.seriesResistance = { ...body.seriesResistance, unit: unitAt(body.seriesResistance.unit, 'seriesResistance.unit') };
+  if (body.temperatureC !== undefined) input.temperatureC = body.temperatureC;
+  if (body.meter) input.meter = { ...body.meter, unit: unitAt(body.meter.unit, 'meter.unit') };
+  return { input, specVersion: version };
+}
+
+/** Runs the engine; its input errors become 422 problem details naming the field. */
+export function judge(input: VerdictInput) {
+  try {
+    return evaluateReading(input);
+  } catch (err) {
+    if (err instanceof VerdictInputError) throw AppError.unprocessable(err.message, [{ path: err.field, message: err.message }]);
+    throw err;
+  }
+}
+
+export async function evaluateVerdict(body: VerdictBody): Promise<VerdictResponse> {
+  const { input, specVersion } = await toVerdictInput(body);
+  const result = judge(input);
+  return specVersion === undefined ? result : { ...result, specVersion };
+}
