@@ -1,3 +1,4 @@
+import type { SpecDetailDto } from '../../lib/contracts/library';
 import type { Browser } from 'playwright-core';
 import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
@@ -35,7 +36,13 @@ describe.each([
     const card = page.getByTestId('spec-screen');
     await card.waitFor();
     await expect(card.getByTestId('spec-values').innerText()).resolves.toMatch(/primary/i);
-    await expect(card.getByTestId('spec-display').innerText()).resolves.toMatch(/^\d[\d.]*–\d[\d.]* Ω$/);
+    const shown = await card.getByTestId('spec-display').innerText();
+    expect(shown).toMatch(/^\d[\d.]*–\d[\d.]* Ω/);
+    const specId = Number(new URL(page.url()).pathname.split('/').pop());
+    const api = (await (await fetch(`${web.url}/api/specs/${specId}`)).json()) as SpecDetailDto;
+    expect(api.parameter).toMatch(/primary winding/i);
+    expect(`${api.model.make.name} ${api.model.name}`).toMatch(/kestrel.*900/i);
+    expect(shown).toBe(api.display);
     await expect(card.getByTestId('spec-citation').innerText()).resolves.toMatch(/Page/);
     await expect(card.getByTestId('caution-high-voltage').isVisible()).resolves.toBe(true);
     await screenshot(page, `spec-${name}`);

@@ -72,6 +72,7 @@ describe('lib/csv parseSpecCsv file-level problems', () => {
     ['a duplicated column', `${HEADER},notes\r\n${record()},\r\n`, 1, /notes appears more than once/],
     ['a semicolon-separated file', `${SPEC_CSV_COLUMNS.join(';')}\r\n1;2\r\n`, 1, /separated by semicolons; use commas/],
     ['a tab-separated file', `${SPEC_CSV_COLUMNS.join('\t')}\r\n1\t2\r\n`, 1, /separated by tabs; use commas/],
+    ['an unclosed quote in the header', `make,"model\r\n${record()}\r\n`, 1, /never closed/],
     ['an unclosed quote on line 3', `${HEADER}\r\n${record()}\r\n${record({ notes: 'x' }).replace(/,x$/, ',"x')}\r\n${record()}\r\n`, 3, /never closed/],
     ['text after a closing quote on line 2', `${HEADER}\r\n${record().replace(',Kestrel Moto Service Manual,', ',"Kestrel" Service,')}\r\n`, 2, /after its closing quote/],
     ['too many cells on line 3', `${HEADER}\r\n${record()}\r\n${record()},extra\r\n`, 3, /21 cells but the header has 20 columns; a value that contains a comma must be put in double quotes/],

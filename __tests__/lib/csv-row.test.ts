@@ -56,6 +56,7 @@ describe('lib/csv validateSpecRow rejections', () => {
     ['a 501-character url', { source_url: `https://manuals.specbench.example/${'a'.repeat(467)}` }, 'source_url', /the limit is 500/],
     ['a negative resistance', { min: '-1' }, 'min', /min -1 is negative; a resistance cannot be below zero/],
     ['a control character', { notes: 'bell\u0007' }, 'notes', /invisible control character/],
+    ['a line break in a one-line column', { component: 'ignition\ncoil' }, 'component', /component must fit on one line/],
   ])('when given %s, rejects it with the column and a plain reason', (_name, over, column, reason) => {
     const result = check(over);
     expect(result.ok).toBe(false);

@@ -84,11 +84,11 @@ describe('lib/csv export → import round trip', () => {
     expect(result.accepted.map((a) => a.row)).toEqual(tricky);
   });
 
-  it('when any trimmed text is in the notes, gives it back unchanged (property)', () => {
+  it('when any trimmed text is in the notes or conditions, gives it back unchanged (property)', () => {
     const unit = fc.constantFrom('a', 'Ω', ' ', '=', '+', '-', '@', "'", '"', ',', '\n', '\r', '\t', '0');
     const text = fc.string({ unit, maxLength: 30 }).filter((s) => s === s.trim());
-    fc.assert(fc.property(text, text, (notes, component) => {
-      const row = { ...BASE, notes, component: `c${component}` };
+    fc.assert(fc.property(text, text, (notes, conditions) => {
+      const row = { ...BASE, notes, conditions };
       const result = validateSpecCsv(toSpecCsv([row]));
       expect(result.accepted.map((a) => a.row)).toEqual([row]);
     }));

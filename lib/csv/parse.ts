@@ -42,6 +42,12 @@ function readRecords(text: string): CsvRecord[] {
   return records;
 }
 
+/** Papaparse's quote errors for one record, one problem per kind. */
+function quoteProblems(record: CsvRecord): RowProblem[] {
+  const codes = [...new Set(record.errors.map((e) => e.code as string))];
+  return codes.map((code) => ({ line: record.line, column: null, reason: QUOTE_REASONS[code] ?? `this row could not be read (${code})` }));
+}
+
 const isBlank = (cells: string[]) => cells.every((c) => c.trim() === '');
 const normaliseHeader = (h: string) => h.trim().toLowerCase().replace(/[\s-]+/g, '_');
 const list = (names: string[]) => names.join(', ');
@@ -90,15 +96,13 @@ export function parseSpecCsvDetailed(input: string): DetailedParse {
   }
   const records = readRecords(text).filter((r) => !isBlank(r.cells) || r.errors.length > 0);
   const [headerRecord, ...data] = records;
+  if (headerRecord.errors.length) return { ...result, fileErrors: quoteProblems(headerRecord) };
   const header = headerRecord.cells.map(normaliseHeader);
   const headerProblems = checkHeader(header, headerRecord.cells, headerRecord.line);
   if (headerProblems.length) return { ...result, fileErrors: headerProblems };
   for (const record of data) {
-    const codes = [...new Set(record.errors.map((e) => e.code as string))];
-    if (codes.length) {
-      for (const code of codes) {
-        result.fileErrors.push({ line: record.line, column: null, reason: QUOTE_REASONS[code] ?? `this row could not be read (${code})` });
-      }
+    if (record.errors.length) {
+      result.fileErrors.push(...quoteProblems(record));
       continue;
     }
     const countProblem = cellCountProblem(record.cells, header.length, record.line);

@@ -18,15 +18,17 @@ const CONTROL_CHARS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 const ACCEPTED_UNITS = 'Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil)';
 
 /**
- * Free text. A cell beginning with = + - @ is accepted as plain text: it is stored and
+ * Free text; only test_points, conditions and notes may span lines. A cell beginning with = + - @ is accepted as plain text: it is stored and
  * displayed, never evaluated, and neutralised again on export.
  */
-const text = (column: SpecCsvColumn, max: number, required = false) =>
+const text = (column: SpecCsvColumn, max: number, { required = false, multiline = false } = {}) =>
   z.string().optional().transform((value, ctx) => {
     const s = cleanCell(value);
-    if (required && s === '') ctx.addIssue({ code: 'custom', message: `${column} is required` });
-    else if (s.length > max) ctx.addIssue({ code: 'custom', message: `${column} is ${s.length} characters long; the limit is ${max}` });
-    else if (CONTROL_CHARS.test(s)) ctx.addIssue({ code: 'custom', message: `${column} contains an invisible control character; retype the cell` });
+    const fail = (message: string) => ctx.addIssue({ code: 'custom', message });
+    if (required && s === '') fail(`${column} is required`);
+    else if (s.length > max) fail(`${column} is ${s.length} characters long; the limit is ${max}`);
+    else if (CONTROL_CHARS.test(s)) fail(`${column} contains an invisible control character; retype the cell`);
+    else if (!multiline && /[\r\n]/.test(s)) fail(`${column} must fit on one line; remove the line break`);
     return s;
   });
 
@@ -85,26 +87,26 @@ const url = z.string().optional().transform((value, ctx) => {
 });
 
 const RawRowSchema = z.object({
-  make: text('make', 120, true),
-  model: text('model', 120, true),
+  make: text('make', 120, { required: true }),
+  model: text('model', 120, { required: true }),
   year_from: number('year_from', { required: true, integer: true, range: [1900, 2100] }),
   year_to: number('year_to', { integer: true, range: [1900, 2100] }),
   variant: text('variant', 120),
-  component: text('component', 120, true),
-  parameter: text('parameter', 120, true),
+  component: text('component', 120, { required: true }),
+  parameter: text('parameter', 120, { required: true }),
   min: number('min'),
   nominal: number('nominal'),
   max: number('max'),
   unit,
   ref_temp_c: number('ref_temp_c', { range: [-40, 200], what: ' °C' }),
   material,
-  test_points: text('test_points', 1000),
-  conditions: text('conditions', 1000),
-  source_title: text('source_title', 200, true),
+  test_points: text('test_points', 1000, { multiline: true }),
+  conditions: text('conditions', 1000, { multiline: true }),
+  source_title: text('source_title', 200, { required: true }),
   source_edition: text('source_edition', 200),
-  source_page: text('source_page', 200, true),
+  source_page: text('source_page', 200, { required: true }),
   source_url: url,
-  notes: text('notes', 1000),
+  notes: text('notes', 1000, { multiline: true }),
 });
 type RawRow = z.output<typeof RawRowSchema>;
 

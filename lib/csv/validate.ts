@@ -8,7 +8,9 @@ import { validateSpecRow } from './row-schema';
 
 type KeyFields = Pick<SpecCsvRow, 'make' | 'model' | 'yearFrom' | 'yearTo' | 'variant' | 'component' | 'parameter'>;
 
-const normaliseText = (s: string) => s.normalize('NFC').toLowerCase().replace(/\s+/g, ' ').trim();
+/** NFC where the engine has it (so OHM SIGN and GREEK OMEGA match), then case and spaces. */
+const normaliseText = (s: string) =>
+  (typeof s.normalize === 'function' ? s.normalize('NFC') : s).toLowerCase().replace(/\s+/g, ' ').trim();
 
 /** Identity of a spec: case-insensitive, whitespace-normalised; an open year_to is ''. */
 export function naturalKey(row: KeyFields): string {

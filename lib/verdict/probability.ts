@@ -10,7 +10,7 @@
 
 const SQRT_PI = Math.sqrt(Math.PI);
 const SERIES_LIMIT = 2;
-const CF_DEPTH = 5;
+const CF_DEPTH = 80;
 
 function erfSeries(x: number): number {
   const x2 = x * x;
