@@ -41,6 +41,7 @@ export default function RootLayout() {
         <Stack.Screen name="index" options={{ title: 'Specbench' }} />
         <Stack.Screen name="models/[modelId]" options={{ title: 'Model sheet' }} />
         <Stack.Screen name="specs/[specId]" options={{ title: 'Spec' }} />
+        <Stack.Screen name="calculator" options={{ title: 'Calculator' }} />
       </Stack>
     </QueryClientProvider>
   );

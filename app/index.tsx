@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import { SearchResults } from '../components/library/search-results';
 import { ModelList } from '../components/library/model-list';
+import { Button } from '../components/ui/button';
 import { Screen } from '../components/ui/screen';
 import { Text } from '../components/ui/text';
 import { TextField } from '../components/ui/text-field';
@@ -27,6 +28,7 @@ export default function SearchScreen() {
         <Text variant="title">Find a spec</Text>
         <Text color="textMuted">Make, model, year, component or parameter — typos are fine.</Text>
       </View>
+      <Button label="Calculator for limits typed by hand" variant="secondary" onPress={() => router.push('/calculator')} style={styles.calcButton} />
       <TextField
         label="Search specs"
         hideLabel
@@ -74,6 +76,7 @@ function BrowseModels({ onOpenModel }: { onOpenModel: (id: number) => void }) {
 
 const styles = StyleSheet.create({
   intro: { gap: Spacing.xs },
+  calcButton: { alignSelf: 'flex-start' },
   columns: { gap: Spacing.xl },
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
   main: { flex: 1, minWidth: 0 },

@@ -31,7 +31,16 @@ export function launchChromium(): Promise<Browser> {
   });
 }
 
+/**
+ * The whole screen. Screens scroll inside a view, not the document, so the viewport is
+ * stretched to the content's height for the picture and then put back.
+ */
 export async function screenshot(page: Page, name: string) {
   fs.mkdirSync(SCREENSHOTS, { recursive: true });
-  await page.screenshot({ path: path.join(SCREENSHOTS, `${name}.png`), fullPage: true });
+  const viewport = page.viewportSize()!;
+  // Runs in the browser, where `document` exists (the server tsconfig has no DOM types).
+  const height: number = await page.evaluate('Math.max(...Array.from(document.querySelectorAll("*")).map((el) => el.scrollHeight))');
+  await page.setViewportSize({ width: viewport.width, height: Math.min(Math.max(height, viewport.height), 6000) });
+  await page.screenshot({ path: path.join(SCREENSHOTS, `${name}.png`) });
+  await page.setViewportSize(viewport);
 }

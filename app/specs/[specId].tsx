@@ -1,5 +1,6 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
+import { Calculator } from '../../components/calculator/calculator';
 import { Citation } from '../../components/library/citation';
 import { modelTitle } from '../../components/library/model-title';
 import { RevisionList } from '../../components/library/revision-list';
@@ -11,6 +12,7 @@ import { ErrorState, LoadingState } from '../../components/ui/states';
 import { describeError } from '../../lib/api/describe-error';
 import { useSpecQuery } from '../../lib/hooks/use-library';
 import { Spacing } from '../../lib/theme';
+import type { CanonicalUnit } from '../../lib/units';
 import { useIsWide } from '../../lib/theme/use-theme';
 
 export default function SpecCardScreen() {
@@ -22,6 +24,21 @@ export default function SpecCardScreen() {
   if (spec.isPending) return <Screen><LoadingState label="Loading the spec" /></Screen>;
   if (spec.error) return <Screen><ErrorState message={describeError(spec.error)} onRetry={spec.refetch} /></Screen>;
   const s = spec.data;
+  const check = (
+    <>
+      <SafetyNotes component={s.component.name} parameter={s.parameter} />
+      <Calculator
+        kind={s.quantityKind}
+        spec={{ min: s.min, nominal: s.nominal, max: s.max, unit: s.unit as CanonicalUnit, refTempC: s.refTempC, material: s.material }}
+      />
+    </>
+  );
+  const reference = (
+    <>
+      <Citation spec={s} />
+      <RevisionList revisions={s.revisions} />
+    </>
+  );
   return (
     <Screen testID="spec-screen">
       <Stack.Screen options={{ title: s.parameter }} />
@@ -31,12 +48,9 @@ export default function SpecCardScreen() {
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={styles.column}>
           <SpecValues spec={s} />
-          <SafetyNotes component={s.component.name} parameter={s.parameter} />
+          {wide ? reference : check}
         </View>
-        <View style={styles.column}>
-          <Citation spec={s} />
-          <RevisionList revisions={s.revisions} />
-        </View>
+        <View style={styles.column}>{wide ? check : reference}</View>
       </View>
     </Screen>
   );

@@ -1,0 +1,67 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import Svg, { Circle, Line, Rect, Text as SvgText } from 'react-native-svg';
+import { bandOf, scale } from '../../lib/calculator/band';
+import { formatNumber } from '../../lib/units';
+import type { VerdictResult } from '../../lib/verdict';
+import { Fonts } from '../../lib/theme';
+import { useTheme } from '../../lib/theme/use-theme';
+import { Text } from '../ui/text';
+
+const HEIGHT = 96;
+const AXIS_Y = 52;
+
+/**
+ * The tolerance band: the limits, the marginal zones, the reading and its uncertainty
+ * interval, coloured by verdict and labelled in words (colour is never the only signal).
+ */
+export function BandPicture({ result }: { result: VerdictResult }) {
+  const t = useTheme();
+  const [width, setWidth] = useState(0);
+  const band = bandOf(result);
+  const x = scale(band, width);
+  const verdictColor = { pass: t.pass, marginal: t.marginal, fail: t.fail }[result.verdict];
+  const lo = band.lower !== undefined ? x(band.lower) : 0;
+  const hi = band.upper !== undefined ? x(band.upper) : width;
+  const label = `Tolerance band: ${band.lower !== undefined ? `lower limit ${formatNumber(band.lower)}` : 'no lower limit'}, ${band.upper !== undefined ? `upper limit ${formatNumber(band.upper)}` : 'no upper limit'}, reading ${formatNumber(band.value)} ${result.unit}: ${result.verdict}`;
+  return (
+    <View testID="band-picture" accessibilityRole="image" accessibilityLabel={label} onLayout={(e) => setWidth(e.nativeEvent.layout.width)} style={styles.wrap}>
+      {width > 0 && (
+        <Svg width={width} height={HEIGHT}>
+          <Rect x={0} y={AXIS_Y - 10} width={width} height={20} fill={t.failSurface} />
+          <Rect x={lo} y={AXIS_Y - 10} width={Math.max(0, hi - lo)} height={20} fill={t.passSurface} />
+          {band.marginal.map(([a, b]) => (
+            <Rect key={`${a}-${b}`} x={x(a)} y={AXIS_Y - 10} width={Math.max(1, x(b) - x(a))} height={20} fill={t.marginalSurface} stroke={t.marginal} strokeWidth={0.5} />
+          ))}
+          {[band.lower, band.upper].map((limit, i) => limit === undefined ? null : (
+            <LimitMark key={i} at={x(limit)} text={`${i === 0 ? 'min' : 'max'} ${formatNumber(limit)}`} color={t.text} width={width} />
+          ))}
+          {band.interval && (
+            <Line x1={x(band.interval[0])} x2={x(band.interval[1])} y1={AXIS_Y} y2={AXIS_Y} stroke={verdictColor} strokeWidth={4} strokeLinecap="round" />
+          )}
+          <Circle cx={x(band.value)} cy={AXIS_Y} r={7} fill={verdictColor} stroke={t.surface} strokeWidth={2} />
+          <SvgText x={clamp(x(band.value), 30, width - 30)} y={AXIS_Y + 30} fontSize={13} fontFamily={Fonts.semibold} fill={verdictColor} textAnchor="middle">
+            {`${formatNumber(band.value)} ${result.unit} · ${result.verdict.toUpperCase()}`}
+          </SvgText>
+        </Svg>
+      )}
+      <Text variant="small" color="textMuted">
+        Green: inside the limits · amber: marginal zone{result.expandedUncertainty !== null ? ' (limit ± U)' : ' (near-limit band)'} · red: outside
+        {band.interval ? ' · bar: reading ± U (k = 2)' : ''}
+      </Text>
+    </View>
+  );
+}
+
+function LimitMark({ at, text, color, width }: { at: number; text: string; color: string; width: number }) {
+  return (
+    <>
+      <Line x1={at} x2={at} y1={AXIS_Y - 16} y2={AXIS_Y + 16} stroke={color} strokeWidth={2} />
+      <SvgText x={clamp(at, 28, width - 28)} y={AXIS_Y - 22} fontSize={12} fontFamily={Fonts.regular} fill={color} textAnchor="middle">{text}</SvgText>
+    </>
+  );
+}
+
+const clamp = (v: number, lo: number, hi: number) => Math.min(Math.max(v, lo), Math.max(lo, hi));
+
+const styles = StyleSheet.create({ wrap: { width: '100%', gap: 4 } });
