@@ -100,13 +100,24 @@ export class SearchIndex {
       }
     }
     // Every word must match; when no spec matches them all, the best partial matches are shown.
-    let needed = words.length;
-    const most = Math.max(0, ...[...totals.values()].map((t) => t.hits));
-    if (most < needed) needed = most;
-    const ranked = [...totals.entries()]
-      .filter(([, t]) => t.hits >= needed && needed > 0)
-      .map(([doc, t]) => ({ doc: this.docs[doc], score: t.score / words.length }))
-      .sort((a, b) => b.score - a.score || a.doc.specId - b.doc.specId);
-    return { matches: ranked.slice(0, limit), total: ranked.length };
+    let most = 0;
+    for (const t of totals.values()) if (t.hits > most) most = t.hits;
+    const needed = Math.min(words.length, most);
+    if (needed === 0) return { matches: [], total: 0 };
+    // Keep only the best `limit` (a full sort of tens of thousands of hits is the slow part).
+    const top: SearchMatch[] = [];
+    let total = 0;
+    const better = (a: SearchMatch, b: SearchMatch) => b.score - a.score || a.doc.specId - b.doc.specId;
+    for (const [doc, t] of totals) {
+      if (t.hits < needed) continue;
+      total += 1;
+      const match = { doc: this.docs[doc], score: t.score / words.length };
+      if (top.length === limit && better(match, top[top.length - 1]) >= 0) continue;
+      let i = top.length;
+      while (i > 0 && better(match, top[i - 1]) < 0) i -= 1;
+      top.splice(i, 0, match);
+      if (top.length > limit) top.pop();
+    }
+    return { matches: top, total };
   }
 }
