@@ -18,7 +18,8 @@ import { SpecRevision } from '../specs/spec-revision.entity';
 import { foldKey, makeKey, modelKey, sourceKey } from '../library/keys';
 import type { PlannedRow } from './import-plan';
 
-export type Actor = { id: number | null; name: string };
+export type { Actor } from "../../auth/actor";
+import type { Actor } from "../../auth/actor";
 const CHUNK = 500;
 
 async function chunked<T>(items: T[], fn: (chunk: T[]) => Promise<unknown>) {

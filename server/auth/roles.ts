@@ -1,0 +1,20 @@
+/** Roles, from least to most trusted; each role may do everything the ones before it may. */
+export const ROLES = ['contributor', 'editor', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+
+/** Who may call a route: anyone, any signed-in account, or at least the named role. */
+export type AccessRule = 'public' | 'signed-in' | Role;
+
+export type SignedInUser = { id: number; email: string; displayName: string; role: Role };
+
+export function roleAtLeast(role: Role, needed: Role): boolean {
+  return ROLES.indexOf(role) >= ROLES.indexOf(needed);
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    // passport sets req.user to the signed-in account.
+    interface User extends SignedInUser {}
+  }
+}
