@@ -6,6 +6,8 @@ import { SourceSans3_400Regular } from '@expo-google-fonts/source-sans-3/400Regu
 import { SourceSans3_600SemiBold } from '@expo-google-fonts/source-sans-3/600SemiBold';
 import { SourceSans3_700Bold } from '@expo-google-fonts/source-sans-3/700Bold';
 import { ApiError } from '../lib/api/client';
+import { SessionProvider } from '../lib/session/session-provider';
+import { HeaderAccount } from '../components/ui/header-account';
 import { Fonts } from '../lib/theme';
 import { useTheme } from '../lib/theme/use-theme';
 
@@ -30,12 +32,14 @@ export default function RootLayout() {
   if (!fontsLoaded && !fontError) return null;
   return (
     <QueryClientProvider client={queryClient}>
+      <SessionProvider>
       <Stack
         screenOptions={{
           headerStyle: { backgroundColor: t.surface },
           headerTintColor: t.primary,
           headerTitleStyle: { fontFamily: Fonts.semibold, color: t.text },
           contentStyle: { backgroundColor: t.background },
+          headerRight: () => <HeaderAccount />,
         }}
       >
         <Stack.Screen name="index" options={{ title: 'Specbench' }} />
@@ -43,6 +47,7 @@ export default function RootLayout() {
         <Stack.Screen name="specs/[specId]" options={{ title: 'Spec' }} />
         <Stack.Screen name="calculator" options={{ title: 'Calculator' }} />
       </Stack>
+      </SessionProvider>
     </QueryClientProvider>
   );
 }

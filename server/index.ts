@@ -4,10 +4,14 @@ import type { Server } from 'node:http';
 import { config } from './config';
 import { AppDataSource } from './db/data-source';
 import { createApp } from './app';
+import { fakeSmtp } from './modules/mail/fake-smtp';
+import { startOutboxWorker, stopOutboxWorker } from './modules/mail/mailer';
 
 let server: Server | undefined;
 
 function shutdown(code: number) {
+  stopOutboxWorker();
+  void fakeSmtp.stop();
   const done = () => AppDataSource.destroy().catch(() => undefined).finally(() => process.exit(code));
   if (server) server.close(done);
   else done();
@@ -22,6 +26,11 @@ process.on('SIGTERM', () => shutdown(0));
 
 async function main() {
   await AppDataSource.initialize();
+  if (!config.SMTP_URL && config.NODE_ENV !== 'production') {
+    const port = await fakeSmtp.start(config.FAKE_SMTP_PORT);
+    console.log(`Local mail server on 127.0.0.1:${port}; messages at http://localhost:${config.PORT}/dev/mailbox`);
+  }
+  startOutboxWorker();
   server = createApp().listen(config.PORT, '0.0.0.0', () => {
     console.log(`Specbench is running at http://localhost:${config.PORT}  (API under /api, Ctrl-C stops it)`);
   });

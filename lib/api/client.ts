@@ -20,8 +20,13 @@ export class ApiError extends Error {
 const BASE_URL = process.env.EXPO_PUBLIC_API_URL ?? '';
 
 let accessToken: string | null = null;
+let onUnauthorized: (() => void) | null = null;
 export function setAccessToken(token: string | null) {
   accessToken = token;
+}
+/** Called when a request made with a token is refused with 401: the session has ended. */
+export function setUnauthorizedHandler(handler: (() => void) | null) {
+  onUnauthorized = handler;
 }
 
 export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
@@ -36,6 +41,7 @@ export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise
     try { body = JSON.parse(text); } catch { body = null; }
   }
   if (!res.ok) {
+    if (res.status === 401 && headers.has('Authorization')) onUnauthorized?.();
     const p = (body ?? {}) as { code?: string; detail?: string; errors?: FieldError[] };
     throw new ApiError(res.status, p.code ?? 'http_error', p.detail ?? `The server answered ${res.status}.`, p.errors ?? [], (body ?? {}) as Record<string, unknown>);
   }

@@ -22,7 +22,8 @@ export const SpecLimitsBody = z.object({
   nearLimitPct: Num.optional(),
 }).strict();
 
-export const VerdictBody = z.object({
+/** The verdict inputs, without the exactly-one-of rule (so other bodies can extend them). */
+export const VerdictFields = z.object({
   specId: z.number().int().positive().optional(),
   spec: SpecLimitsBody.optional(),
   reading: QuantityBody,
@@ -30,10 +31,12 @@ export const VerdictBody = z.object({
   seriesResistance: z.object({ value: Num, unit: UnitText, tolerancePct: Num.optional() }).strict().optional(),
   temperatureC: Num.optional(),
   meter: z.object({ percent: Num, counts: Num, countValue: Num, unit: UnitText }).strict().optional(),
-}).strict().refine((b) => (b.specId === undefined) !== (b.spec === undefined), {
-  message: 'Give exactly one of specId or spec.',
-  path: ['specId'],
 });
+
+export const exactlyOneSpec = (b: { specId?: number; spec?: unknown }) => (b.specId === undefined) !== (b.spec === undefined);
+const ONE_SPEC = { message: 'Give exactly one of specId or spec.', path: ['specId'] };
+
+export const VerdictBody = VerdictFields.strict().refine(exactlyOneSpec, ONE_SPEC);
 export type VerdictBody = z.infer<typeof VerdictBody>;
 
 export type VerdictResponse = {

@@ -9,8 +9,15 @@ import { Source } from '../modules/library/source.entity';
 import { Spec } from '../modules/specs/spec.entity';
 import { SpecRevision } from '../modules/specs/spec-revision.entity';
 import { ImportBatch } from '../modules/imports/import-batch.entity';
+import { User } from '../modules/users/user.entity';
+import { UserAudit } from '../modules/users/user-audit.entity';
+import { RefreshToken } from '../modules/auth/refresh-token.entity';
+import { EmailToken } from '../modules/auth/email-token.entity';
+import { OutboxMessage } from '../modules/mail/outbox-message.entity';
+import { Job } from '../modules/jobs/job.entity';
+import { Reading } from '../modules/jobs/reading.entity';
 
-export const ENTITIES = [Make, VehicleModel, Component, Source, Spec, SpecRevision, ImportBatch];
+export const ENTITIES = [Make, VehicleModel, Component, Source, Spec, SpecRevision, ImportBatch, User, UserAudit, RefreshToken, EmailToken, OutboxMessage, Job, Reading];
 
 export function dataSourceOptions(database = config.DB_NAME): DataSourceOptions {
   return {

@@ -1,0 +1,28 @@
+/** The local fake SMTP server for API tests, and reading links out of the messages it caught. */
+import { fakeSmtp } from '../../server/modules/mail/fake-smtp';
+import { deliverDue, resetTransport } from '../../server/modules/mail/mailer';
+
+export function useFakeMail() {
+  beforeAll(async () => {
+    await fakeSmtp.start(0);
+    resetTransport();
+  });
+  afterAll(async () => {
+    await fakeSmtp.stop();
+    resetTransport();
+  });
+}
+
+/** Sends what the outbox holds, then returns the newest message to `to`. */
+export async function latestMailTo(to: string) {
+  await deliverDue();
+  const mail = fakeSmtp.messages.find((m) => m.to.toLowerCase().includes(to.toLowerCase()));
+  if (!mail) throw new Error(`no mail to ${to}; have: ${fakeSmtp.messages.map((m) => m.to).join(', ')}`);
+  return mail;
+}
+
+export function tokenFromLink(text: string, page: 'verify' | 'reset'): string {
+  const match = new RegExp(`/${page}\\?token=([A-Za-z0-9_%-]+)`).exec(text);
+  if (!match) throw new Error(`no ${page} link in: ${text}`);
+  return decodeURIComponent(match[1]);
+}

@@ -1,0 +1,22 @@
+/**
+ * Access tokens (JWT, HS256 pinned, issuer and audience checked, short-lived) and
+ * opaque random tokens (refresh, e-mail links) that the database keeps only as SHA-256.
+ */
+import { createHash, randomBytes } from 'node:crypto';
+import jwt from 'jsonwebtoken';
+import { config } from '../config';
+import type { SignedInUser } from './roles';
+
+export const JWT_ALGORITHM = 'HS256' as const;
+export const JWT_ISSUER = 'specbench';
+export const JWT_AUDIENCE = 'specbench-app';
+
+export function signAccessToken(user: Pick<SignedInUser, 'id' | 'role'>): string {
+  return jwt.sign({ role: user.role }, config.jwtSecret, {
+    algorithm: JWT_ALGORITHM, issuer: JWT_ISSUER, audience: JWT_AUDIENCE,
+    subject: String(user.id), expiresIn: config.ACCESS_TOKEN_TTL_S,
+  });
+}
+
+export const randomToken = () => randomBytes(32).toString('base64url');
+export const sha256Hex = (text: string) => createHash('sha256').update(text, 'utf8').digest('hex');

@@ -1,0 +1,20 @@
+import type { Request } from 'express';
+import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
+import { sendProblem } from './error-handler';
+
+/**
+ * A limiter that answers 429 problem details with Retry-After. Each createApp() makes
+ * its own limiters (in-memory), so one test file cannot exhaust another's.
+ */
+export function limiter(name: string, limit: number, windowMs: number, key?: (req: Request) => string) {
+  return rateLimit({
+    windowMs, limit, standardHeaders: 'draft-8', legacyHeaders: false,
+    keyGenerator: (req) => `${name}:${ipKeyGenerator(req.ip ?? '')}${key ? `:${key(req)}` : ''}`,
+    handler: (req, res) => {
+      const reset = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
+      const seconds = reset ? Math.max(1, Math.ceil((reset.getTime() - Date.now()) / 1000)) : Math.ceil(windowMs / 1000);
+      res.setHeader('Retry-After', String(seconds));
+      sendProblem(res, { status: 429, code: 'rate_limited', detail: `Too many attempts. Try again in ${seconds} seconds.`, retryAfter: seconds });
+    },
+  });
+}

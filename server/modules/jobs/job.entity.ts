@@ -1,0 +1,39 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+
+/** One customer's machine on one job: the readings taken belong to it. */
+@Entity({ name: 'jobs' })
+@Index('ix_jobs_owner_created', ['ownerId', 'createdAt'])
+export class Job {
+  @PrimaryGeneratedColumn({ type: 'int' })
+  id: number;
+
+  @Column({ name: 'owner_id', type: 'int' })
+  ownerId: number;
+
+  /** The library model, or null for a machine that is not in the library. */
+  @Column({ name: 'model_id', type: 'int', nullable: true })
+  modelId: number | null;
+
+  /** How the technician names the machine when it is not in the library (or a nickname). */
+  @Column({ name: 'machine_label', type: 'varchar', length: 160, default: '' })
+  machineLabel: string;
+
+  /** VIN or frame number, free text. */
+  @Column({ name: 'machine_id', type: 'varchar', length: 40, default: '' })
+  machineId: string;
+
+  @Column({ name: 'customer_ref', type: 'varchar', length: 80, default: '' })
+  customerRef: string;
+
+  @Column({ type: 'text', nullable: true })
+  notes: string | null;
+
+  @Column({ type: 'enum', enum: ['open', 'closed'], default: 'open' })
+  status: 'open' | 'closed';
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'datetime', precision: 3 })
+  updatedAt: Date;
+}
