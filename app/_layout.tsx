@@ -8,6 +8,7 @@ import { SourceSans3_700Bold } from '@expo-google-fonts/source-sans-3/700Bold';
 import { ApiError } from '../lib/api/client';
 import { SessionProvider } from '../lib/session/session-provider';
 import { HeaderAccount } from '../components/ui/header-account';
+import { ReadingQueueSync } from '../components/jobs/reading-queue-sync';
 import { Fonts } from '../lib/theme';
 import { useTheme } from '../lib/theme/use-theme';
 
@@ -33,6 +34,7 @@ export default function RootLayout() {
   return (
     <QueryClientProvider client={queryClient}>
       <SessionProvider>
+      <ReadingQueueSync />
       <Stack
         screenOptions={{
           headerStyle: { backgroundColor: t.surface },
@@ -46,6 +48,17 @@ export default function RootLayout() {
         <Stack.Screen name="models/[modelId]" options={{ title: 'Model sheet' }} />
         <Stack.Screen name="specs/[specId]" options={{ title: 'Spec' }} />
         <Stack.Screen name="calculator" options={{ title: 'Calculator' }} />
+        <Stack.Screen name="jobs/index" options={{ title: 'My jobs' }} />
+        <Stack.Screen name="jobs/[jobId]" options={{ title: 'Job sheet' }} />
+        <Stack.Screen name="jobs/[jobId]/report" options={{ title: 'Job report' }} />
+        <Stack.Screen name="(auth)" options={{ headerShown: false }} />
+        <Stack.Screen name="account" options={{ title: 'Your account' }} />
+        <Stack.Screen name="admin/users" options={{ title: 'Users and roles' }} />
+        <Stack.Screen name="corrections/index" options={{ title: 'My proposals' }} />
+        <Stack.Screen name="corrections/new" options={{ title: 'Propose a correction' }} />
+        <Stack.Screen name="corrections/[correctionId]" options={{ title: 'Proposal' }} />
+        <Stack.Screen name="review/index" options={{ title: 'Review corrections' }} />
+        <Stack.Screen name="review/[correctionId]" options={{ title: 'Review' }} />
       </Stack>
       </SessionProvider>
     </QueryClientProvider>

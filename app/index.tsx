@@ -11,12 +11,14 @@ import { EmptyState, ErrorState, LoadingState } from '../components/ui/states';
 import { describeError } from '../lib/api/describe-error';
 import { useDebouncedValue } from '../lib/hooks/use-debounced-value';
 import { useModelsQuery, useSearchQuery } from '../lib/hooks/use-library';
+import { useSession } from '../lib/session/session-provider';
 import { Spacing } from '../lib/theme';
 import { useIsWide } from '../lib/theme/use-theme';
 
 export default function SearchScreen() {
   const router = useRouter();
   const wide = useIsWide();
+  const session = useSession();
   const [text, setText] = useState('');
   const q = useDebouncedValue(text, 200);
   const openSpec = (id: number) => router.push(`/specs/${id}`);
@@ -28,7 +30,10 @@ export default function SearchScreen() {
         <Text variant="title">Find a spec</Text>
         <Text color="textMuted">Make, model, year, component or parameter — typos are fine.</Text>
       </View>
-      <Button label="Calculator for limits typed by hand" variant="secondary" onPress={() => router.push('/calculator')} style={styles.calcButton} />
+      <View style={styles.buttons}>
+        <Button label="Calculator for limits typed by hand" variant="secondary" onPress={() => router.push('/calculator')} style={styles.calcButton} />
+        {session.status === 'signed-in' ? <Button label="My jobs" variant="secondary" onPress={() => router.push('/jobs')} testID="home-my-jobs" /> : null}
+      </View>
       <TextField
         label="Search specs"
         hideLabel
@@ -77,6 +82,7 @@ function BrowseModels({ onOpenModel }: { onOpenModel: (id: number) => void }) {
 const styles = StyleSheet.create({
   intro: { gap: Spacing.xs },
   calcButton: { alignSelf: 'flex-start' },
+  buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: Spacing.sm },
   columns: { gap: Spacing.xl },
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
   main: { flex: 1, minWidth: 0 },

@@ -6,13 +6,42 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express from 'express';
 import helmet from 'helmet';
+import cookieParser from 'cookie-parser';
+import { enforceRouteRules } from './auth/access';
+import { passport } from './auth/passport';
 import { config } from './config';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { healthRouter } from './modules/health/health.router';
 import { modelRouter } from './modules/library/model.router';
 import { searchRouter } from './modules/search/search.router';
 import { specRouter } from './modules/specs/spec.router';
+import { specEditRouter } from './modules/specs/spec-edit.router';
+import { importRouter } from './modules/imports/import.router';
+import { exportRouter } from './modules/exports/export.router';
 import { verdictRouter } from './modules/verdicts/verdict.router';
+import { authRouter } from './modules/auth/auth.router';
+import { userRouter } from './modules/users/user.router';
+import { jobRouter } from './modules/jobs/job.router';
+import { correctionRouter } from './modules/corrections/correction.router';
+import { devMailboxRouter } from './modules/mail/dev-mailbox.router';
+
+/** Every API router and where it is mounted under /api (the access test walks this list). */
+export function apiRouters(): Array<[string, express.Router]> {
+  return [
+    ['/health', healthRouter],
+    ['/auth', authRouter()],
+    ['/users', userRouter],
+    ['/search', searchRouter],
+    ['/models', modelRouter],
+    ['/specs', specRouter],
+    ['/specs', specEditRouter],
+    ['/imports', importRouter],
+    ['/exports', exportRouter],
+    ['/verdicts', verdictRouter],
+    ['/jobs', jobRouter],
+    ['/corrections', correctionRouter()],
+  ];
+}
 
 export function createApp(options: { webDist?: string | null } = {}) {
   const app = express();
@@ -30,16 +59,17 @@ export function createApp(options: { webDist?: string | null } = {}) {
       },
     },
   }));
+  app.set('trust proxy', 'loopback');
   app.use(express.json({ limit: '100kb' }));
+  app.use(cookieParser());
+  app.use(passport.initialize());
 
   const api = express.Router();
-  api.use('/health', healthRouter);
-  api.use('/search', searchRouter);
-  api.use('/models', modelRouter);
-  api.use('/specs', specRouter);
-  api.use('/verdicts', verdictRouter);
+  api.use(enforceRouteRules);
+  for (const [prefix, router] of apiRouters()) api.use(prefix, router);
   api.use(notFoundHandler);
   app.use('/api', api);
+  if (config.NODE_ENV !== 'production') app.use('/dev', devMailboxRouter);
 
   const webDist = options.webDist === undefined ? config.webDist : options.webDist;
   if (webDist && fs.existsSync(path.join(webDist, 'index.html'))) serveWeb(app, webDist);

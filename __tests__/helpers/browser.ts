@@ -15,7 +15,7 @@ export const PHONE = { width: 390, height: 844 };
 export const DESKTOP = { width: 1280, height: 800 };
 
 export async function startWebServer(): Promise<{ url: string; close: () => Promise<void> }> {
-  const webDist = path.join(ROOT, 'dist');
+  const webDist = process.env.E2E_WEB_DIST ?? path.join(ROOT, 'dist');
   if (!fs.existsSync(path.join(webDist, 'index.html'))) throw new Error('No web build in dist/: run `npm test` (it builds) or `npm run build:web`.');
   const server: Server = createApp({ webDist }).listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));

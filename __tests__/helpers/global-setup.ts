@@ -19,7 +19,8 @@ export default async function globalSetup() {
     user: process.env.DB_USER ?? 'specbench', password: process.env.DB_PASSWORD ?? 'specbench-local',
   });
   try {
-    const rows: Array<{ name: string }> = await conn.query("SELECT SCHEMA_NAME AS name FROM information_schema.SCHEMATA WHERE SCHEMA_NAME LIKE 'specbench\\_t\\_%'");
+    const prefix = (process.env.TEST_DB_PREFIX ?? 'specbench_t').replace(/[^A-Za-z0-9_]/g, '').replace(/_/g, '\\_');
+    const rows: Array<{ name: string }> = await conn.query(`SELECT SCHEMA_NAME AS name FROM information_schema.SCHEMATA WHERE SCHEMA_NAME LIKE '${prefix}\\_%'`);
     for (const r of rows) await conn.query(`DROP DATABASE \`${r.name}\``);
   } finally {
     await conn.end();

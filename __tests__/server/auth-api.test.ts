@@ -111,17 +111,30 @@ describe('bearer tokens', () => {
 });
 
 describe('refresh tokens', () => {
+  const cookieOf = (res: request.Response) => [res.headers['set-cookie']].flat().find((c) => c?.startsWith('sb_refresh='))!.split(';')[0];
+  const ageReplacement = (cookie: string) => AppDataSource.query(
+    'UPDATE refresh_tokens SET replaced_at = NOW(3) - INTERVAL 1 MINUTE WHERE token_hash = ?', [sha256Hex(cookie.slice('sb_refresh='.length))]);
+
   it('rotate on every refresh; reusing an old one closes the whole family', async () => {
     const { cookie: first } = await signIn(await signUpAndVerify());
     const r1 = await request(app).post('/api/auth/refresh').set('Cookie', first).expect(200);
-    const second = [r1.headers['set-cookie']].flat().find((c) => c?.startsWith('sb_refresh='))!.split(';')[0];
+    const second = cookieOf(r1);
     expect(second).not.toBe(first);
     expect(r1.body.accessToken).toEqual(expect.any(String));
+    await ageReplacement(first);
     const reuse = await request(app).post('/api/auth/refresh').set('Cookie', first);
     expect(reuse.status).toBe(401);
     expect(reuse.body.code).toBe('session_reused');
     // The legitimate newest token is revoked with its family.
     expect((await request(app).post('/api/auth/refresh').set('Cookie', second)).status).toBe(401);
+  });
+
+  it('a token replaced seconds ago (a reload cut off the answer) still refreshes, within the same family', async () => {
+    const { cookie: first } = await signIn(await signUpAndVerify());
+    const second = cookieOf(await request(app).post('/api/auth/refresh').set('Cookie', first).expect(200));
+    const again = await request(app).post('/api/auth/refresh').set('Cookie', first).expect(200);
+    expect(cookieOf(again)).not.toBe(second);
+    await request(app).post('/api/auth/refresh').set('Cookie', second).expect(200);
   });
 
   it('sign-out revokes the session', async () => {

@@ -2,6 +2,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { Calculator } from '../../components/calculator/calculator';
 import { Citation } from '../../components/library/citation';
+import { ProposeLinks } from '../../components/corrections/propose-links';
 import { modelTitle } from '../../components/library/model-title';
 import { RevisionList } from '../../components/library/revision-list';
 import { SafetyNotes } from '../../components/library/safety-notes';
@@ -37,6 +38,7 @@ export default function SpecCardScreen() {
     <>
       <Citation spec={s} />
       <RevisionList revisions={s.revisions} />
+      <ProposeLinks specId={s.id} />
     </>
   );
   return (

@@ -5,6 +5,7 @@ import { useMeterMemory } from '../../lib/hooks/use-meter-memory';
 import { unitsOfKind, type QuantityKind } from '../../lib/units';
 import type { SpecLimits } from '../../lib/verdict';
 import { Spacing } from '../../lib/theme';
+import { AddToJob } from '../jobs/add-to-job';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { QuantityField } from './quantity-field';
@@ -29,7 +30,7 @@ export function Calculator({ spec, kind, testID = 'calculator' }: CalculatorProp
     setForm(next);
     if (['lead', 'meterPercent', 'meterCounts', 'meterCountValue'].some((k) => k in patch)) remember(pickMeter(next));
   };
-  const { result, errors } = calculate(spec, kind, form);
+  const { input, result, errors } = calculate(spec, kind, form);
   const field = (name: keyof CalculatorForm, label: string, unitKey?: keyof CalculatorForm, hint?: string) => (
     <QuantityField
       label={label} value={form[name]} onChangeText={(v) => set({ [name]: v })} error={errors[name]} hint={hint}
@@ -54,6 +55,7 @@ export function Calculator({ spec, kind, testID = 'calculator' }: CalculatorProp
       </View>
       {field('meterCountValue', 'One count is worth', 'meterUnit', 'The last digit on the range used, e.g. 0.1 Ω')}
       {result ? <VerdictPanel result={result} /> : <Text color="textMuted">Type the meter reading to see the verdict.</Text>}
+      <AddToJob input={input} result={result} />
     </Card>
   );
 }

@@ -20,6 +20,7 @@ export function UnitPicker({ label, units, value, onChange }: UnitPickerProps) {
             accessibilityRole="radio"
             accessibilityLabel={`${label}: ${u}`}
             accessibilityState={{ checked: selected }}
+              aria-checked={selected}
             onPress={() => onChange(u)}
             style={[styles.option, { backgroundColor: selected ? t.primary : t.surface }]}
           >

@@ -21,6 +21,7 @@ export function Button({ label, variant = 'primary', disabled, style, ...rest }:
       accessibilityRole="button"
       accessibilityLabel={label}
       accessibilityState={{ disabled: !!disabled }}
+      aria-disabled={!!disabled}
       disabled={disabled}
       style={(state) => [
         styles.base,

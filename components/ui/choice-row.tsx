@@ -20,6 +20,7 @@ export function ChoiceRow<T>({ label, options, value, onChange }: ChoiceRowProps
               accessibilityRole="radio"
               accessibilityLabel={`${label}: ${o.label}`}
               accessibilityState={{ checked: selected }}
+              aria-checked={selected}
               onPress={() => onChange(o.value)}
               style={[styles.option, { borderColor: selected ? t.primary : t.border, backgroundColor: selected ? t.primary : t.surface }]}
             >

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
 import { Radius, Spacing, Type } from '../../lib/theme';
 import { useTheme } from '../../lib/theme/use-theme';
@@ -11,8 +12,9 @@ export type TextFieldProps = TextInputProps & {
   hint?: string;
 };
 
-export function TextField({ label, hideLabel, error, hint, style, ...rest }: TextFieldProps) {
+export function TextField({ label, hideLabel, error, hint, style, onFocus, onBlur, ...rest }: TextFieldProps) {
   const t = useTheme();
+  const [focused, setFocused] = useState(false);
   return (
     <View style={styles.wrap}>
       {!hideLabel && <Text variant="label" color="textMuted">{label}</Text>}
@@ -21,7 +23,9 @@ export function TextField({ label, hideLabel, error, hint, style, ...rest }: Tex
         aria-label={label}
         aria-invalid={!!error}
         placeholderTextColor={t.textMuted}
-        style={[styles.input, { color: t.text, backgroundColor: t.surface, borderColor: error ? t.fail : t.border }, style]}
+        style={[styles.input, { color: t.text, backgroundColor: t.surface, borderColor: error ? t.fail : focused ? t.focus : t.border }, focused && styles.focused, style]}
+        onFocus={(e) => { setFocused(true); onFocus?.(e); }}
+        onBlur={(e) => { setFocused(false); onBlur?.(e); }}
         {...rest}
       />
       {hint && !error ? <Text variant="small" color="textMuted">{hint}</Text> : null}
@@ -39,4 +43,6 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     borderRadius: Radius.md,
   },
+  // The theme's focus ring replaces the browser's default outline.
+  focused: { borderWidth: 2, outlineStyle: 'none' } as object,
 });

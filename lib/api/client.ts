@@ -55,3 +55,17 @@ export function query(params: Record<string, string | number | undefined | null>
   const s = q.toString();
   return s ? `?${s}` : '';
 }
+
+/**
+ * Like apiFetch, for a file the server sends (the job CSV): the same base URL, bearer
+ * token and ApiError on failure, but the body comes back as a Blob, not JSON.
+ */
+export async function apiFetchBlob(path: string, accept: string): Promise<Blob> {
+  const headers = new Headers({ Accept: `${accept}, application/problem+json` });
+  if (accessToken) headers.set('Authorization', `Bearer ${accessToken}`);
+  const res = await fetch(`${BASE_URL}${path}`, { headers, credentials: 'include' });
+  if (res.ok) return res.blob();
+  if (res.status === 401 && accessToken) onUnauthorized?.();
+  const p = (await res.json().catch(() => ({}))) as { code?: string; detail?: string; errors?: FieldError[] };
+  throw new ApiError(res.status, p.code ?? 'http_error', p.detail ?? `The server answered ${res.status}.`, p.errors ?? [], p as Record<string, unknown>);
+}

@@ -16,8 +16,9 @@ import { EmailToken } from '../modules/auth/email-token.entity';
 import { OutboxMessage } from '../modules/mail/outbox-message.entity';
 import { Job } from '../modules/jobs/job.entity';
 import { Reading } from '../modules/jobs/reading.entity';
+import { Correction } from '../modules/corrections/correction.entity';
 
-export const ENTITIES = [Make, VehicleModel, Component, Source, Spec, SpecRevision, ImportBatch, User, UserAudit, RefreshToken, EmailToken, OutboxMessage, Job, Reading];
+export const ENTITIES = [Make, VehicleModel, Component, Source, Spec, SpecRevision, ImportBatch, User, UserAudit, RefreshToken, EmailToken, OutboxMessage, Job, Reading, Correction];
 
 export function dataSourceOptions(database = config.DB_NAME): DataSourceOptions {
   return {

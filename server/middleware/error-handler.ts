@@ -11,13 +11,14 @@ type Problem = { status: number; code: string; detail: string; [key: string]: un
 
 export function sendProblem(res: Parameters<RequestHandler>[1], problem: Problem) {
   const { status, code, detail, ...extras } = problem;
+  // Extras come first so they can never overwrite the standard members.
   res.status(status).type('application/problem+json').json({
+    ...extras,
     type: `https://specbench.example/problems/${code}`,
     title: TITLES[status] ?? 'Error',
     status,
     detail,
     code,
-    ...extras,
   });
 }
 

@@ -28,6 +28,9 @@ export async function revokeAllFor(m: EntityManager, userId: number) {
  * Exchanges a refresh token for a new one in the same family. A token that was already
  * replaced is a stolen copy (or a replay): the whole family is revoked.
  */
+/** How long a just-replaced refresh token may still be presented without counting as theft. */
+export const REUSE_GRACE_MS = 15_000;
+
 export type Rotation = { ok: true; userId: number; token: string } | { ok: false; error: AppError };
 
 /** Returns instead of throwing, so a revocation commits before the caller answers 401. */
@@ -37,6 +40,11 @@ export async function rotateRefreshToken(m: EntityManager, token: string): Promi
     .where('r.tokenHash = :h', { h: sha256Hex(token) }).getOne();
   if (!row || row.revokedAt || row.expiresAt.getTime() <= Date.now()) {
     return { ok: false, error: new AppError(401, 'session_ended', 'Your session has ended. Sign in again.') };
+  }
+  // A token replaced moments ago is a benign race (a reload cut off the answer that carried
+  // its successor, or two tabs refreshed at once): rotate again within the family.
+  if (row.replacedAt && Date.now() - row.replacedAt.getTime() <= REUSE_GRACE_MS) {
+    return { ok: true, userId: row.userId, token: await issueRefreshToken(m, row.userId, row.familyId) };
   }
   if (row.replacedAt) {
     await revokeFamily(m, row.familyId);

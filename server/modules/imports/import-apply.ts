@@ -1,135 +1,170 @@
 /**
- * Committing an import plan: one transaction creates the missing makes, models,
- * components and sources, writes every created or updated spec, and appends one
- * revision per changed spec. A spec edited since the plan was made aborts the whole
- * commit with 409, so nothing is applied on top of a change nobody saw.
+ * Committing a staged import (import_batch_rows) inside the caller's transaction, set-based
+ * in MariaDB: a fixed handful of INSERT … SELECT / UPDATE … JOIN statements whatever the
+ * size of the file, so the commit keeps pace with a bulk load and Node's memory stays flat.
+ * It creates the missing makes, models, components and sources (found by natural key,
+ * each looked up once through the batch's own numbering, see import-stage.ts), writes every
+ * created or updated spec, and appends one revision per changed spec. A spec changed (or
+ * created) by someone else since the preview aborts the whole commit with 409, so nothing
+ * is applied on top of a change nobody saw.
  */
-import type { EntityManager } from 'typeorm';
-import { In } from 'typeorm';
-import type { SpecCsvRow } from '../../../lib/csv';
-import { unitKind, type CanonicalUnit } from '../../../lib/units';
+import type { EntityManager as EM } from 'typeorm';
+type EntityManager = Pick<EM, 'query'>;
+const traced = (m0: EM): EntityManager => ({ query: (async (q: string, p: unknown[]) => { const t = Date.now(); const r = await m0.query(q, p); if (process.env.BENCH_TRACE) console.log('   ', q.replace(/\s+/g, ' ').slice(0, 50), Date.now() - t); return r; }) as EM['query'] });
 import { AppError } from '../../errors/app-error';
-import { Make } from '../library/make.entity';
-import { VehicleModel } from '../library/vehicle-model.entity';
-import { Component } from '../library/component.entity';
-import { Source } from '../library/source.entity';
-import { Spec } from '../specs/spec.entity';
-import { SpecRevision } from '../specs/spec-revision.entity';
-import { foldKey, makeKey, modelKey, sourceKey } from '../library/keys';
-import type { PlannedRow } from './import-plan';
+import type { Actor } from '../../auth/actor';
+import { FIRST } from './import-stage';
 
-export type { Actor } from "../../auth/actor";
-import type { Actor } from "../../auth/actor";
-const CHUNK = 500;
+export type { Actor } from '../../auth/actor';
 
-async function chunked<T>(items: T[], fn: (chunk: T[]) => Promise<unknown>) {
-  for (let i = 0; i < items.length; i += CHUNK) await fn(items.slice(i, i + CHUNK));
+const STAGED = 'import_batch_rows st';
+/** The staged rows read through (batch_id, firsts): the library steps need only each key's first row. */
+const FIRSTS = 'import_batch_rows st FORCE INDEX (idx_import_batch_rows_firsts)';
+const CREATED = "st.batch_id = ? AND st.action = 'create'";
+/** `firsts` values with the bit set, so the index (batch_id, firsts) reads only those rows, not the whole batch. */
+const firstOf = (bit: number) => `st.firsts IN (${Array.from({ length: 16 }, (_, v) => v).filter((v) => v & bit).join(', ')})`;
+/** A key that MariaDB's collation finds equal to one already inserted this statement is the same row. */
+const sameRow = (table: string) => `ON DUPLICATE KEY UPDATE ${table}.id = ${table}.id`;
+/** Batch number → library id, per connection, for this commit only. */
+const MAPS = ['import_model_ids', 'import_component_ids', 'import_source_ids'];
+
+const stale = (detail: string, extras: Record<string, unknown> = {}) =>
+  AppError.conflict(`${detail} Upload the file again to see a fresh preview.`, extras);
+
+/** Updated and unchanged rows were planned against a spec version; it must not have moved. */
+async function checkNotStale(m: EntityManager, batchId: number) {
+  const [moved] = await m.query(
+    `SELECT st.line, st.spec_id AS specId FROM ${STAGED} LEFT JOIN specs s ON s.id = st.spec_id
+      WHERE st.batch_id = ? AND st.action IN ('update', 'unchanged') AND (s.id IS NULL OR s.version <> st.base_version)
+      ORDER BY st.line LIMIT 1`, [batchId]);
+  if (moved) throw stale(`The spec on line ${moved.line} was changed by someone else after this preview.`, { line: moved.line, specId: moved.specId });
 }
 
-/** Finds or inserts rows by natural key; returns key → id. */
-async function ensure<E extends { id: number }>(
-  m: EntityManager, entity: new () => E, keyColumn: keyof E & string,
-  wanted: Map<string, Partial<E>>,
-): Promise<Map<string, number>> {
-  const ids = new Map<string, number>();
-  const keys = [...wanted.keys()];
-  await chunked(keys, async (chunk) => {
-    const found = await m.getRepository(entity).find({ where: { [keyColumn]: In(chunk) } as never });
-    for (const e of found) ids.set(e[keyColumn] as unknown as string, e.id);
-  });
-  const missing = keys.filter((k) => !ids.has(k)).map((k) => wanted.get(k)!);
-  await chunked(missing, async (chunk) => {
-    const result = await m.getRepository(entity).insert(chunk as never);
-    chunk.forEach((e, i) => ids.set(e[keyColumn] as unknown as string, result.identifiers[i].id));
-  });
-  return ids;
+async function dropMaps(m: EntityManager) {
+  await m.query(`DROP TEMPORARY TABLE IF EXISTS ${MAPS.join(', ')}`);
 }
 
-async function ensureLibrary(m: EntityManager, rows: SpecCsvRow[]) {
-  const makes = new Map(rows.map((r) => [makeKey(r.make), { name: r.make.trim(), nameKey: makeKey(r.make) }]));
-  const makeIds = await ensure(m, Make, 'nameKey', makes);
-  const models = new Map(rows.map((r) => [modelKey(r), {
-    makeId: makeIds.get(makeKey(r.make)), name: r.model.trim(), yearFrom: r.yearFrom, yearTo: r.yearTo,
-    variant: r.variant.trim(), modelKey: modelKey(r),
-  }]));
-  const modelIds = await ensure(m, VehicleModel, 'modelKey', models);
-  const sources = new Map(rows.map((r) => [sourceKey({ title: r.sourceTitle, edition: r.sourceEdition }), {
-    title: r.sourceTitle.trim(), edition: r.sourceEdition.trim(), url: r.sourceUrl, kind: 'service_manual' as const,
-    sourceKey: sourceKey({ title: r.sourceTitle, edition: r.sourceEdition }),
-  }]));
-  const sourceIds = await ensure(m, Source, 'sourceKey', sources);
-  const componentKey = (r: SpecCsvRow) => `${modelIds.get(modelKey(r))}|${foldKey(r.component)}`;
-  const components = new Map(rows.map((r) => [componentKey(r), {
-    modelId: modelIds.get(modelKey(r)), name: r.component.trim(), nameKey: foldKey(r.component), compositeKey: componentKey(r),
-  }]));
-  const componentIds = await ensureComponents(m, components);
-  return {
-    componentId: (r: SpecCsvRow) => componentIds.get(componentKey(r))!,
-    sourceId: (r: SpecCsvRow) => sourceIds.get(sourceKey({ title: r.sourceTitle, edition: r.sourceEdition }))!,
-  };
+/*
+ * Every statement below reads the staged rows first (STRAIGHT_JOIN) and looks the library
+ * up by index from them: left to itself the optimizer may start from a small library table
+ * and scan the whole batch once per row of it.
+ */
+
+/** The highest id, read FOR UPDATE: new rows take the ids above it, and nobody else can meanwhile. */
+async function highestId(m: EntityManager, table: string): Promise<number> {
+  const [{ top }] = await m.query(`SELECT COALESCE(MAX(id), 0) AS top FROM ${table} FOR UPDATE`);
+  return Number(top);
 }
 
-/** Components are keyed by (model, name), which ensure() cannot express as one column. */
-async function ensureComponents(m: EntityManager, wanted: Map<string, { modelId?: number; name: string; nameKey: string }>) {
-  const ids = new Map<string, number>();
-  const modelIds = [...new Set([...wanted.values()].map((c) => c.modelId!))];
-  await chunked(modelIds, async (chunk) => {
-    for (const c of await m.getRepository(Component).find({ where: { modelId: In(chunk) } })) ids.set(`${c.modelId}|${c.nameKey}`, c.id);
-  });
-  const missing = [...wanted.entries()].filter(([k]) => !ids.has(k));
-  await chunked(missing, async (chunk) => {
-    const result = await m.getRepository(Component).insert(chunk.map(([, c]) => ({ modelId: c.modelId, name: c.name, nameKey: c.nameKey })));
-    chunk.forEach(([k], i) => ids.set(k, result.identifiers[i].id));
-  });
-  return ids;
+/**
+ * Models and components: first the batch number → id map (the existing id, or base + number
+ * for a new one), then the new rows with those ids, so each is looked up once.
+ */
+async function ensureModelsAndComponents(m: EntityManager, b: number) {
+  const models = await highestId(m, 'vehicle_models');
+  await m.query(`INSERT INTO import_model_ids SELECT STRAIGHT_JOIN st.model_ord, COALESCE(vm.id, ? + st.model_ord)
+      FROM ${FIRSTS} LEFT JOIN vehicle_models vm ON vm.model_key = st.model_key
+     WHERE ${CREATED} AND ${firstOf(FIRST.model)}`, [models, b]);
+  await m.query(`INSERT INTO vehicle_models (id, make_id, name, year_from, year_to, variant, model_key)
+    SELECT STRAIGHT_JOIN mi.id, mk.id, st.model, st.year_from, st.year_to, st.variant, st.model_key
+      FROM ${FIRSTS} JOIN import_model_ids mi ON mi.ord = st.model_ord JOIN makes mk ON mk.name_key = st.make_key
+     WHERE ${CREATED} AND ${firstOf(FIRST.model)} AND mi.id > ?`, [b, models]);
+  const components = await highestId(m, 'components');
+  await m.query(`INSERT INTO import_component_ids SELECT STRAIGHT_JOIN st.component_ord, COALESCE(c.id, ? + st.component_ord)
+      FROM ${FIRSTS} JOIN import_model_ids mi ON mi.ord = st.model_ord
+      LEFT JOIN components c ON c.model_id = mi.id AND c.name_key = st.component_key
+     WHERE ${CREATED} AND ${firstOf(FIRST.component)}`, [components, b]);
+  await m.query(`INSERT INTO components (id, model_id, name, name_key)
+    SELECT STRAIGHT_JOIN ci.id, mi.id, st.component, st.component_key
+      FROM ${FIRSTS} JOIN import_component_ids ci ON ci.ord = st.component_ord JOIN import_model_ids mi ON mi.ord = st.model_ord
+     WHERE ${CREATED} AND ${firstOf(FIRST.component)} AND ci.id > ?`, [b, components]);
 }
 
-function specValues(row: SpecCsvRow, sourceId: number) {
-  return {
-    parameter: row.parameter.trim(), parameterKey: foldKey(row.parameter), quantityKind: unitKind(row.unit as CanonicalUnit),
-    min: row.min, nominal: row.nominal, max: row.max, unit: row.unit, refTempC: row.refTempC, material: row.material,
-    testPoints: row.testPoints || null, conditions: row.conditions || null, notes: row.notes || null,
-    sourceId, sourcePage: row.sourcePage || null,
-  };
+/** Makes, models, components and sources the batch needs and the library lacks, and their ids by batch number. */
+async function ensureLibrary(m: EntityManager, b: number) {
+  for (const map of MAPS) await m.query(`CREATE TEMPORARY TABLE ${map} (ord int PRIMARY KEY, id int NOT NULL) ENGINE=MEMORY`);
+  await m.query(`INSERT INTO makes (name, name_key) SELECT STRAIGHT_JOIN st.make, st.make_key
+      FROM ${FIRSTS} LEFT JOIN makes mk ON mk.name_key = st.make_key
+     WHERE ${CREATED} AND ${firstOf(FIRST.make)} AND mk.id IS NULL ${sameRow('makes')}`, [b]);
+  await ensureModelsAndComponents(m, b);
+  await m.query(`INSERT INTO sources (title, edition, url, kind, source_key)
+    SELECT STRAIGHT_JOIN st.source_title, st.source_edition, st.source_url, 'service_manual', st.source_key
+      FROM ${FIRSTS} LEFT JOIN sources src ON src.source_key = st.source_key
+     WHERE st.batch_id = ? AND ${firstOf(FIRST.source)} AND src.id IS NULL ${sameRow('sources')}`, [b]);
+  await m.query(`INSERT INTO import_source_ids SELECT STRAIGHT_JOIN st.source_ord, src.id
+      FROM ${FIRSTS} JOIN sources src ON src.source_key = st.source_key
+     WHERE st.batch_id = ? AND ${firstOf(FIRST.source)}`, [b]);
 }
 
-function snapshotOf(row: SpecCsvRow, sourceId: number) {
-  const v = specValues(row, sourceId);
-  return {
-    parameter: v.parameter, min: v.min, nominal: v.nominal, max: v.max, unit: v.unit, refTempC: v.refTempC,
-    material: v.material, testPoints: v.testPoints, conditions: v.conditions, notes: v.notes, sourceId,
-    sourceTitle: row.sourceTitle.trim(), sourceEdition: row.sourceEdition.trim(), sourcePage: v.sourcePage,
-    status: 'published' as const,
-  };
-}
+const isDuplicate = (err: unknown) => (err as { driverError?: { code?: string } }).driverError?.code === 'ER_DUP_ENTRY';
 
-export async function applyImport(
-  m: EntityManager, plan: PlannedRow[], actor: Actor, meta: { batchId: number; reason: string },
-): Promise<{ created: number; updated: number }> {
-  const changed = plan.filter((p) => p.action !== 'unchanged');
-  if (changed.length === 0) return { created: 0, updated: 0 };
-  const lib = await ensureLibrary(m, changed.map((p) => p.row));
-  const revisions: Partial<SpecRevision>[] = [];
-  const revision = (p: PlannedRow, specId: number, version: number, fields: string[]) => revisions.push({
-    specId, version, snapshot: snapshotOf(p.row, lib.sourceId(p.row)), changedFields: fields,
-    authorId: actor.id, authorName: actor.name, reason: meta.reason, origin: 'import', originRef: `batch #${meta.batchId}`,
-  });
-
-  const creates = changed.filter((p) => p.action === 'create');
-  await chunked(creates, async (chunk) => {
-    const result = await m.getRepository(Spec).insert(chunk.map((p) => ({ ...specValues(p.row, lib.sourceId(p.row)), componentId: lib.componentId(p.row), version: 1 })));
-    chunk.forEach((p, i) => revision(p, result.identifiers[i].id, 1, ['created']));
-  });
-  for (const p of changed.filter((c) => c.action === 'update')) {
-    const result = await m.createQueryBuilder().update(Spec)
-      .set({ ...specValues(p.row, lib.sourceId(p.row)), version: () => 'version + 1' })
-      .where('id = :id AND version = :version', { id: p.specId, version: p.baseVersion })
-      .execute();
-    if (result.affected !== 1) {
-      throw AppError.conflict(`The spec on line ${p.line} was changed by someone else after this import was previewed. Preview the file again.`, { line: p.line, specId: p.specId });
-    }
-    revision(p, p.specId!, p.baseVersion! + 1, p.changes.map((c) => c.field));
+/**
+ * Created specs get the ids after the highest one, in file order (id = base + create_ord),
+ * so their revisions need no lookup. Reading the highest id FOR UPDATE locks the end of
+ * the index: another writer's new spec waits for this commit instead of taking an id.
+ */
+async function insertSpecs(m: EntityManager, batchId: number, expected: number): Promise<number> {
+  const base = await highestId(m, 'specs');
+  let result: { affectedRows: number };
+  try {
+    result = await m.query(`INSERT INTO specs (id, component_id, parameter, parameter_key, quantity_kind, min_value, nominal_value,
+        max_value, unit, ref_temp_c, material, test_points, conditions, notes, source_id, source_page, status, version)
+      SELECT STRAIGHT_JOIN ? + st.create_ord, ci.id, st.parameter, st.parameter_key, st.quantity_kind, st.min_value, st.nominal_value, st.max_value,
+             st.unit, st.ref_temp_c, st.material, st.test_points, st.conditions, st.notes, si.id, st.source_page, 'published', 1
+        FROM ${STAGED} JOIN import_component_ids ci ON ci.ord = st.component_ord JOIN import_source_ids si ON si.ord = st.source_ord
+       WHERE ${CREATED}`, [base, batchId]);
+  } catch (err) {
+    if (isDuplicate(err)) throw stale('A spec this file would create was created by someone else after this preview.');
+    throw err;
   }
-  await chunked(revisions, (chunk) => m.getRepository(SpecRevision).insert(chunk));
-  return { created: creates.length, updated: changed.length - creates.length };
+  if (result.affectedRows !== expected) throw stale('The library changed under this import after the preview.');
+  return base;
+}
+
+/** Each update names the version it was planned on; any other version means a lost update. */
+async function updateSpecs(m: EntityManager, batchId: number, expected: number) {
+  const result = await m.query(`UPDATE ${STAGED} STRAIGHT_JOIN specs s ON s.id = st.spec_id STRAIGHT_JOIN import_source_ids si ON si.ord = st.source_ord
+       SET s.parameter = st.parameter, s.quantity_kind = st.quantity_kind, s.min_value = st.min_value,
+           s.nominal_value = st.nominal_value, s.max_value = st.max_value, s.unit = st.unit, s.ref_temp_c = st.ref_temp_c,
+           s.material = st.material, s.test_points = st.test_points, s.conditions = st.conditions, s.notes = st.notes,
+           s.source_id = si.id, s.source_page = st.source_page, s.version = s.version + 1
+     WHERE st.batch_id = ? AND st.action = 'update' AND s.version = st.base_version`, [batchId]);
+  if (result.affectedRows !== expected) throw stale('A spec this file would update was changed by someone else after this preview.');
+}
+
+const REVISION = 'INSERT INTO spec_revisions (spec_id, version, snapshot, changed_fields, author_id, author_name, reason, origin, origin_ref)';
+/** The staged snapshot head (see import-stage.ts) completed with the source id and the status. */
+const snapshot = (status: string) => `CONCAT(st.snapshot, ',"sourceId":', si.id, ',"status":"', ${status}, '"}')`;
+
+async function insertRevisions(m: EntityManager, batchId: number, base: number, author: unknown[], counts: { created: number; updated: number }) {
+  if (counts.created > 0) {
+    await m.query(`${REVISION} SELECT STRAIGHT_JOIN ? + st.create_ord, 1, ${snapshot("'published'")}, '["created"]', ?, ?, ?, 'import', ?
+        FROM ${STAGED} JOIN import_source_ids si ON si.ord = st.source_ord WHERE ${CREATED}`, [base, ...author, batchId]);
+  }
+  if (counts.updated > 0) {
+    await m.query(`${REVISION} SELECT STRAIGHT_JOIN s.id, s.version, ${snapshot('s.status')}, JSON_EXTRACT(st.changes, '$[*].field'), ?, ?, ?, 'import', ?
+        FROM ${STAGED} JOIN specs s ON s.id = st.spec_id JOIN import_source_ids si ON si.ord = st.source_ord
+       WHERE st.batch_id = ? AND st.action = 'update'`, [...author, batchId]);
+  }
+}
+
+/** Applies a staged batch; the caller holds the transaction and has locked the batch row. */
+export async function applyImport(
+  m0: EM, batchId: number, actor: Actor, reason: string, counts: { created: number; updated: number },
+): Promise<void> {
+  const m = traced(m0);
+  await checkNotStale(m, batchId);
+  if (counts.created + counts.updated === 0) return;
+  await dropMaps(m);
+  try {
+    await ensureLibrary(m, batchId).catch((err) => {
+      if (!isDuplicate(err)) throw err;
+      throw stale('Another import or edit created the same make, model or component meanwhile, or this file spells one of them in two ways the library treats as the same (e.g. with and without accents).');
+    });
+    const base = counts.created > 0 ? await insertSpecs(m, batchId, counts.created) : 0;
+    if (counts.updated > 0) await updateSpecs(m, batchId, counts.updated);
+    await insertRevisions(m, batchId, base, [actor.id, actor.name, reason, `batch #${batchId}`], counts);
+  } finally {
+    await dropMaps(m).catch(() => undefined);
+  }
 }

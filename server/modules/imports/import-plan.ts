@@ -5,7 +5,7 @@
  */
 import type { EntityManager } from 'typeorm';
 import type { SpecCsvRow } from '../../../lib/csv';
-import { Spec } from '../specs/spec.entity';
+import type { Spec } from '../specs/spec.entity';
 import { foldKey, modelKey, sourceKey } from '../library/keys';
 
 export type FieldChange = { field: string; before: string | number | null; after: string | number | null };
@@ -31,7 +31,12 @@ export function rowFields(row: SpecCsvRow): Comparable {
   };
 }
 
-function specFields(spec: Spec): Comparable {
+/** What the plan needs of an existing spec (read with plain SQL: 50 000 entities hydrate slowly). */
+type ExistingSpec = Pick<Spec, 'id' | 'version' | 'min' | 'nominal' | 'max' | 'unit' | 'refTempC' | 'material' | 'testPoints' | 'conditions' | 'notes' | 'sourcePage'> & {
+  source: { title: string; edition: string } | null;
+};
+
+function specFields(spec: ExistingSpec): Comparable {
   return {
     min: spec.min, nominal: spec.nominal, max: spec.max, unit: spec.unit, refTempC: spec.refTempC,
     material: spec.material, testPoints: spec.testPoints, conditions: spec.conditions, notes: spec.notes,
@@ -47,20 +52,33 @@ export function diffFields(before: Comparable, after: Comparable): FieldChange[]
 
 export const specRowKey = (row: SpecCsvRow) => `${modelKey(row)}|${foldKey(row.component)}|${foldKey(row.parameter)}`;
 
-/** Loads the existing specs that the rows name, keyed like specRowKey. */
-async function loadExisting(m: EntityManager, rows: SpecCsvRow[]): Promise<Map<string, Spec>> {
+type ExistingRow = Omit<ExistingSpec, 'source'> & { key: string; sourceTitle: string | null; sourceEdition: string | null };
+
+/** Loads the existing specs of the models the rows name, keyed like specRowKey. */
+async function loadExisting(m: EntityManager, rows: SpecCsvRow[]): Promise<Map<string, ExistingSpec>> {
   const modelKeys = [...new Set(rows.map((r) => modelKey(r)))];
-  const existing = new Map<string, Spec>();
+  const existing = new Map<string, ExistingSpec>();
   for (let i = 0; i < modelKeys.length; i += 500) {
-    const specs = await m.getRepository(Spec).createQueryBuilder('s')
-      .innerJoinAndSelect('s.component', 'c')
-      .innerJoinAndSelect('c.model', 'vm')
-      .leftJoinAndSelect('s.source', 'src')
-      .where('vm.modelKey IN (:...keys)', { keys: modelKeys.slice(i, i + 500) })
-      .getMany();
-    for (const s of specs) existing.set(`${s.component.model.modelKey}|${s.component.nameKey}|${s.parameterKey}`, s);
+    const found: ExistingRow[] = await m.query(
+      `SELECT s.id, s.version, s.min_value AS min, s.nominal_value AS nominal, s.max_value AS max, s.unit, s.ref_temp_c AS refTempC,
+              s.material, s.test_points AS testPoints, s.conditions, s.notes, s.source_page AS sourcePage,
+              src.title AS sourceTitle, src.edition AS sourceEdition, CONCAT(vm.model_key, '|', c.name_key, '|', s.parameter_key) AS \`key\`
+         FROM vehicle_models vm JOIN components c ON c.model_id = vm.id JOIN specs s ON s.component_id = c.id
+         LEFT JOIN sources src ON src.id = s.source_id
+        WHERE vm.model_key IN (?)`, [modelKeys.slice(i, i + 500)]);
+    for (const { key, sourceTitle, sourceEdition, ...spec } of found) {
+      existing.set(key, { ...spec, source: sourceTitle === null ? null : { title: sourceTitle, edition: sourceEdition ?? '' } });
+    }
   }
   return existing;
+}
+
+/** Sources compare by natural key (case and spacing ignored) but show as the editor wrote them. */
+const sourceLabel = (s: { title: string; edition: string }) => (s.edition.trim() ? `${s.title.trim()}, ${s.edition.trim()}` : s.title.trim());
+
+function readable(change: FieldChange, spec: ExistingSpec, row: SpecCsvRow): FieldChange {
+  if (change.field !== 'source') return change;
+  return { field: 'source', before: spec.source ? sourceLabel(spec.source) : null, after: sourceLabel({ title: row.sourceTitle, edition: row.sourceEdition }) };
 }
 
 export async function planImport(m: EntityManager, rows: Array<{ line: number; row: SpecCsvRow }>): Promise<PlannedRow[]> {
@@ -68,7 +86,7 @@ export async function planImport(m: EntityManager, rows: Array<{ line: number; r
   return rows.map(({ line, row }) => {
     const spec = existing.get(specRowKey(row));
     if (!spec) return { line, row, action: 'create', specId: null, baseVersion: null, changes: [] };
-    const changes = diffFields(specFields(spec), rowFields(row));
+    const changes = diffFields(specFields(spec), rowFields(row)).map((c) => readable(c, spec, row));
     return { line, row, action: changes.length ? 'update' : 'unchanged', specId: spec.id, baseVersion: spec.version, changes };
   });
 }

@@ -1,43 +1,136 @@
 /**
- * The spec importer: CSV text → validated rows → plan → one transaction. The demo
- * library loader and the editors' upload both come through here.
+ * The spec importer: bytes → text → validated rows → plan → staged batch (the preview) →
+ * one transaction (the commit). Editors upload, look at the preview and commit; the demo
+ * library loader goes through the same steps at once (importCsvNow).
  */
 import { createHash } from 'node:crypto';
-import { validateSpecCsv, type RowProblem } from '../../../lib/csv';
+import type { EntityManager } from 'typeorm';
+import { checkCsvBytes, decodeCsv, validateSpecCsv, type RowProblem, type ValidatedCsv } from '../../../lib/csv';
+import type { ImportBatchSummaryDto, ImportPreviewDto, ImportPreviewQuery } from '../../../lib/contracts/imports';
 import { AppDataSource } from '../../db/data-source';
 import { AppError } from '../../errors/app-error';
+import { markLibraryChanged } from '../search/search.service';
 import { ImportBatch, type ImportCounts } from './import-batch.entity';
-import { planImport } from './import-plan';
+import { planImport, type PlannedRow } from './import-plan';
 import { applyImport, type Actor } from './import-apply';
+import { byLine, stageRows } from './import-stage';
+import { buildPreview, toBatchSummary } from './import-preview';
 
 export type ImportSummary = { batchId: number | null; counts: ImportCounts; rejected: RowProblem[] };
+export type Upload = { fileName: string; bytes: Uint8Array };
 
-export const sha256 = (text: string) => createHash('sha256').update(text, 'utf8').digest('hex');
+export const sha256 = (data: string | Uint8Array) => createHash('sha256').update(data).digest('hex');
+const FIRST_PAGE: ImportPreviewQuery = { offset: 0, limit: 1000 };
+
+/** `line 3, column min`: where a problem is, as the 422 `errors[].path` says it. */
+export const problemPath = (p: RowProblem) => `line ${p.line}${p.column ? `, column ${p.column}` : ''}`;
+
+/** Bytes → validated rows; file-level problems (encoding, header, quotes, no rows) in fileErrors. */
+export function validateUpload(bytes: Uint8Array): ValidatedCsv {
+  const encoding = checkCsvBytes(bytes);
+  if (encoding) return { accepted: [], rejected: [], fileErrors: [encoding] };
+  return validateSpecCsv(decodeCsv(bytes));
+}
+
+function countsOf(plan: PlannedRow[], checked: ValidatedCsv): ImportCounts {
+  const n = (action: PlannedRow['action']) => plan.filter((p) => p.action === action).length;
+  return {
+    created: n('create'), updated: n('update'), unchanged: n('unchanged'),
+    rejected: new Set(checked.rejected.map((r) => r.line)).size,
+    warnings: checked.accepted.reduce((sum, a) => sum + a.warnings.length, 0),
+  };
+}
+
+/** Stores the planned rows with a new batch, inside the caller's transaction. */
+async function stageBatch(m: EntityManager, checked: ValidatedCsv, plan: PlannedRow[], fields: Partial<ImportBatch>): Promise<ImportBatch> {
+  const batch = await m.getRepository(ImportBatch).save({ ...fields, counts: countsOf(plan, checked), rowErrors: [], status: 'previewed' as const });
+  const warnings = new Map(checked.accepted.map((a) => [a.line, a.warnings]));
+  await stageRows(m, batch.id, plan, warnings, byLine(checked.rejected));
+  return batch;
+}
+
+const uploaderOf = (upload: Upload, actor: Actor) => ({
+  fileName: upload.fileName.slice(0, 255), sha256: sha256(upload.bytes), fileSize: upload.bytes.byteLength,
+  uploaderId: actor.id, uploaderName: actor.name,
+});
+
+/** Problems kept and answered for a file that cannot be read (one per line at most; the first ones say enough). */
+const MAX_FILE_ERRORS = 200;
+
+/** A file that cannot be previewed leaves a failed batch (for the record) and answers 422. */
+async function rejectFile(upload: Upload, actor: Actor, fileErrors: RowProblem[]): Promise<never> {
+  const kept = fileErrors.slice(0, MAX_FILE_ERRORS);
+  const batch = await AppDataSource.getRepository(ImportBatch).save({
+    ...uploaderOf(upload, actor), counts: { created: 0, updated: 0, unchanged: 0, rejected: 0, warnings: 0 },
+    rowErrors: kept, status: 'failed',
+  });
+  const more = fileErrors.length > kept.length ? ` (${fileErrors.length} problems; the first ${kept.length} are listed)` : '';
+  const errors = kept.map((e) => ({ path: problemPath(e), message: e.reason }));
+  throw new AppError(422, 'unprocessable', `${upload.fileName} cannot be imported: ${fileErrors[0].reason}${more}.`, { errors, batchId: batch.id });
+}
+
+/** Upload → preview. Nothing is written but the batch and its staged rows. */
+export async function previewImport(upload: Upload, actor: Actor, page = FIRST_PAGE): Promise<ImportPreviewDto> {
+  return previewValidated(upload, validateUpload(upload.bytes), actor, page);
+}
+
+/** The preview of an upload already validated (the benchmark times the two steps apart). */
+export async function previewValidated(upload: Upload, checked: ValidatedCsv, actor: Actor, page = FIRST_PAGE): Promise<ImportPreviewDto> {
+  if (checked.fileErrors.length) return rejectFile(upload, actor, checked.fileErrors);
+  const batch = await AppDataSource.transaction(async (m) => stageBatch(m, checked, await planImport(m, checked.accepted), uploaderOf(upload, actor)));
+  return buildPreview(AppDataSource.manager, batch, page);
+}
+
+export async function getImportPreview(id: number, page: ImportPreviewQuery): Promise<ImportPreviewDto> {
+  const batch = await AppDataSource.getRepository(ImportBatch).findOneBy({ id });
+  if (!batch) throw AppError.notFound('import', id);
+  return buildPreview(AppDataSource.manager, batch, page);
+}
+
+export async function listImports(limit: number): Promise<ImportBatchSummaryDto[]> {
+  const batches = await AppDataSource.getRepository(ImportBatch).find({ order: { createdAt: 'DESC', id: 'DESC' }, take: limit });
+  return batches.map(toBatchSummary);
+}
+
+async function commitLocked(m: EntityManager, id: number, actor: Actor, reason: string | undefined): Promise<ImportBatch> {
+  const batch = await m.getRepository(ImportBatch).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+  if (!batch) throw AppError.notFound('import', id);
+  if (batch.status === 'committed') {
+    throw AppError.conflict(`Import #${id} was already committed${batch.committedByName ? ` by ${batch.committedByName}` : ''}; a batch commits once.`, { batch: toBatchSummary(batch) });
+  }
+  if (batch.status === 'failed') throw AppError.unprocessable(`Import #${id} failed validation, so there is nothing to commit. Fix the file and upload it again.`);
+  batch.reason = reason ?? `CSV import of ${batch.fileName}`;
+  await applyImport(m, id, actor, batch.reason, batch.counts);
+  Object.assign(batch, { status: 'committed', committedAt: new Date(), committedById: actor.id, committedByName: actor.name });
+  return m.getRepository(ImportBatch).save(batch);
+}
+
+/** Writes every accepted row and one revision per changed spec, in one transaction, once. */
+export async function commitImport(id: number, actor: Actor, reason?: string): Promise<ImportBatchSummaryDto> {
+  const batch = await AppDataSource.transaction((m) => commitLocked(m, id, actor, reason));
+  if (batch.counts.created + batch.counts.updated > 0) markLibraryChanged();
+  return toBatchSummary(batch);
+}
 
 /**
- * Validates and commits a whole file at once (no preview): rows that fail validation
- * are reported and skipped; the rest go in one transaction. A file that changes
- * nothing leaves no trace, so loading the same file twice is a no-op.
+ * Validates and commits a whole file at once (no preview): rows that fail validation are
+ * reported and skipped; the rest go in one transaction. A file that changes nothing leaves
+ * no trace, so loading the same file twice is a no-op.
  */
 export async function importCsvNow(text: string, fileName: string, actor: Actor, reason: string): Promise<ImportSummary> {
   const checked = validateSpecCsv(text);
   if (checked.fileErrors.length) {
-    throw AppError.unprocessable(`${fileName}: ${checked.fileErrors[0].reason}`, checked.fileErrors.map((e) => ({ path: `line ${e.line}${e.column ? `, ${e.column}` : ''}`, message: e.reason })));
+    throw AppError.unprocessable(`${fileName}: ${checked.fileErrors[0].reason}`, checked.fileErrors.map((e) => ({ path: problemPath(e), message: e.reason })));
   }
-  return AppDataSource.transaction(async (m) => {
+  const summary = await AppDataSource.transaction(async (m): Promise<ImportSummary> => {
     const plan = await planImport(m, checked.accepted);
-    const counts: ImportCounts = {
-      created: plan.filter((p) => p.action === 'create').length,
-      updated: plan.filter((p) => p.action === 'update').length,
-      unchanged: plan.filter((p) => p.action === 'unchanged').length,
-      rejected: checked.rejected.length,
-    };
+    const counts = countsOf(plan, checked);
     if (counts.created + counts.updated === 0) return { batchId: null, counts, rejected: checked.rejected };
-    const batch = await m.getRepository(ImportBatch).save({
-      fileName, sha256: sha256(text), uploaderId: actor.id, uploaderName: actor.name, counts,
-      rowErrors: checked.rejected, status: 'committed', committedAt: new Date(),
-    });
-    await applyImport(m, plan, actor, { batchId: batch.id, reason });
+    const batch = await stageBatch(m, checked, plan, { ...uploaderOf({ fileName, bytes: Buffer.from(text, 'utf8') }, actor), reason });
+    await applyImport(m, batch.id, actor, reason, counts);
+    await m.getRepository(ImportBatch).update(batch.id, { status: 'committed', committedAt: new Date(), committedById: actor.id, committedByName: actor.name });
     return { batchId: batch.id, counts, rejected: checked.rejected };
   });
+  if (summary.batchId !== null) markLibraryChanged();
+  return summary;
 }

@@ -61,7 +61,7 @@ export class Spec {
   @JoinColumn({ name: 'source_id' })
   source: Source | null;
 
-  @Column({ name: 'source_page', type: 'varchar', length: 40, nullable: true })
+  @Column({ name: 'source_page', type: 'varchar', length: 200, nullable: true })
   sourcePage: string | null;
 
   @Column({ type: 'enum', enum: ['published', 'draft'], default: 'published' })

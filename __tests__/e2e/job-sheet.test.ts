@@ -1,0 +1,204 @@
+import fs from 'node:fs';
+import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
+import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
+import { useTestDatabase } from '../helpers/test-db';
+import { AppDataSource } from '../../server/db/data-source';
+import { signAccessToken } from '../../server/auth/tokens';
+import { hashPassword } from '../../server/modules/auth/passwords';
+import { User } from '../../server/modules/users/user.entity';
+import { emailKey } from '../../server/modules/users/user.mapper';
+import type { JobDetailDto } from '../../lib/contracts/jobs';
+
+useTestDatabase();
+let web: Awaited<ReturnType<typeof startWebServer>>;
+let browser: Browser;
+
+beforeAll(async () => {
+  web = await startWebServer();
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+  await web?.close();
+});
+
+const EMAIL = 'tech.jobsheet@test.specbench.example';
+const PASSWORD = 'coil-and-stator-on-the-bench';
+
+async function technician(): Promise<User> {
+  const repo = AppDataSource.getRepository(User);
+  const found = await repo.findOneBy({ emailKey: emailKey(EMAIL) });
+  if (found) return found;
+  return repo.save({ email: EMAIL, emailKey: emailKey(EMAIL), displayName: 'Dana Wrench', passwordHash: await hashPassword(PASSWORD), role: 'contributor', emailVerifiedAt: new Date() });
+}
+
+type SpecRow = { id: number; componentId: number; modelId: number; parameter: string; min: number; max: number };
+/** A spec of the demo Kestrel 900 Trail (2016–2021), chosen by component and parameter. */
+async function kestrelSpec(component: string, parameter: string): Promise<SpecRow> {
+  const [row] = await AppDataSource.query(
+    `SELECT s.id, s.component_id AS componentId, c.model_id AS modelId, s.parameter, s.min_value AS min, s.max_value AS max
+       FROM specs s JOIN components c ON c.id = s.component_id JOIN vehicle_models vm ON vm.id = c.model_id JOIN makes mk ON mk.id = vm.make_id
+      WHERE mk.name = 'Kestrel Moto' AND vm.name = '900 Trail' AND vm.year_from = 2016 AND c.name = ? AND s.parameter = ?`, [component, parameter]);
+  expect(row).toBeDefined();
+  return row as SpecRow;
+}
+
+async function signIn(page: Page) {
+  await page.goto(`${web.url}/sign-in`);
+  const form = page.getByTestId('sign-in-form');
+  await form.getByLabel('E-mail address', { exact: true }).fill(EMAIL);
+  await form.getByLabel('Password', { exact: true }).fill(PASSWORD);
+  await form.getByTestId('sign-in-submit').click();
+  await page.getByTestId('search-screen').waitFor();
+  await expect(page.getByTestId('header-account').first().innerText()).resolves.toBe('Dana Wrench');
+}
+
+/**
+ * Presses a button from the keyboard. On the spec card at phone size the reference column
+ * (source, history) is laid over the lower part of a long calculator: both columns have
+ * flex 1 (basis 0) in a vertical stack, so they get equal heights (app/specs/[specId].tsx,
+ * reported). A pointer click there lands on the overlay; Enter reaches the button.
+ */
+async function activate(button: Locator) {
+  await button.scrollIntoViewIfNeeded();
+  await button.press('Enter');
+}
+
+/** Types a reading into the spec card's calculator and adds it to the job through the "Add to job" panel. */
+async function takeReading(page: Page, value: number, verdictWord: string) {
+  const calc = page.getByTestId('spec-screen').getByTestId('calculator');
+  await calc.getByLabel('Meter reading', { exact: true }).fill(String(value));
+  await expect(calc.getByTestId('verdict-word').innerText()).resolves.toBe(verdictWord);
+  await activate(calc.getByTestId('add-to-job-button'));
+  return calc.getByTestId('add-to-job-outcome');
+}
+
+it('a technician keeps readings on a job sheet, offline too, and prints the report', async () => {
+  const user = await technician();
+  const primary = await kestrelSpec('ignition coil (rear)', 'primary winding resistance');
+  const pickup = await kestrelSpec('pickup coil', 'pickup coil resistance');
+  const stator = await kestrelSpec('stator', 'stator winding resistance');
+  const context: BrowserContext = await browser.newContext({ viewport: PHONE, acceptDownloads: true });
+  const page = await context.newPage();
+  await signIn(page);
+
+  // Open a job: My jobs → New job → the model from the library, VIN, customer, notes.
+  await page.getByTestId('home-my-jobs').click();
+  await page.getByTestId('jobs-screen').getByTestId('new-job').click();
+  const form = page.getByTestId('new-job-form');
+  await form.getByLabel('Find the model', { exact: true }).fill('kestrel 900');
+  await form.getByRole('radio', { name: /^Model: Kestrel Moto 900 Trail \(2016–2021/ }).click();
+  await form.getByLabel('VIN or frame number', { exact: true }).fill('ZKM900T-16-004211');
+  await form.getByLabel('Customer reference', { exact: true }).fill('WO-2231');
+  await form.getByLabel('Notes', { exact: true }).fill('Misfires when hot; customer reports hard starting.');
+  await form.getByTestId('create-job').click();
+  await page.getByTestId('job-sheet').getByTestId('job-summary').waitFor();
+  const jobId = Number(new URL(page.url()).pathname.split('/').pop());
+  expect(jobId).toBeGreaterThan(0);
+  await expect(page.getByTestId('verdict-counts').innerText()).resolves.toMatch(/No readings yet/);
+
+  // 1. Pass, mid-band: from the model sheet to the spec card, picking the job from the list.
+  await page.getByTestId('job-open-model').click();
+  await page.getByTestId(`component-${primary.componentId}`).getByRole('link', { name: /^primary winding resistance:/ }).click();
+  await page.getByTestId('spec-screen').getByTestId('calculator').waitFor();
+  const calc = page.getByTestId('spec-screen').getByTestId('calculator');
+  await calc.getByLabel('Meter reading', { exact: true }).fill(String((primary.min + primary.max) / 2));
+  await expect(calc.getByTestId('verdict-word').innerText()).resolves.toBe('PASS');
+  await activate(calc.getByTestId('add-to-job-button'));
+  await activate(calc.getByTestId(`pick-job-${jobId}`));
+  await expect(calc.getByTestId('add-to-job-outcome').innerText()).resolves.toBe(`Added to job #${jobId}`);
+
+  // 2. Marginal, exactly on the upper limit without meter accuracy; 3. fail, four times the maximum.
+  for (const [spec, value, word] of [[pickup, pickup.max, 'MARGINAL'], [stator, stator.max * 4, 'FAIL']] as const) {
+    await page.goto(`${web.url}/specs/${spec.id}?job=${jobId}`);
+    await page.getByTestId('spec-screen').getByTestId('calculator').waitFor();
+    const outcome = await takeReading(page, value, word);
+    await expect(outcome.innerText()).resolves.toBe(`Added to job #${jobId}`);
+  }
+
+  await page.goto(`${web.url}/jobs/${jobId}`);
+  const sheet = page.getByTestId('job-sheet');
+  await expect(sheet.getByTestId('verdict-counts').innerText()).resolves.toMatch(/1 pass · 1 marginal · 1 fail/);
+  await expect(sheet.locator('[data-testid^="job-reading-"]').count()).resolves.toBe(3);
+
+  // 4. Offline: re-take the failed stator reading; it waits on the device, marked as waiting.
+  const [failed] = await AppDataSource.query("SELECT id FROM readings WHERE job_id = ? AND verdict = 'fail'", [jobId]);
+  await sheet.getByTestId(`job-reading-${failed.id}`).getByTestId('reading-retake').click();
+  await page.getByTestId('spec-screen').getByTestId('calculator').waitFor();
+  await context.setOffline(true);
+  const queued = await takeReading(page, (stator.min + stator.max) / 2, 'PASS');
+  await expect(queued.innerText()).resolves.toBe('Queued — will send when online');
+  await activate(page.getByTestId('spec-screen').getByTestId('add-to-job-open'));
+  await sheet.getByTestId('queue-waiting').waitFor();
+  await expect(sheet.getByTestId('queue-waiting').innerText()).resolves.toMatch(/1 reading waiting to be sent — it will go when the connection returns/);
+  await expect(sheet.getByTestId('pending-reading').innerText()).resolves.toMatch(/Waiting to be sent/);
+  await expect(sheet.locator('[data-testid^="job-reading-"]').count()).resolves.toBe(3);
+  await screenshot(page, 'job-sheet-offline-phone');
+
+  // Back online: the queue flushes by itself; all four readings, each exactly once, the fail struck through.
+  await context.setOffline(false);
+  await sheet.getByTestId('pending-reading').waitFor({ state: 'detached', timeout: 30_000 });
+  await sheet.locator('[data-testid^="job-reading-"]').nth(3).waitFor({ timeout: 15_000 });
+  await expect(sheet.locator('[data-testid^="job-reading-"]').count()).resolves.toBe(4);
+  await expect(sheet.getByTestId('queue-waiting').count()).resolves.toBe(0);
+  await expect(sheet.getByTestId('verdict-counts').innerText()).resolves.toMatch(/2 pass · 1 marginal · 0 fail/);
+  await expect(sheet.getByTestId(`job-reading-${failed.id}`).getByTestId('reading-retaken').innerText()).resolves.toBe('re-taken');
+  const res = await fetch(`${web.url}/api/jobs/${jobId}`, { headers: { Authorization: `Bearer ${signAccessToken(user)}` } });
+  const job = (await res.json()) as JobDetailDto;
+  expect(job.readings.map((r) => r.verdict)).toEqual(['pass', 'marginal', 'fail', 'pass']);
+  expect(new Set(job.readings.map((r) => r.idempotencyKey)).size).toBe(4);
+  expect(job.readings[2].supersededBy).toBe(job.readings[3].id);
+  await screenshot(page, 'job-sheet-phone');
+
+  // The CSV comes down with the session's token.
+  const [download] = await Promise.all([page.waitForEvent('download'), sheet.getByTestId('job-csv').click()]);
+  expect(download.suggestedFilename()).toBe(`job-${jobId}-readings.csv`);
+  const csv = fs.readFileSync((await download.path())!, 'utf8').trim().split(/\r\n/);
+  expect(csv).toHaveLength(5);
+
+  // The printable report: header, notes, counts, every reading with its source and working, the liability note.
+  await sheet.getByTestId('job-report-link').click();
+  const report = page.getByTestId('job-report');
+  await report.getByTestId('report-header').waitFor();
+  const text = await report.innerText();
+  expect(text).toMatch(/Specbench job report/);
+  expect(text).toMatch(/ZKM900T-16-004211/);
+  expect(text).toMatch(/WO-2231/);
+  expect(text).toMatch(/Misfires when hot/);
+  expect(text).toMatch(/Kestrel Moto Service Manual 900 series/);
+  expect(text).toMatch(/do not replace the maker’s service procedures and\s+service manual, nor local codes/);
+  await expect(report.locator('[data-testid^="report-reading-"]').count()).resolves.toBe(3);
+  await expect(report.getByTestId('report-superseded').innerText()).resolves.toMatch(/re-taken \(replaced by reading #\d+\)/);
+  await page.evaluate('window.print = () => { window.__printed = true; }');
+  await report.getByTestId('report-print').click();
+  await expect(page.evaluate('window.__printed')).resolves.toBe(true);
+  await screenshot(page, 'job-report-phone');
+  await page.emulateMedia({ media: 'print' });
+  await expect(report.getByTestId('report-print').isVisible()).resolves.toBe(false);
+  await screenshot(page, 'job-report-print');
+  console.log('DEBUG', await page.evaluate(`(() => { const r = document.querySelector('[data-testid="job-report"]'); let e = r; const out = []; for (let i = 0; i < 9 && e.parentElement; i++) { const sibs = Array.from(e.parentElement.children).filter(c => c !== e); out.push(i + ': sibs=' + sibs.map(sib => sib.tagName + (sib.compareDocumentPosition(e) & 4 ? '(before)' : '(after)') + ' h1=' + !!sib.querySelector('h1') + ' style=' + (sib.getAttribute('style') || '').slice(0, 60) + ' text=' + (sib.textContent || '').slice(0, 30)).join(' ; ')); e = e.parentElement; } return out.join(' | '); })()`));
+  const pdf = await page.pdf({ format: 'A4' });
+  console.log('DEBUG pages', (pdf.toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length);
+  await page.emulateMedia({ media: 'screen' });
+
+  // Wide screens: two columns.
+  await page.setViewportSize(DESKTOP);
+  await page.goto(`${web.url}/jobs/${jobId}`);
+  await sheet.getByTestId('job-summary').waitFor();
+  await sheet.locator('[data-testid^="job-reading-"]').nth(3).waitFor();
+  await screenshot(page, 'job-sheet-desktop');
+  await context.close();
+});
+
+it('signed out, the calculator still judges and offers to sign in; My jobs asks to sign in', async () => {
+  const page = await browser.newPage({ viewport: PHONE });
+  const stator = await kestrelSpec('stator', 'stator winding resistance');
+  await page.goto(`${web.url}/specs/${stator.id}`);
+  const calc = page.getByTestId('spec-screen').getByTestId('calculator');
+  await calc.getByLabel('Meter reading', { exact: true }).fill(String(stator.max * 4));
+  await expect(calc.getByTestId('verdict-word').innerText()).resolves.toBe('FAIL');
+  await expect(calc.getByTestId('add-to-job-sign-in').innerText()).resolves.toBe('Sign in to keep readings on a job');
+  await page.goto(`${web.url}/jobs`);
+  await page.getByTestId('jobs-sign-in').waitFor();
+  await page.close();
+});

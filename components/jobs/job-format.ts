@@ -1,0 +1,72 @@
+/**
+ * Words for the job sheet and its report: the machine's name, the verdict counts, the
+ * readings grouped by component, the corrections as typed. Pure (no React).
+ */
+import type { JobSummaryDto, ReadingDto } from '../../lib/contracts/jobs';
+import { formatNumber, formatRange, type CanonicalUnit } from '../../lib/units';
+import type { VerdictResult } from '../../lib/verdict';
+
+export const OTHER_CHECKS = 'Other checks';
+
+export function machineName(job: Pick<JobSummaryDto, 'id' | 'modelTitle' | 'machineLabel'>): string {
+  if (job.modelTitle && job.machineLabel) return `${job.modelTitle} — ${job.machineLabel}`;
+  return job.modelTitle ?? (job.machineLabel || `Job #${job.id}`);
+}
+
+/** "7 pass · 1 marginal · 1 fail": in words, never colour alone. */
+export function countsText(c: JobSummaryDto['counts']): string {
+  return `${c.pass} pass · ${c.marginal} marginal · ${c.fail} fail`;
+}
+
+/** Groups in the order their first reading was taken; hand-typed checks last, as "Other checks". */
+export function groupByComponent<T extends { componentName: string }>(readings: T[]): Array<{ component: string; readings: T[] }> {
+  const groups = new Map<string, T[]>();
+  for (const r of readings) {
+    const name = r.componentName.trim() || OTHER_CHECKS;
+    groups.set(name, [...(groups.get(name) ?? []), r]);
+  }
+  const named = [...groups.entries()].filter(([k]) => k !== OTHER_CHECKS);
+  const other = groups.get(OTHER_CHECKS);
+  return [...named, ...(other ? [[OTHER_CHECKS, other] as const] : [])].map(([component, rs]) => ({ component, readings: rs }));
+}
+
+/** 'ignition coil (rear)' → 'Ignition coil (rear)'. */
+export const sentenceCase = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
+export function formatWhen(iso: string): string {
+  const d = new Date(iso);
+  return Number.isNaN(d.getTime()) ? iso : d.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+}
+
+export function asVerdictResult(r: ReadingDto): VerdictResult {
+  return {
+    verdict: r.verdict, value: r.value, unit: r.unit as CanonicalUnit, expandedUncertainty: r.expandedUncertainty,
+    conformanceProbability: r.conformanceProbability, reason: r.reason, steps: r.steps, zones: r.zones,
+  };
+}
+
+type Q = { value: number; unit: string };
+const q = (x: Q) => `${formatNumber(x.value)} ${x.unit}`;
+
+/** The raw reading and each correction, as the technician entered them. */
+export function inputLines(inputs: Record<string, unknown>): string[] {
+  const i = inputs as { reading?: Q; leadResistance?: Q; seriesResistance?: Q & { tolerancePct?: number }; temperatureC?: number;
+    meter?: { percent: number; counts: number; countValue: number; unit: string } };
+  const lines: string[] = [];
+  if (i.reading) lines.push(`Meter reading ${q(i.reading)}`);
+  if (i.leadResistance) lines.push(`Test leads ${q(i.leadResistance)} subtracted`);
+  if (i.seriesResistance) {
+    const tol = i.seriesResistance.tolerancePct !== undefined ? ` (±${formatNumber(i.seriesResistance.tolerancePct)} %)` : '';
+    lines.push(`Series resistor ${q(i.seriesResistance)}${tol} subtracted`);
+  }
+  if (i.temperatureC !== undefined) lines.push(`Winding at ${formatNumber(i.temperatureC)} °C`);
+  if (i.meter) lines.push(`Meter accuracy ±(${formatNumber(i.meter.percent)} % + ${formatNumber(i.meter.counts)} counts of ${formatNumber(i.meter.countValue)} ${i.meter.unit})`);
+  return lines;
+}
+
+/** "2.4–3.2 Ω (nominal 2.8) at 20 °C" from the limits kept with a reading. */
+export function limitsText(limits: Record<string, unknown>): string {
+  const n = (k: string) => (typeof limits[k] === 'number' ? (limits[k] as number) : null);
+  const temp = n('refTempC') !== null && limits.material === 'copper' ? ` at ${formatNumber(n('refTempC')!)} °C` : '';
+  return `${formatRange(n('min'), n('nominal'), n('max'), String(limits.unit ?? '') as CanonicalUnit)}${temp}`;
+}

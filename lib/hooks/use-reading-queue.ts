@@ -1,0 +1,58 @@
+/**
+ * The device's reading queue (lib/offline) wired to device storage and the API.
+ * One queue per app: the calculator adds to it, the job sheet shows what waits, and
+ * useReadingQueueSync (mounted once, in the root layout) sends what waits on start,
+ * when the connection returns and every 10 s, while someone is signed in.
+ */
+import { useEffect, useSyncExternalStore } from 'react';
+import AsyncStorage from '@react-native-async-storage/async-storage';
+import { onlineManager, useQueryClient } from '@tanstack/react-query';
+import { addReading } from '../api/jobs';
+import { describeError } from '../api/describe-error';
+import { ReadingQueueRunner, type AddOutcome, type NewReading } from '../offline/queue-runner';
+import { pendingFor } from '../offline/reading-queue';
+import { useSession } from '../session/session-provider';
+import { invalidateJob } from './use-jobs';
+
+const RETRY_EVERY_MS = 10_000;
+
+const runner = new ReadingQueueRunner(
+  { getItem: (k) => AsyncStorage.getItem(k), setItem: (k, v) => AsyncStorage.setItem(k, v) },
+  (item) => addReading(item.jobId, item.body, item.key),
+  { describe: describeError },
+);
+
+export function useReadingQueue() {
+  const state = useSyncExternalStore(runner.subscribe, runner.getSnapshot, runner.getSnapshot);
+  const { user } = useSession();
+  const userId = user?.id ?? -1;
+  return {
+    pendingFor: (jobId: number) => pendingFor(state, userId, jobId),
+    rejectedFor: (jobId: number) => state.rejected.filter((r) => r.userId === userId && r.jobId === jobId),
+    add: (reading: Omit<NewReading, 'userId'>): Promise<AddOutcome> => runner.add({ ...reading, userId }),
+    dismiss: runner.dismiss,
+  };
+}
+
+/** Mount once, inside the session and query providers. */
+export function useReadingQueueSync() {
+  const qc = useQueryClient();
+  const { status, user } = useSession();
+  const userId = status === 'signed-in' ? user?.id : undefined;
+
+  useEffect(() => runner.onSent((item) => { void invalidateJob(qc, item.jobId); }), [qc]);
+
+  useEffect(() => {
+    void runner.load();
+    if (userId === undefined) return;
+    const flush = () => { void runner.flush(userId); };
+    flush();
+    const timer = setInterval(flush, RETRY_EVERY_MS);
+    // TanStack's online manager follows the browser's online/offline events on web.
+    const unsubscribe = onlineManager.subscribe((online) => { if (online) flush(); });
+    return () => {
+      clearInterval(timer);
+      unsubscribe();
+    };
+  }, [userId]);
+}

@@ -1,0 +1,34 @@
+/**
+ * The calculator's engine input → the body of POST /api/jobs/:id/readings. Library
+ * specs go by id (the server judges against its own limits and records the version);
+ * limits typed by hand go with the reading, with the technician's words for what was
+ * measured. Units are the calculator's canonical units, which the API accepts as typed.
+ */
+import type { ReadingBody } from '../contracts/jobs';
+import type { VerdictInput } from '../verdict';
+
+export type ReadingTarget = { specId: number } | { label: string };
+
+const defined = <T extends object>(o: T) =>
+  Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined && v !== null)) as T;
+
+export function toReadingBody(input: VerdictInput, target: ReadingTarget, extra: { retakeOf?: number; takenAt?: string } = {}): ReadingBody {
+  const body: ReadingBody = 'specId' in target
+    ? { specId: target.specId, reading: { ...input.reading } }
+    : {
+      spec: defined({
+        min: input.spec.min ?? undefined, nominal: input.spec.nominal ?? undefined, max: input.spec.max ?? undefined,
+        unit: input.spec.unit, refTempC: input.spec.refTempC ?? undefined, material: input.spec.material ?? undefined,
+        nearLimitPct: input.spec.nearLimitPct ?? undefined,
+      }),
+      label: target.label.trim(),
+      reading: { ...input.reading },
+    };
+  if (input.leadResistance) body.leadResistance = { ...input.leadResistance };
+  if (input.seriesResistance) body.seriesResistance = defined({ ...input.seriesResistance });
+  if (input.temperatureC !== undefined) body.temperatureC = input.temperatureC;
+  if (input.meter) body.meter = { ...input.meter };
+  if (extra.retakeOf !== undefined) body.retakeOf = extra.retakeOf;
+  if (extra.takenAt !== undefined) body.takenAt = extra.takenAt;
+  return body;
+}

@@ -1,0 +1,100 @@
+/**
+ * Benchmark (DESIGN §8): a 50 000-row invented CSV validated, previewed and committed with
+ * revisions through the importer's own steps, and, in the same run, MariaDB's bulk load
+ * (LOAD DATA LOCAL INFILE) of the same file into a bare table. Prints both and the ratio
+ * of the commit's throughput to the bulk load's. Uses the throwaway database
+ * specbench_bench (bench.sh sets DB_NAME), migrated here and dropped at the end.
+ */
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { performance } from 'node:perf_hooks';
+import mariadb from 'mariadb';
+import { config } from '../server/config';
+import { AppDataSource } from '../server/db/data-source';
+import { ensureDatabase } from '../server/db/ensure-database';
+import { commitImport, previewValidated, validateUpload } from '../server/modules/imports/import.service';
+import { makeBenchCsv } from './bench-import-data';
+
+const ROWS = 50_000;
+const DB = 'specbench_bench';
+const ACTOR = { id: null, name: 'Specbench benchmark' };
+
+/** Peak resident memory while `fn` runs, sampled every 20 ms. */
+async function timed<T>(fn: () => Promise<T> | T): Promise<{ value: T; seconds: number; peakMb: number }> {
+  let peak = process.memoryUsage().rss;
+  const sampler = setInterval(() => { peak = Math.max(peak, process.memoryUsage().rss); }, 20);
+  const t = performance.now();
+  try {
+    const value = await fn();
+    return { value, seconds: (performance.now() - t) / 1000, peakMb: Math.max(peak, process.memoryUsage().rss) / 2 ** 20 };
+  } finally {
+    clearInterval(sampler);
+  }
+}
+
+const BARE_TABLE = `CREATE TABLE bulk_specs (make varchar(120), model varchar(120), year_from smallint, year_to smallint NULL,
+  variant varchar(120), component varchar(120), parameter varchar(120), min_value double NULL, nominal_value double NULL,
+  max_value double NULL, unit varchar(8), ref_temp_c double NULL, material varchar(8), test_points text, conditions text,
+  source_title varchar(200), source_edition varchar(200), source_page varchar(200), source_url varchar(500) NULL, notes text) ENGINE=InnoDB`;
+
+/** The same file through MariaDB's own loader: parsing, type conversion and the insert, nothing else. */
+async function bulkLoad(file: string): Promise<number> {
+  const conn = await mariadb.createConnection({
+    host: config.DB_HOST, port: config.DB_PORT, user: config.DB_USER, password: config.DB_PASSWORD, database: DB, permitLocalInfile: true,
+  });
+  try {
+    await conn.query(BARE_TABLE);
+    const result = await conn.query(`LOAD DATA LOCAL INFILE ${conn.escape(file)} INTO TABLE bulk_specs CHARACTER SET utf8mb4
+      FIELDS TERMINATED BY ',' OPTIONALLY ENCLOSED BY '"' LINES TERMINATED BY '\\r\\n' IGNORE 1 LINES
+      (make, model, year_from, @year_to, variant, component, parameter, @min, @nominal, @max, unit, @ref, material,
+       test_points, conditions, source_title, source_edition, source_page, @url, notes)
+      SET year_to = NULLIF(@year_to, ''), min_value = NULLIF(@min, ''), nominal_value = NULLIF(@nominal, ''),
+          max_value = NULLIF(@max, ''), ref_temp_c = NULLIF(@ref, ''), source_url = NULLIF(@url, '')`);
+    return Number(result.affectedRows);
+  } finally {
+    await conn.end();
+  }
+}
+
+const s = (seconds: number) => `${seconds.toFixed(2)} s`;
+const rate = (seconds: number) => `${Math.round(ROWS / seconds).toLocaleString('en')} rows/s`;
+
+async function main() {
+  if (config.DB_NAME !== DB) throw new Error(`Refusing to run: DB_NAME is ${config.DB_NAME}, expected ${DB} (run through npm run bench).`);
+  await ensureDatabase(DB);
+  await AppDataSource.initialize();
+  const file = path.join(os.tmpdir(), `specbench-bench-${process.pid}.csv`);
+  try {
+    await AppDataSource.runMigrations({ transaction: 'each' });
+    const text = makeBenchCsv(ROWS);
+    const bytes = Buffer.from(text, 'utf8');
+    fs.writeFileSync(file, bytes);
+    const upload = { fileName: 'bench-50k.csv', bytes };
+
+    const validation = await timed(() => validateUpload(bytes));
+    const preview = await timed(() => previewValidated(upload, validation.value, ACTOR));
+    const commit = await timed(() => commitImport(preview.value.id, ACTOR, 'Benchmark import'));
+    const [{ specs, revisions }] = await AppDataSource.query('SELECT (SELECT COUNT(*) FROM specs) AS specs, (SELECT COUNT(*) FROM spec_revisions) AS revisions');
+    if (Number(specs) !== ROWS || Number(revisions) !== ROWS) throw new Error(`Expected ${ROWS} specs and revisions, found ${specs} and ${revisions}`);
+    const again = await timed(async () => previewValidated(upload, validateUpload(bytes), ACTOR));
+    const load = await timed(() => bulkLoad(file));
+    if (load.value !== ROWS) throw new Error(`Bulk load wrote ${load.value} rows, expected ${ROWS}`);
+
+    const total = validation.seconds + preview.seconds + commit.seconds;
+    const ratio = load.seconds / commit.seconds;
+    console.log(`import: ${ROWS.toLocaleString('en')} rows, ${(bytes.length / 2 ** 20).toFixed(1)} MB: validation ${s(validation.seconds)} · preview ${s(preview.seconds)} · commit ${s(commit.seconds)} (${rate(commit.seconds)}, ${Number(revisions).toLocaleString('en')} revisions) · end to end ${s(total)} · target ≤ 60 s → ${total <= 60 ? 'met' : 'MISSED'}`);
+    console.log(`import: peak RSS ${validation.peakMb.toFixed(0)} / ${preview.peakMb.toFixed(0)} / ${commit.peakMb.toFixed(0)} MB (validation / preview / commit) · re-import of the same file: ${again.value.counts.unchanged.toLocaleString('en')} unchanged in ${s(again.seconds)}`);
+    console.log(`bulk load (LOAD DATA LOCAL INFILE, bare table): ${s(load.seconds)} (${rate(load.seconds)})`);
+    console.log(`commit / bulk-load throughput: ${(ratio * 100).toFixed(0)} % · target ≥ 25 % → ${ratio >= 0.25 ? 'met' : 'MISSED'}`);
+  } finally {
+    fs.rmSync(file, { force: true });
+    await AppDataSource.query(`DROP DATABASE IF EXISTS \`${DB}\``).catch(() => undefined);
+    await AppDataSource.destroy();
+  }
+}
+
+main().catch((err) => {
+  console.error('import benchmark failed:', err);
+  process.exitCode = 1;
+});

@@ -1,0 +1,86 @@
+/**
+ * Export of the published library in the import format (lib/csv toSpecCsv: RFC 4180, CRLF,
+ * formula-like text neutralised), streamed in chunks so memory stays flat however large
+ * the library. Exported and imported again, every row comes back "unchanged".
+ */
+import type { Response } from 'express';
+import type { ExportQuery } from '../../../lib/contracts/imports';
+import { toSpecCsv, type SpecCsvRow } from '../../../lib/csv';
+import type { CanonicalUnit } from '../../../lib/units';
+import { AppDataSource } from '../../db/data-source';
+import { AppError } from '../../errors/app-error';
+import { foldKey } from '../library/keys';
+
+const CHUNK = 1000;
+/** Spreadsheets read a UTF-8 file as a legacy code page unless it starts with a BOM (Ω, °C); the importer accepts it. */
+const BOM = '\uFEFF';
+
+type Filter = { where: string; params: unknown[]; label: string };
+
+async function resolveFilter(query: ExportQuery): Promise<Filter> {
+  if (query.modelId) {
+    const [model] = await AppDataSource.query('SELECT id, name FROM vehicle_models WHERE id = ?', [query.modelId]);
+    if (!model) throw AppError.notFound('model', query.modelId);
+    return { where: 'AND vm.id = ?', params: [model.id], label: `-model-${model.id}` };
+  }
+  if (query.make) {
+    const [make] = await AppDataSource.query('SELECT id, name FROM makes WHERE name_key = ?', [foldKey(query.make)]);
+    if (!make) throw new AppError(404, 'not_found', `No make named "${query.make}".`);
+    return { where: 'AND mk.id = ?', params: [make.id], label: `-${foldKey(make.name).replace(/[^a-z0-9]+/g, '-')}` };
+  }
+  return { where: '', params: [], label: '' };
+}
+
+const FROM = `FROM specs s JOIN components c ON c.id = s.component_id
+  JOIN vehicle_models vm ON vm.id = c.model_id JOIN makes mk ON mk.id = vm.make_id
+  LEFT JOIN sources src ON src.id = s.source_id`;
+
+async function orderedIds(filter: Filter): Promise<number[]> {
+  const rows: Array<{ id: number }> = await AppDataSource.query(
+    `SELECT s.id ${FROM} WHERE s.status = 'published' ${filter.where}
+      ORDER BY mk.name, vm.name, vm.year_from, vm.variant, c.name, s.parameter, s.id`, filter.params);
+  return rows.map((r) => r.id);
+}
+
+type DbRow = Omit<SpecCsvRow, 'unit' | 'material'> & { id: number; unit: string; material: 'copper' | 'none' };
+
+async function rowsFor(ids: number[]): Promise<SpecCsvRow[]> {
+  const rows: DbRow[] = await AppDataSource.query(
+    `SELECT s.id, mk.name AS make, vm.name AS model, vm.year_from AS yearFrom, vm.year_to AS yearTo, vm.variant,
+            c.name AS component, s.parameter, s.min_value AS min, s.nominal_value AS nominal, s.max_value AS max, s.unit,
+            s.ref_temp_c AS refTempC, s.material, COALESCE(s.test_points, '') AS testPoints,
+            COALESCE(s.conditions, '') AS conditions, COALESCE(src.title, '') AS sourceTitle,
+            COALESCE(src.edition, '') AS sourceEdition, COALESCE(s.source_page, '') AS sourcePage,
+            src.url AS sourceUrl, COALESCE(s.notes, '') AS notes
+       ${FROM} WHERE s.id IN (?)`, [ids]);
+  const byId = new Map(rows.map(({ id, ...row }) => [id, { ...row, unit: row.unit as CanonicalUnit }]));
+  return ids.map((id) => byId.get(id)).filter((r): r is SpecCsvRow => r !== undefined);
+}
+
+/** Writes one chunk, waiting while the client's buffer is full (or until it hangs up). */
+async function send(res: Response, chunk: string): Promise<void> {
+  if (res.write(chunk)) return;
+  await new Promise<void>((resolve) => {
+    const done = () => { res.off('drain', done); res.off('close', done); resolve(); };
+    res.on('drain', done).on('close', done);
+  });
+}
+
+/** Answers 404 before the first byte when the make or model is unknown; then streams the file. */
+export async function streamSpecsCsv(res: Response, query: ExportQuery): Promise<void> {
+  const filter = await resolveFilter(query);
+  const ids = await orderedIds(filter);
+  res.attachment(`specbench-specs${filter.label}.csv`).type('text/csv; charset=utf-8').setHeader('Cache-Control', 'no-store');
+  try {
+    await send(res, BOM + toSpecCsv([]));
+    for (let i = 0; i < ids.length && !res.destroyed; i += CHUNK) {
+      const csv = toSpecCsv(await rowsFor(ids.slice(i, i + CHUNK)));
+      await send(res, csv.slice(csv.indexOf('\r\n') + 2)); // toSpecCsv always begins with the header line
+    }
+    res.end();
+  } catch (err) {
+    // The status line has gone out: cut the download short rather than append an error to it.
+    console.error('CSV export failed part-way:', err);
+    res.destroy(err as Error);
+  }
+}

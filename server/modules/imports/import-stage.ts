@@ -1,0 +1,128 @@
+/**
+ * The rows of a previewed file, kept in import_batch_rows with their planned action, so
+ * that the preview can be shown again and the commit applies exactly what it showed
+ * without parsing the file twice. Written with multi-row INSERTs (no entity: the commit
+ * works on this table set-based, see import-apply.ts).
+ */
+import type { EntityManager } from 'typeorm';
+import type { RowProblem, SpecCsvRow } from '../../../lib/csv';
+import { unitKind } from '../../../lib/units';
+import { foldKey, makeKey, modelKey, sourceKey } from '../library/keys';
+import { snapshotOfRow } from '../specs/spec-snapshot';
+import type { PlannedRow } from './import-plan';
+
+/** Rows per INSERT: about 1 KB each, far below max_allowed_packet (16 MB). */
+const CHUNK = 1000;
+
+const COLUMNS = [
+  'batch_id', 'line', 'action', 'spec_id', 'base_version', 'make', 'model', 'year_from', 'year_to', 'variant',
+  'component', 'parameter', 'make_key', 'model_key', 'component_key', 'parameter_key', 'source_key',
+  'model_ord', 'component_ord', 'source_ord', 'firsts', 'create_ord',
+  'quantity_kind', 'min_value', 'nominal_value', 'max_value', 'unit', 'ref_temp_c', 'material', 'test_points',
+  'conditions', 'notes', 'source_title', 'source_edition', 'source_page', 'source_url', 'snapshot', 'changes', 'problems',
+];
+const INSERT = `INSERT INTO import_batch_rows (${COLUMNS.map((c) => `\`${c}\``).join(', ')}) VALUES ?`;
+
+type Cell = string | number | null;
+const json = (value: unknown[]): string | null => (value.length ? JSON.stringify(value) : null);
+
+/**
+ * The revision snapshot as JSON text without its last two fields and closing brace: the
+ * commit appends `,"sourceId":<id>,"status":"<status>"}` with CONCAT once the source has an
+ * id, which costs far less per row than parsing the JSON again (JSON_SET).
+ */
+function snapshotHead(row: SpecCsvRow): string {
+  const { sourceId: _id, status: _status, ...head } = snapshotOfRow(row);
+  return JSON.stringify(head).slice(0, -1);
+}
+const problemsOf = (problems: RowProblem[]) => problems.map((p) => ({ column: p.column, reason: p.reason }));
+
+/** Bits of `firsts`: the row is the first of the batch's created rows to need this make, model, component or source. */
+export const FIRST = { make: 1, model: 2, component: 4, source: 8 } as const;
+
+/**
+ * Numbers the batch's distinct models, components and sources (1, 2, …) and marks the
+ * first row that needs each to exist, so the commit creates each once and then joins on
+ * these small numbers rather than on long text keys.
+ */
+class Numbering {
+  private readonly ords = new Map<string, number>();
+  private readonly needed = new Set<string>();
+  private created = 0;
+
+  /** 1, 2, … for created rows in file order: the offsets of their spec ids. */
+  nextCreated(): number {
+    return ++this.created;
+  }
+
+  ord(key: string): number {
+    let n = this.ords.get(key);
+    if (n === undefined) this.ords.set(key, (n = this.ords.size + 1));
+    return n;
+  }
+
+  /** True the first time `key` is needed. */
+  first(key: string): boolean {
+    if (this.needed.has(key)) return false;
+    this.needed.add(key);
+    return true;
+  }
+}
+
+function keyCells(p: PlannedRow, n: Numbering): Cell[] {
+  const r = p.row;
+  const keys = { make: makeKey(r.make), model: modelKey(r), component: foldKey(r.component), parameter: foldKey(r.parameter), source: sourceKey({ title: r.sourceTitle, edition: r.sourceEdition }) };
+  const componentKey = `${keys.model}|${keys.component}`;
+  const creates = p.action === 'create';
+  const firsts = (creates && n.first(`m:${keys.make}`) ? FIRST.make : 0) | (creates && n.first(`v:${keys.model}`) ? FIRST.model : 0)
+    | (creates && n.first(`c:${componentKey}`) ? FIRST.component : 0) | (p.action !== 'unchanged' && n.first(`s:${keys.source}`) ? FIRST.source : 0);
+  return [
+    keys.make, keys.model, keys.component, keys.parameter, keys.source,
+    n.ord(`v:${keys.model}`), n.ord(`c:${componentKey}`), n.ord(`s:${keys.source}`), firsts, creates ? n.nextCreated() : null,
+  ];
+}
+
+function plannedCells(batchId: number, p: PlannedRow, warnings: RowProblem[], n: Numbering): Cell[] {
+  const r = p.row;
+  return [
+    batchId, p.line, p.action, p.specId, p.baseVersion, r.make.trim(), r.model.trim(), r.yearFrom, r.yearTo, r.variant.trim(),
+    r.component.trim(), r.parameter.trim(), ...keyCells(p, n),
+    unitKind(r.unit), r.min, r.nominal, r.max, r.unit, r.refTempC, r.material, r.testPoints || null,
+    r.conditions || null, r.notes || null, r.sourceTitle.trim(), r.sourceEdition.trim(), r.sourcePage || null, r.sourceUrl,
+    snapshotHead(r), json(p.changes), json(problemsOf(warnings)),
+  ];
+}
+
+function rejectedCells(batchId: number, line: number, problems: RowProblem[]): Cell[] {
+  const cells: Cell[] = COLUMNS.map(() => null);
+  cells[0] = batchId;
+  cells[1] = line;
+  cells[2] = 'rejected';
+  cells[COLUMNS.indexOf('firsts')] = 0;
+  cells[COLUMNS.length - 1] = json(problemsOf(problems));
+  return cells;
+}
+
+async function insertChunked(m: EntityManager, rows: Cell[][]) {
+  for (let i = 0; i < rows.length; i += CHUNK) await m.query(INSERT, [rows.slice(i, i + CHUNK)]);
+}
+
+/** Groups problems by line: one rejected row may have several. */
+export function byLine(problems: RowProblem[]): Map<number, RowProblem[]> {
+  const lines = new Map<number, RowProblem[]>();
+  for (const p of problems) lines.set(p.line, [...(lines.get(p.line) ?? []), p]);
+  return lines;
+}
+
+export async function stageRows(
+  m: EntityManager, batchId: number, plan: PlannedRow[], warnings: Map<number, RowProblem[]>, rejected: Map<number, RowProblem[]>,
+) {
+  const rows: Cell[][] = [];
+  const numbering = new Numbering();
+  for (const p of plan) {
+    rows.push(plannedCells(batchId, p, warnings.get(p.line) ?? [], numbering));
+    if (rows.length >= CHUNK) await insertChunked(m, rows.splice(0, rows.length));
+  }
+  for (const [line, problems] of rejected) rows.push(rejectedCells(batchId, line, problems));
+  await insertChunked(m, rows);
+}

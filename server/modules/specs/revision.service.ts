@@ -1,0 +1,54 @@
+/**
+ * A spec's revision history with field diffs, and reverting to one revision's values
+ * (written as a new revision: history is append-only).
+ */
+import type { RevertSpecBody, RevisionDiffDto, RevisionListDto } from '../../../lib/contracts/curation';
+import type { SpecDetailDto } from '../../../lib/contracts/library';
+import { AppDataSource } from '../../db/data-source';
+import { AppError } from '../../errors/app-error';
+import type { Actor } from '../../auth/actor';
+import { markLibraryChanged } from '../search/search.service';
+import { Spec } from './spec.entity';
+import { SpecRevision } from './spec-revision.entity';
+import { diffSnapshots } from './spec-snapshot';
+import { checkValues, inSpecTransaction, lockSpec, writeSpecChange, type SpecValues } from './spec-write';
+import { getSpec } from './spec.service';
+
+/** Newest first, each with its changes against the revision before it. */
+export async function listRevisions(specId: number): Promise<RevisionListDto> {
+  const spec = await AppDataSource.getRepository(Spec).findOne({ where: { id: specId }, select: { id: true, version: true } });
+  if (!spec) throw AppError.notFound('spec', specId);
+  const revisions = await AppDataSource.getRepository(SpecRevision).find({ where: { specId }, order: { version: 'ASC' } });
+  const withDiffs = revisions.map((r, i): RevisionDiffDto => ({
+    id: r.id, version: r.version, origin: r.origin, originRef: r.originRef, authorName: r.authorName, reason: r.reason,
+    createdAt: r.createdAt.toISOString(), changedFields: r.changedFields,
+    changes: diffSnapshots(i === 0 ? null : revisions[i - 1].snapshot, r.snapshot), snapshot: r.snapshot,
+  }));
+  return { specId, version: spec.version, revisions: withDiffs.reverse() };
+}
+
+async function revisionOf(specId: number, revisionId: number): Promise<SpecRevision> {
+  const revision = await AppDataSource.getRepository(SpecRevision).findOneBy({ id: revisionId });
+  if (revision?.specId === specId) return revision;
+  if (!(await AppDataSource.getRepository(Spec).existsBy({ id: specId }))) throw AppError.notFound('spec', specId);
+  throw AppError.notFound(`revision of spec ${specId}`, revisionId);
+}
+
+/** Applies the revision's snapshot as a new revision (origin 'revert'); 409 on a stale version. */
+export async function revertSpec(specId: number, body: RevertSpecBody, actor: Actor): Promise<SpecDetailDto> {
+  const revision = await revisionOf(specId, body.revisionId);
+  const changed = await inSpecTransaction(async (m) => {
+    const { spec, source } = await lockSpec(m, specId, body.version);
+    const s = revision.snapshot;
+    const values: SpecValues = {
+      parameter: s.parameter ?? spec.parameter, min: s.min ?? null, nominal: s.nominal ?? null, max: s.max ?? null,
+      unit: s.unit ?? spec.unit, refTempC: s.refTempC ?? null, material: s.material ?? spec.material,
+      testPoints: s.testPoints ?? null, conditions: s.conditions ?? null, notes: s.notes ?? null,
+      sourceId: s.sourceId ?? null, sourcePage: s.sourcePage ?? null, status: s.status ?? spec.status,
+    };
+    checkValues(values);
+    return writeSpecChange(m, spec, source, { values, actor, reason: body.reason, origin: 'revert', originRef: `revision #${revision.id}` });
+  });
+  if (changed) markLibraryChanged();
+  return getSpec(specId);
+}

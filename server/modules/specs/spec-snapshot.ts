@@ -1,0 +1,51 @@
+/**
+ * Revision snapshots: the full values of a spec as one revision left them, built the same
+ * way by the editor, the reverter and the importer, and compared field by field for the
+ * history's diffs.
+ */
+import type { FieldChangeDto } from '../../../lib/contracts/curation';
+import type { SpecCsvRow } from '../../../lib/csv';
+import type { Source } from '../library/source.entity';
+import type { Spec } from './spec.entity';
+import type { SpecSnapshot } from './spec-revision.entity';
+
+/** The fields a history shows, in order; sourceId is internal (title and edition show it). */
+export const SNAPSHOT_FIELDS = [
+  'parameter', 'min', 'nominal', 'max', 'unit', 'refTempC', 'material', 'testPoints', 'conditions',
+  'notes', 'sourceTitle', 'sourceEdition', 'sourcePage', 'status',
+] as const satisfies ReadonlyArray<keyof SpecSnapshot>;
+
+type SpecValues = Pick<Spec, 'parameter' | 'min' | 'nominal' | 'max' | 'unit' | 'refTempC' | 'material' | 'testPoints' | 'conditions' | 'notes' | 'sourcePage' | 'status'>;
+
+export function snapshotOfSpec(spec: SpecValues, source: Pick<Source, 'id' | 'title' | 'edition'> | null): SpecSnapshot {
+  return {
+    parameter: spec.parameter, min: spec.min, nominal: spec.nominal, max: spec.max, unit: spec.unit,
+    refTempC: spec.refTempC, material: spec.material, testPoints: spec.testPoints, conditions: spec.conditions,
+    notes: spec.notes, sourceId: source?.id ?? null, sourceTitle: source?.title ?? null,
+    sourceEdition: source?.edition ?? null, sourcePage: spec.sourcePage, status: spec.status,
+  };
+}
+
+/** An imported row's snapshot; sourceId and status are filled in by the commit (JSON_SET). */
+export function snapshotOfRow(row: SpecCsvRow): SpecSnapshot {
+  return {
+    parameter: row.parameter.trim(), min: row.min, nominal: row.nominal, max: row.max, unit: row.unit,
+    refTempC: row.refTempC, material: row.material, testPoints: row.testPoints || null,
+    conditions: row.conditions || null, notes: row.notes || null, sourceId: null,
+    sourceTitle: row.sourceTitle.trim(), sourceEdition: row.sourceEdition.trim(), sourcePage: row.sourcePage || null,
+    status: 'published',
+  };
+}
+
+type Value = string | number | null;
+const valueOf = (s: Partial<SpecSnapshot> | null, field: keyof SpecSnapshot): Value => {
+  const v = s?.[field];
+  return v === undefined || v === '' ? null : (v as Value);
+};
+
+/** Field-by-field differences; against nothing (a first revision) every field that has a value. */
+export function diffSnapshots(before: Partial<SpecSnapshot> | null, after: Partial<SpecSnapshot>): FieldChangeDto[] {
+  return SNAPSHOT_FIELDS
+    .map((field) => ({ field, before: valueOf(before, field), after: valueOf(after, field) }))
+    .filter((c) => c.before !== c.after);
+}
