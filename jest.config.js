@@ -33,7 +33,7 @@ module.exports = {
     {
       displayName: 'e2e',
       testEnvironment: 'node',
-      testMatch: ['<rootDir>/__tests__/e2e/**/*.test.ts', '<rootDir>/.data/tmp/*.test.ts'],
+      testMatch: ['<rootDir>/__tests__/e2e/**/*.test.ts'],
       transform: tsJest('<rootDir>/server/tsconfig.json'),
       globalSetup: '<rootDir>/__tests__/helpers/global-setup.ts',
       globalTeardown: '<rootDir>/__tests__/helpers/global-teardown.ts',
