@@ -59,6 +59,9 @@ export default function RootLayout() {
         <Stack.Screen name="corrections/[correctionId]" options={{ title: 'Proposal' }} />
         <Stack.Screen name="review/index" options={{ title: 'Review corrections' }} />
         <Stack.Screen name="review/[correctionId]" options={{ title: 'Review' }} />
+        <Stack.Screen name="editor/import" options={{ title: 'Import specs' }} />
+        <Stack.Screen name="editor/specs/new" options={{ title: 'New spec' }} />
+        <Stack.Screen name="editor/specs/[specId]" options={{ title: 'Edit spec' }} />
       </Stack>
       </SessionProvider>
     </QueryClientProvider>

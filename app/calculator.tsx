@@ -42,7 +42,7 @@ export default function StandaloneCalculatorScreen() {
       <Text color="textMuted">For a spec that is not in the library: type the limits from your manual.</Text>
       <ChoiceRow label="What are you checking?" options={MODES} value={mode} onChange={choose} />
       <View style={[styles.columns, wide && styles.columnsWide]}>
-        <View style={styles.column}>
+        <View style={[styles.column, wide && styles.columnWide]}>
           {mode === 'diode' || mode === 'continuity' ? <QualitativeCheck kind={mode} /> : (
             <Card testID="limits-form">
               <Text variant="heading">Spec limits</Text>
@@ -65,7 +65,7 @@ export default function StandaloneCalculatorScreen() {
           )}
           <SafetyNotes component={mode === 'voltage' ? 'charging battery' : 'ignition'} parameter="" />
         </View>
-        <View style={styles.column}>
+        <View style={[styles.column, wide && styles.columnWide]}>
           {mode !== 'diode' && mode !== 'continuity' ? <Calculator spec={spec} kind={mode} testID="standalone-calculator" /> : null}
         </View>
       </View>
@@ -76,7 +76,9 @@ export default function StandaloneCalculatorScreen() {
 const styles = StyleSheet.create({
   columns: { gap: Spacing.lg },
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  column: { flex: 1, gap: Spacing.lg, minWidth: 0 },
+  column: { gap: Spacing.lg, minWidth: 0 },
+  // Side by side the columns share the width; stacked on a phone each takes its own height.
+  columnWide: { flex: 1 },
   row: { flexDirection: 'row', gap: Spacing.sm, flexWrap: 'wrap' },
   cell: { flex: 1, minWidth: 90 },
 });

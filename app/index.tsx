@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import { SearchResults } from '../components/library/search-results';
 import { ModelList } from '../components/library/model-list';
+import { EditorActions } from '../components/curation/editor-actions';
 import { Button } from '../components/ui/button';
 import { Screen } from '../components/ui/screen';
 import { Text } from '../components/ui/text';
@@ -33,6 +34,7 @@ export default function SearchScreen() {
       <View style={styles.buttons}>
         <Button label="Calculator for limits typed by hand" variant="secondary" onPress={() => router.push('/calculator')} style={styles.calcButton} />
         {session.status === 'signed-in' ? <Button label="My jobs" variant="secondary" onPress={() => router.push('/jobs')} testID="home-my-jobs" /> : null}
+        <EditorActions />
       </View>
       <TextField
         label="Search specs"

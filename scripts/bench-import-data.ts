@@ -28,10 +28,10 @@ const FAMILIES = ['Trail', 'Urban', 'Ridge', 'Drift', 'Surge', 'Vela', 'Strale',
 /** Varies a value by model (±5 %), keeping min ≤ nominal ≤ max. */
 const vary = (value: number | '', model: number) => (value === '' ? '' : Number((value * (1 + ((model % 11) - 5) / 100)).toPrecision(4)));
 
-export function makeBenchCsv(rows: number): string {
+export function makeBenchCsv(rows: number, makePrefix = 'Benchmake'): string {
   const lines = [SPEC_CSV_COLUMNS.join(',')];
   for (let model = 0; lines.length <= rows; model += 1) {
-    const make = `Benchmake ${String(model % 50).padStart(2, '0')}`;
+    const make = `${makePrefix} ${String(model % 50).padStart(2, '0')}`;
     const name = `${FAMILIES[model % FAMILIES.length]} ${100 + model}`;
     const yearFrom = 1995 + (model % 25);
     for (const [component, parameter, min, nominal, max, unit, refTemp, material, testPoints] of SPECS) {

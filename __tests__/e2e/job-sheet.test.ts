@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
-import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
+import { DESKTOP, PHONE, SCREENSHOTS, launchChromium, screenshot, startWebServer } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 import { AppDataSource } from '../../server/db/data-source';
 import { signAccessToken } from '../../server/auth/tokens';
@@ -53,15 +53,15 @@ async function signIn(page: Page) {
   await expect(page.getByTestId('header-account').first().innerText()).resolves.toBe('Dana Wrench');
 }
 
-/**
- * Presses a button from the keyboard. On the spec card at phone size the reference column
- * (source, history) is laid over the lower part of a long calculator: both columns have
- * flex 1 (basis 0) in a vertical stack, so they get equal heights (app/specs/[specId].tsx,
- * reported). A pointer click there lands on the overlay; Enter reaches the button.
- */
+/** Scrolls a button into view and clicks it, as a thumb would. */
 async function activate(button: Locator) {
   await button.scrollIntoViewIfNeeded();
-  await button.press('Enter');
+  await button.click();
+}
+
+/** Screens scroll inside views: back to the top of each before a picture. */
+async function toTop(page: Page) {
+  await page.evaluate('document.querySelectorAll("*").forEach((el) => { if (el.scrollTop) el.scrollTop = 0; })');
 }
 
 /** Types a reading into the spec card's calculator and adds it to the job through the "Add to job" panel. */
@@ -91,6 +91,7 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await form.getByLabel('VIN or frame number', { exact: true }).fill('ZKM900T-16-004211');
   await form.getByLabel('Customer reference', { exact: true }).fill('WO-2231');
   await form.getByLabel('Notes', { exact: true }).fill('Misfires when hot; customer reports hard starting.');
+  await screenshot(page, 'job-new-phone');
   await form.getByTestId('create-job').click();
   await page.getByTestId('job-sheet').getByTestId('job-summary').waitFor();
   const jobId = Number(new URL(page.url()).pathname.split('/').pop());
@@ -107,6 +108,7 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await activate(calc.getByTestId('add-to-job-button'));
   await activate(calc.getByTestId(`pick-job-${jobId}`));
   await expect(calc.getByTestId('add-to-job-outcome').innerText()).resolves.toBe(`Added to job #${jobId}`);
+  await calc.getByTestId('add-to-job').screenshot({ path: `${SCREENSHOTS}/job-add-to-job-phone.png` });
 
   // 2. Marginal, exactly on the upper limit without meter accuracy; 3. fail, four times the maximum.
   for (const [spec, value, word] of [[pickup, pickup.max, 'MARGINAL'], [stator, stator.max * 4, 'FAIL']] as const) {
@@ -133,6 +135,7 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await expect(sheet.getByTestId('queue-waiting').innerText()).resolves.toMatch(/1 reading waiting to be sent — it will go when the connection returns/);
   await expect(sheet.getByTestId('pending-reading').innerText()).resolves.toMatch(/Waiting to be sent/);
   await expect(sheet.locator('[data-testid^="job-reading-"]').count()).resolves.toBe(3);
+  await toTop(page);
   await screenshot(page, 'job-sheet-offline-phone');
 
   // Back online: the queue flushes by itself; all four readings, each exactly once, the fail struck through.
@@ -148,6 +151,7 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   expect(job.readings.map((r) => r.verdict)).toEqual(['pass', 'marginal', 'fail', 'pass']);
   expect(new Set(job.readings.map((r) => r.idempotencyKey)).size).toBe(4);
   expect(job.readings[2].supersededBy).toBe(job.readings[3].id);
+  await toTop(page);
   await screenshot(page, 'job-sheet-phone');
 
   // The CSV comes down with the session's token.
@@ -176,10 +180,17 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await page.emulateMedia({ media: 'print' });
   await expect(report.getByTestId('report-print').isVisible()).resolves.toBe(false);
   await screenshot(page, 'job-report-print');
-  console.log('DEBUG', await page.evaluate(`(() => { const r = document.querySelector('[data-testid="job-report"]'); let e = r; const out = []; for (let i = 0; i < 9 && e.parentElement; i++) { const sibs = Array.from(e.parentElement.children).filter(c => c !== e); out.push(i + ': sibs=' + sibs.map(sib => sib.tagName + (sib.compareDocumentPosition(e) & 4 ? '(before)' : '(after)') + ' h1=' + !!sib.querySelector('h1') + ' style=' + (sib.getAttribute('style') || '').slice(0, 60) + ' text=' + (sib.textContent || '').slice(0, 30)).join(' ; ')); e = e.parentElement; } return out.join(' | '); })()`));
+  await expect(page.getByRole('heading', { name: `Report — job #${jobId}` }).isVisible()).resolves.toBe(false);
+  // Printed, the report runs over pages instead of stopping at the window's height.
   const pdf = await page.pdf({ format: 'A4' });
-  console.log('DEBUG pages', (pdf.toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length);
+  expect((pdf.toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length).toBeGreaterThan(1);
   await page.emulateMedia({ media: 'screen' });
+
+  // My jobs lists it with its counts.
+  await page.goto(`${web.url}/jobs`);
+  await page.getByTestId('job-list').getByTestId(`job-${jobId}`).waitFor();
+  await expect(page.getByTestId(`job-${jobId}`).innerText()).resolves.toMatch(/2 pass · 1 marginal · 0 fail/);
+  await screenshot(page, 'job-list-phone');
 
   // Wide screens: two columns.
   await page.setViewportSize(DESKTOP);
@@ -187,6 +198,25 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await sheet.getByTestId('job-summary').waitFor();
   await sheet.locator('[data-testid^="job-reading-"]').nth(3).waitFor();
   await screenshot(page, 'job-sheet-desktop');
+
+  // Limits typed by hand: the standalone calculator adds the reading with a label; it lands under "Other checks".
+  await page.setViewportSize(PHONE);
+  await page.goto(`${web.url}/calculator?job=${jobId}`);
+  const standalone = page.getByTestId('calculator-screen');
+  await standalone.getByRole('radio', { name: 'What are you checking?: Gap' }).click();
+  await standalone.getByLabel('Minimum', { exact: true }).fill('0.7');
+  await standalone.getByLabel('Maximum', { exact: true }).fill('0.8');
+  await standalone.getByRole('radio', { name: 'Spec unit: mm' }).click();
+  const hand = standalone.getByTestId('standalone-calculator');
+  await hand.getByLabel('Meter reading', { exact: true }).fill('0.75');
+  await expect(hand.getByTestId('verdict-word').innerText()).resolves.toBe('PASS');
+  await hand.getByTestId('add-to-job-button').click();
+  await expect(hand.getByTestId('add-to-job-label').locator('..').innerText()).resolves.toMatch(/Say what you measured/);
+  await hand.getByLabel('What did you measure?', { exact: true }).fill('Plug gap, rear cylinder (new plug)');
+  await hand.getByTestId('add-to-job-button').click();
+  await expect(hand.getByTestId('add-to-job-outcome').innerText()).resolves.toBe(`Added to job #${jobId}`);
+  await hand.getByTestId('add-to-job-open').click();
+  await expect(page.getByTestId('job-sheet').locator('[data-testid="reading-group"]').last().innerText()).resolves.toMatch(/^Other checks[\s\S]*Plug gap, rear cylinder \(new plug\)/);
   await context.close();
 });
 

@@ -40,7 +40,7 @@ export async function screenshot(page: Page, name: string) {
   const viewport = page.viewportSize()!;
   // Runs in the browser, where `document` exists (the server tsconfig has no DOM types).
   const height: number = await page.evaluate('Math.max(...Array.from(document.querySelectorAll("*")).map((el) => el.scrollHeight))');
-  await page.setViewportSize({ width: viewport.width, height: Math.min(Math.max(height, viewport.height), 6000) });
+  await page.setViewportSize({ width: viewport.width, height: Math.min(Math.max(height + 120, viewport.height), 6000) });
   await page.screenshot({ path: path.join(SCREENSHOTS, `${name}.png`) });
   await page.setViewportSize(viewport);
 }

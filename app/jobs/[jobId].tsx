@@ -34,6 +34,7 @@ export default function JobSheetScreen() {
 
   if (session.status === 'restoring') return <Screen><LoadingState label="Checking your session" /></Screen>;
   if (session.status !== 'signed-in') return <Screen testID="job-sheet"><SignInPrompt /></Screen>;
+  if (!(id > 0)) return <Screen><ErrorState message="This address does not name a job." /></Screen>;
   if (job.isPending) return <Screen><LoadingState label="Loading the job sheet" /></Screen>;
   if (job.error) return <Screen><ErrorState message={jobError(job.error)} onRetry={job.refetch} /></Screen>;
 

@@ -4,7 +4,8 @@ import { Calculator } from '../../components/calculator/calculator';
 import { Citation } from '../../components/library/citation';
 import { ProposeLinks } from '../../components/corrections/propose-links';
 import { modelTitle } from '../../components/library/model-title';
-import { RevisionList } from '../../components/library/revision-list';
+import { RevisionHistory } from '../../components/curation/revision-history';
+import { EditSpecButton } from '../../components/curation/edit-spec-button';
 import { SafetyNotes } from '../../components/library/safety-notes';
 import { SpecValues } from '../../components/library/spec-values';
 import { Screen } from '../../components/ui/screen';
@@ -37,7 +38,7 @@ export default function SpecCardScreen() {
   const reference = (
     <>
       <Citation spec={s} />
-      <RevisionList revisions={s.revisions} />
+      <RevisionHistory specId={s.id} />
       <ProposeLinks specId={s.id} />
     </>
   );
@@ -47,12 +48,13 @@ export default function SpecCardScreen() {
       <Pressable accessibilityRole="link" accessibilityLabel={`Open model sheet ${modelTitle(s.model)}`} onPress={() => router.push(`/models/${s.model.id}`)}>
         <Text color="primary">{modelTitle(s.model)}</Text>
       </Pressable>
+      <EditSpecButton specId={s.id} />
       <View style={[styles.columns, wide && styles.columnsWide]}>
-        <View style={styles.column}>
+        <View style={[styles.column, wide && styles.columnWide]}>
           <SpecValues spec={s} />
           {wide ? reference : check}
         </View>
-        <View style={styles.column}>{wide ? check : reference}</View>
+        <View style={[styles.column, wide && styles.columnWide]}>{wide ? check : reference}</View>
       </View>
     </Screen>
   );
@@ -61,5 +63,7 @@ export default function SpecCardScreen() {
 const styles = StyleSheet.create({
   columns: { gap: Spacing.lg },
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  column: { flex: 1, gap: Spacing.lg, minWidth: 0 },
+  column: { gap: Spacing.lg, minWidth: 0 },
+  // Side by side the columns share the width; stacked on a phone each takes its own height.
+  columnWide: { flex: 1 },
 });

@@ -23,6 +23,8 @@ export function BandPicture({ result }: { result: VerdictResult }) {
   const verdictColor = { pass: t.pass, marginal: t.marginal, fail: t.fail }[result.verdict];
   const lo = band.lower !== undefined ? x(band.lower) : 0;
   const hi = band.upper !== undefined ? x(band.upper) : width;
+  // Limit labels that would overlap are pushed apart: min to the left of its mark, max to the right.
+  const crowded = band.lower !== undefined && band.upper !== undefined && hi - lo < 90;
   const label = `Tolerance band: ${band.lower !== undefined ? `lower limit ${formatNumber(band.lower)}` : 'no lower limit'}, ${band.upper !== undefined ? `upper limit ${formatNumber(band.upper)}` : 'no upper limit'}, reading ${formatNumber(band.value)} ${result.unit}: ${result.verdict}`;
   return (
     <View testID="band-picture" accessibilityRole="image" accessibilityLabel={label} onLayout={(e) => setWidth(e.nativeEvent.layout.width)} style={styles.wrap}>
@@ -34,7 +36,8 @@ export function BandPicture({ result }: { result: VerdictResult }) {
             <Rect key={`${a}-${b}`} x={x(a)} y={AXIS_Y - 10} width={Math.max(1, x(b) - x(a))} height={20} fill={t.marginalSurface} stroke={t.marginal} strokeWidth={0.5} />
           ))}
           {[band.lower, band.upper].map((limit, i) => limit === undefined ? null : (
-            <LimitMark key={i} at={x(limit)} text={`${i === 0 ? 'min' : 'max'} ${formatNumber(limit)}`} color={t.text} width={width} />
+            <LimitMark key={i} at={x(limit)} text={`${i === 0 ? 'min' : 'max'} ${formatNumber(limit)}`} color={t.text} width={width}
+              side={crowded ? (i === 0 ? 'left' : 'right') : 'centre'} />
           ))}
           {band.interval && (
             <Line x1={x(band.interval[0])} x2={x(band.interval[1])} y1={AXIS_Y} y2={AXIS_Y} stroke={verdictColor} strokeWidth={4} strokeLinecap="round" />
@@ -53,11 +56,15 @@ export function BandPicture({ result }: { result: VerdictResult }) {
   );
 }
 
-function LimitMark({ at, text, color, width }: { at: number; text: string; color: string; width: number }) {
+type Side = 'left' | 'centre' | 'right';
+
+function LimitMark({ at, text, color, width, side }: { at: number; text: string; color: string; width: number; side: Side }) {
+  const anchor = side === 'left' ? 'end' : side === 'right' ? 'start' : 'middle';
+  const x = side === 'left' ? Math.max(at - 3, 70) : side === 'right' ? Math.min(at + 3, width - 70) : clamp(at, 28, width - 28);
   return (
     <>
       <Line x1={at} x2={at} y1={AXIS_Y - 16} y2={AXIS_Y + 16} stroke={color} strokeWidth={2} />
-      <SvgText x={clamp(at, 28, width - 28)} y={AXIS_Y - 22} fontSize={12} fontFamily={Fonts.regular} fill={color} textAnchor="middle">{text}</SvgText>
+      <SvgText x={x} y={AXIS_Y - 22} fontSize={12} fontFamily={Fonts.regular} fill={color} textAnchor={anchor}>{text}</SvgText>
     </>
   );
 }

@@ -24,7 +24,7 @@ import { NewJobForm } from './new-job-form';
 export type AddToJobProps = { input: VerdictInput | null; result: VerdictResult | null };
 
 // The job last used on this device in this visit: the next reading most likely belongs to it too.
-let lastJobId: number | null = null;
+let lastJob: { userId: number; jobId: number } | null = null;
 
 /**
  * "Add to job" under a calculator's verdict. On a spec card (route param specId) the
@@ -47,7 +47,9 @@ function AddToJobPanel({ input, result }: { input: VerdictInput; result: Verdict
   const router = useRouter();
   const params = useLocalSearchParams<{ specId?: string; job?: string; retake?: string }>();
   const specId = params.specId ? Number(params.specId) : undefined;
-  const [jobId, setJobId] = useState<number | null>(params.job ? Number(params.job) : lastJobId);
+  const { user } = useSession();
+  const remembered = lastJob && lastJob.userId === user?.id ? lastJob.jobId : null;
+  const [jobId, setJobId] = useState<number | null>(params.job ? Number(params.job) : remembered);
   const [retakeOf, setRetakeOf] = useState<number | undefined>(params.retake ? Number(params.retake) : undefined);
   const [mode, setMode] = useState<'idle' | 'picking' | 'creating'>('idle');
   const [label, setLabel] = useState('');
@@ -73,7 +75,7 @@ function AddToJobPanel({ input, result }: { input: VerdictInput; result: Verdict
       return;
     }
     setSending(true);
-    lastJobId = target;
+    if (user) lastJob = { userId: user.id, jobId: target };
     setJobId(target);
     setMode('idle');
     const body = toReadingBody(input, specId !== undefined ? { specId } : { label: typed }, { retakeOf });
@@ -107,9 +109,9 @@ function AddToJobPanel({ input, result }: { input: VerdictInput; result: Verdict
           modelsMessage={models.error ? describeError(models.error) : null} pending={create.isPending} failure={formFailure(create.error)}
           onCancel={() => setMode('picking')} onSubmit={(b) => create.mutate(b, { onSuccess: (job) => void send(job.id) })} />
       ) : null}
-      {mode === 'idle' ? (
+      {mode === 'idle' && !done ? (
         <View style={styles.actions}>
-          <Button label={sending ? 'Adding…' : jobId !== null ? `Add to job #${jobId}` : 'Add to job'} disabled={sending || !!done}
+          <Button label={sending ? 'Adding…' : jobId !== null ? `Add to job #${jobId}` : 'Add to job'} disabled={sending}
             onPress={() => (jobId !== null ? void send(jobId) : setMode('picking'))} testID="add-to-job-button" />
           {jobId !== null ? <Button label="Another job" variant="quiet" onPress={() => setMode('picking')} testID="add-to-job-change" /> : null}
         </View>

@@ -4,7 +4,7 @@
  */
 import type { JobSummaryDto, ReadingDto } from '../../lib/contracts/jobs';
 import { formatNumber, formatRange, type CanonicalUnit } from '../../lib/units';
-import type { VerdictResult } from '../../lib/verdict';
+import type { VerdictResult, VerdictStep } from '../../lib/verdict';
 
 export const OTHER_CHECKS = 'Other checks';
 
@@ -69,4 +69,21 @@ export function limitsText(limits: Record<string, unknown>): string {
   const n = (k: string) => (typeof limits[k] === 'number' ? (limits[k] as number) : null);
   const temp = n('refTempC') !== null && limits.material === 'copper' ? ` at ${formatNumber(n('refTempC')!)} °C` : '';
   return `${formatRange(n('min'), n('nominal'), n('max'), String(limits.unit ?? '') as CanonicalUnit)}${temp}`;
+}
+
+/** One working step on a line: 'label: formula = value unit' (formulas that end in their result are not repeated). */
+export function stepText(s: VerdictStep): string {
+  const result = `${formatNumber(s.value, 6)}${s.unit ? ` ${s.unit}` : ''}`;
+  if (!s.formula) return `${s.label} = ${result}`;
+  return s.formula.includes('=') ? `${s.label}: ${s.formula}` : `${s.label}: ${s.formula} = ${result}`;
+}
+
+/** 'Dec 2, 2026, 2:28 AM – 3:10 PM' (the date once when both ends fall on one day). */
+export function formatSpan(fromIso: string, toIso: string): string {
+  const from = formatWhen(fromIso);
+  const to = formatWhen(toIso);
+  if (from === to) return from;
+  const day = (iso: string) => new Date(iso).toDateString();
+  if (day(fromIso) !== day(toIso)) return `${from} – ${to}`;
+  return `${from} – ${new Date(toIso).toLocaleTimeString(undefined, { timeStyle: 'short' })}`;
 }

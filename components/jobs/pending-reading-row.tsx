@@ -15,7 +15,7 @@ export function PendingReadingRow({ item }: PendingReadingRowProps) {
   return (
     <View testID="pending-reading" style={[styles.row, { borderColor: t.border, backgroundColor: t.surfaceMuted }]}>
       <View style={styles.top}>
-        <Text variant="label" style={styles.grow}>{p.label}</Text>
+        <Text variant="label" style={styles.grow}>{p.label}{item.body.retakeOf !== undefined ? ' (re-take)' : ''}</Text>
         <Text variant="label" color="primary">Waiting to be sent</Text>
       </View>
       <Text>

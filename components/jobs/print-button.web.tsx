@@ -25,6 +25,19 @@ const PRINT_CSS = `
   #root * { color: ${Colors.light.text} !important; background-color: transparent !important; border-color: ${Colors.light.border} !important; }
 }`;
 
+/**
+ * The stack header above the screen holding `el`. React Navigation renders a screen as
+ * two siblings, its header (with the title as a heading) before its content; the header
+ * has no role or test id of its own, so it is found by that shape.
+ */
+function screenHeader(el: Element | null): Element | null {
+  for (let e = el; e?.parentElement; e = e.parentElement) {
+    const before = e.previousElementSibling;
+    if (before?.querySelector('h1, [role="heading"]')) return before;
+  }
+  return null;
+}
+
 /** A "Print" button (window.print) that also installs the report's print stylesheet. */
 export function PrintButton({ testID = 'report-print' }: PrintButtonProps) {
   useEffect(() => {
@@ -34,7 +47,7 @@ export function PrintButton({ testID = 'report-print' }: PrintButtonProps) {
     style.textContent = PRINT_CSS;
     document.head.appendChild(style);
     // Mark the app's header so the print rules can leave it off the paper.
-    const header = document.querySelector('header, [role="banner"]');
+    const header = screenHeader(document.querySelector('[data-testid="print-hide"]'));
     header?.setAttribute('data-print-hide', 'true');
     return () => {
       style.remove();

@@ -19,6 +19,8 @@ type Row = { componentName: string; reading?: ReadingDto; pending?: QueuedReadin
 
 /** The job's readings by component (hand-typed checks under "Other checks"), waiting ones among them. */
 export function ReadingGroups({ readings, pending, onRetake }: ReadingGroupsProps) {
+  // A reading whose re-take is still waiting on the device cannot be re-taken again.
+  const retakeWaiting = new Set(pending.map((p) => p.body.retakeOf));
   const rows: Row[] = [
     ...readings.map((r) => ({ componentName: r.componentName, reading: r })),
     ...pending.map((p) => ({ componentName: p.preview.componentName, pending: p })),
@@ -29,7 +31,8 @@ export function ReadingGroups({ readings, pending, onRetake }: ReadingGroupsProp
         <Card key={g.component} testID="reading-group">
           <Text variant="heading">{sentenceCase(g.component)}</Text>
           {g.readings.map((row) => (row.reading
-            ? <ReadingCard key={row.reading.id} reading={row.reading} onRetake={onRetake ? () => onRetake(row.reading!) : undefined} />
+            ? <ReadingCard key={row.reading.id} reading={row.reading}
+              onRetake={onRetake && !retakeWaiting.has(row.reading.id) ? () => onRetake(row.reading!) : undefined} />
             : <PendingReadingRow key={row.pending!.key} item={row.pending!} />))}
         </Card>
       ))}

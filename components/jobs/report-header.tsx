@@ -3,7 +3,7 @@ import type { JobDetailDto } from '../../lib/contracts/jobs';
 import { Spacing } from '../../lib/theme';
 import { useTheme } from '../../lib/theme/use-theme';
 import { Text } from '../ui/text';
-import { formatWhen, machineName } from './job-format';
+import { formatSpan, formatWhen, machineName } from './job-format';
 import { VerdictCounts } from './verdict-counts';
 
 export type ReportHeaderProps = { job: JobDetailDto; printedAt: string };
@@ -18,7 +18,7 @@ export function ReportHeader({ job, printedAt }: ReportHeaderProps) {
     ['Customer reference', job.customerRef || '—'],
     ['Job', `#${job.id} · ${job.status === 'open' ? 'open' : 'closed'} · technician ${job.ownerName}`],
     ['Opened', formatWhen(job.createdAt)],
-    ['Readings taken', times.length ? `${formatWhen(times[0])} – ${formatWhen(times[times.length - 1])}` : 'none'],
+    ['Readings taken', times.length ? formatSpan(times[0], times[times.length - 1]) : 'none'],
     ['Printed', formatWhen(printedAt)],
   ];
   return (

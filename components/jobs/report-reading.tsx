@@ -4,7 +4,7 @@ import { formatNumber } from '../../lib/units';
 import { Spacing } from '../../lib/theme';
 import { useTheme } from '../../lib/theme/use-theme';
 import { Text } from '../ui/text';
-import { formatWhen, inputLines, limitsText, sentenceCase } from './job-format';
+import { formatWhen, inputLines, limitsText, stepText } from './job-format';
 import { VerdictChip } from './verdict-chip';
 
 export type ReportReadingProps = { reading: ReadingDto; index: number };
@@ -16,7 +16,7 @@ export function ReportReading({ reading: r, index }: ReportReadingProps) {
     <View testID={`report-reading-${r.id}`} style={[styles.block, { borderTopColor: t.border }]}>
       <View style={styles.top}>
         <Text variant="label" style={styles.grow}>
-          {index}. {r.componentName ? `${sentenceCase(r.componentName)} — ` : ''}{r.label}
+          {index}. {r.label}
         </Text>
         <VerdictChip verdict={r.verdict} />
       </View>
@@ -29,9 +29,7 @@ export function ReportReading({ reading: r, index }: ReportReadingProps) {
       {r.specChangedSince ? <Text variant="small" color="caution">Note: the library’s spec was edited after this reading was judged.</Text> : null}
       <View style={styles.steps}>
         {r.steps.map((s, i) => (
-          <Text key={`${i}-${s.label}`} variant="small">
-            {i + 1}. {s.label}{s.formula ? `: ${s.formula}` : ''} = {formatNumber(s.value, 6)}{s.unit ? ` ${s.unit}` : ''}
-          </Text>
+          <Text key={`${i}-${s.label}`} variant="small">{i + 1}. {stepText(s)}</Text>
         ))}
       </View>
     </View>

@@ -24,6 +24,8 @@ let onUnauthorized: (() => void) | null = null;
 export function setAccessToken(token: string | null) {
   accessToken = token;
 }
+/** The session's bearer token, for the one request apiFetch cannot make (upload with progress, lib/api/upload.ts). */
+export const getAccessToken = () => accessToken;
 /** Called when a request made with a token is refused with 401: the session has ended. */
 export function setUnauthorizedHandler(handler: (() => void) | null) {
   onUnauthorized = handler;

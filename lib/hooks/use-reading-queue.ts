@@ -7,6 +7,7 @@
 import { useEffect, useSyncExternalStore } from 'react';
 import AsyncStorage from '@react-native-async-storage/async-storage';
 import { onlineManager, useQueryClient } from '@tanstack/react-query';
+import { ApiError } from '../api/client';
 import { addReading } from '../api/jobs';
 import { describeError } from '../api/describe-error';
 import { ReadingQueueRunner, type AddOutcome, type NewReading } from '../offline/queue-runner';
@@ -19,7 +20,7 @@ const RETRY_EVERY_MS = 10_000;
 const runner = new ReadingQueueRunner(
   { getItem: (k) => AsyncStorage.getItem(k), setItem: (k, v) => AsyncStorage.setItem(k, v) },
   (item) => addReading(item.jobId, item.body, item.key),
-  { describe: describeError },
+  { describe: (err) => (err instanceof ApiError && err.status === 404 ? 'That job is not among yours (it may have been removed).' : describeError(err)) },
 );
 
 export function useReadingQueue() {

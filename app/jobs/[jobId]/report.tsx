@@ -25,6 +25,7 @@ export default function JobReportScreen() {
 
   if (session.status === 'restoring') return <Screen><LoadingState label="Checking your session" /></Screen>;
   if (session.status !== 'signed-in') return <Screen testID="job-report"><SignInPrompt /></Screen>;
+  if (!(id > 0)) return <Screen><ErrorState message="This address does not name a job." /></Screen>;
   if (job.isPending) return <Screen><LoadingState label="Preparing the report" /></Screen>;
   if (job.error) return <Screen><ErrorState message={describeError(job.error)} onRetry={job.refetch} /></Screen>;
 

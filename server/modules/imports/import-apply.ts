@@ -8,9 +8,7 @@
  * created) by someone else since the preview aborts the whole commit with 409, so nothing
  * is applied on top of a change nobody saw.
  */
-import type { EntityManager as EM } from 'typeorm';
-type EntityManager = Pick<EM, 'query'>;
-const traced = (m0: EM): EntityManager => ({ query: (async (q: string, p: unknown[]) => { const t = Date.now(); const r = await m0.query(q, p); if (process.env.BENCH_TRACE) console.log('   ', q.replace(/\s+/g, ' ').slice(0, 50), Date.now() - t); return r; }) as EM['query'] });
+import type { EntityManager } from 'typeorm';
 import { AppError } from '../../errors/app-error';
 import type { Actor } from '../../auth/actor';
 import { FIRST } from './import-stage';
@@ -18,7 +16,10 @@ import { FIRST } from './import-stage';
 export type { Actor } from '../../auth/actor';
 
 const STAGED = 'import_batch_rows st';
-/** The staged rows read through (batch_id, firsts): the library steps need only each key's first row. */
+/**
+ * The staged rows read through (batch_id, firsts), for steps that need only a few rows (each
+ * make's, model's or source's first); components are many, and a plain scan reads them faster.
+ */
 const FIRSTS = 'import_batch_rows st FORCE INDEX (idx_import_batch_rows_firsts)';
 const CREATED = "st.batch_id = ? AND st.action = 'create'";
 /** `firsts` values with the bit set, so the index (batch_id, firsts) reads only those rows, not the whole batch. */
@@ -71,12 +72,12 @@ async function ensureModelsAndComponents(m: EntityManager, b: number) {
      WHERE ${CREATED} AND ${firstOf(FIRST.model)} AND mi.id > ?`, [b, models]);
   const components = await highestId(m, 'components');
   await m.query(`INSERT INTO import_component_ids SELECT STRAIGHT_JOIN st.component_ord, COALESCE(c.id, ? + st.component_ord)
-      FROM ${FIRSTS} JOIN import_model_ids mi ON mi.ord = st.model_ord
+      FROM ${STAGED} JOIN import_model_ids mi ON mi.ord = st.model_ord
       LEFT JOIN components c ON c.model_id = mi.id AND c.name_key = st.component_key
      WHERE ${CREATED} AND ${firstOf(FIRST.component)}`, [components, b]);
   await m.query(`INSERT INTO components (id, model_id, name, name_key)
     SELECT STRAIGHT_JOIN ci.id, mi.id, st.component, st.component_key
-      FROM ${FIRSTS} JOIN import_component_ids ci ON ci.ord = st.component_ord JOIN import_model_ids mi ON mi.ord = st.model_ord
+      FROM ${STAGED} JOIN import_component_ids ci ON ci.ord = st.component_ord JOIN import_model_ids mi ON mi.ord = st.model_ord
      WHERE ${CREATED} AND ${firstOf(FIRST.component)} AND ci.id > ?`, [b, components]);
 }
 
@@ -133,26 +134,26 @@ async function updateSpecs(m: EntityManager, batchId: number, expected: number) 
 }
 
 const REVISION = 'INSERT INTO spec_revisions (spec_id, version, snapshot, changed_fields, author_id, author_name, reason, origin, origin_ref)';
-/** The staged snapshot head (see import-stage.ts) completed with the source id and the status. */
-const snapshot = (status: string) => `CONCAT(st.snapshot, ',"sourceId":', si.id, ',"status":"', ${status}, '"}')`;
+/** The staged snapshot head (see import-stage.ts) completed with the cited source and the status. */
+const snapshot = (status: string) =>
+  `CONCAT(st.snapshot, ',"sourceId":', src.id, ',"sourceTitle":', JSON_QUOTE(src.title), ',"sourceEdition":', JSON_QUOTE(src.edition), ',"status":"', ${status}, '"}')`;
+const CITED = 'JOIN import_source_ids si ON si.ord = st.source_ord JOIN sources src ON src.id = si.id';
 
 async function insertRevisions(m: EntityManager, batchId: number, base: number, author: unknown[], counts: { created: number; updated: number }) {
   if (counts.created > 0) {
     await m.query(`${REVISION} SELECT STRAIGHT_JOIN ? + st.create_ord, 1, ${snapshot("'published'")}, '["created"]', ?, ?, ?, 'import', ?
-        FROM ${STAGED} JOIN import_source_ids si ON si.ord = st.source_ord WHERE ${CREATED}`, [base, ...author, batchId]);
+        FROM ${STAGED} ${CITED} WHERE ${CREATED}`, [base, ...author, batchId]);
   }
   if (counts.updated > 0) {
     await m.query(`${REVISION} SELECT STRAIGHT_JOIN s.id, s.version, ${snapshot('s.status')}, JSON_EXTRACT(st.changes, '$[*].field'), ?, ?, ?, 'import', ?
-        FROM ${STAGED} JOIN specs s ON s.id = st.spec_id JOIN import_source_ids si ON si.ord = st.source_ord
-       WHERE st.batch_id = ? AND st.action = 'update'`, [...author, batchId]);
+        FROM ${STAGED} JOIN specs s ON s.id = st.spec_id ${CITED} WHERE st.batch_id = ? AND st.action = 'update'`, [...author, batchId]);
   }
 }
 
 /** Applies a staged batch; the caller holds the transaction and has locked the batch row. */
 export async function applyImport(
-  m0: EM, batchId: number, actor: Actor, reason: string, counts: { created: number; updated: number },
+  m: EntityManager, batchId: number, actor: Actor, reason: string, counts: { created: number; updated: number },
 ): Promise<void> {
-  const m = traced(m0);
   await checkNotStale(m, batchId);
   if (counts.created + counts.updated === 0) return;
   await dropMaps(m);

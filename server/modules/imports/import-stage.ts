@@ -27,12 +27,12 @@ type Cell = string | number | null;
 const json = (value: unknown[]): string | null => (value.length ? JSON.stringify(value) : null);
 
 /**
- * The revision snapshot as JSON text without its last two fields and closing brace: the
- * commit appends `,"sourceId":<id>,"status":"<status>"}` with CONCAT once the source has an
- * id, which costs far less per row than parsing the JSON again (JSON_SET).
+ * The revision snapshot as JSON text without its source and status fields and without the
+ * closing brace: the commit appends the id, title and edition of the source the spec
+ * cites and its status with CONCAT, which costs far less per row than JSON_SET.
  */
 function snapshotHead(row: SpecCsvRow): string {
-  const { sourceId: _id, status: _status, ...head } = snapshotOfRow(row);
+  const { sourceId: _id, sourceTitle: _title, sourceEdition: _edition, status: _status, ...head } = snapshotOfRow(row);
   return JSON.stringify(head).slice(0, -1);
 }
 const problemsOf = (problems: RowProblem[]) => problems.map((p) => ({ column: p.column, reason: p.reason }));

@@ -1,0 +1,36 @@
+import { useController, type Control, type Path } from 'react-hook-form';
+import type { TextFieldProps } from '../ui/text-field';
+import { ChoiceRow } from '../ui/choice-row';
+import { Text } from '../ui/text';
+import { TextField } from '../ui/text-field';
+import type { SpecFormValues } from './spec-form-values';
+
+/** Any resolver output: the fields only read and write the typed text. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+export type SpecControl = Control<SpecFormValues, any, any>;
+type ChoiceName = 'material' | 'status' | 'unit';
+type TextName = Exclude<Path<SpecFormValues>, 'source' | 'material' | 'status'>;
+
+export type FormFieldProps = Omit<TextFieldProps, 'value' | 'onChangeText'> & { control: SpecControl; name: TextName };
+
+/** A TextField bound to one form value, with the field's error under it. */
+export function FormField({ control, name, ...rest }: FormFieldProps) {
+  const { field, fieldState } = useController({ control, name });
+  return (
+    <TextField value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message}
+      testID={`spec-form-${name}`} {...rest} />
+  );
+}
+
+export type FormChoiceProps = { control: SpecControl; name: ChoiceName; label: string; options: Array<{ value: string; label: string }> };
+
+/** A ChoiceRow bound to one form value (unit, material, status). */
+export function FormChoice({ control, name, label, options }: FormChoiceProps) {
+  const { field, fieldState } = useController({ control, name });
+  return (
+    <>
+      <ChoiceRow label={label} options={options} value={field.value} onChange={field.onChange} />
+      {fieldState.error ? <Text variant="small" color="fail" accessibilityRole="alert">{fieldState.error.message}</Text> : null}
+    </>
+  );
+}
