@@ -13,3 +13,23 @@ import_status=0
 DB_NAME=specbench_bench npx tsx --tsconfig server/tsconfig.json scripts/bench-import.ts || import_status=$?
 if [ "$db_state" = started ]; then bash "$ROOT/scripts/db.sh" stop; fi
 [ "$import_status" -eq 0 ] || exit "$import_status"
+
+# API and web: a server process of its own (so the load generator does not share its event
+# loop) on a throwaway database with the demo library, then spec reads under load and the
+# first screen in Chromium.
+db_state="$(bash "$ROOT/scripts/db.sh" start)"
+build_server
+build_web
+ensure_apt chromium chromium
+export DB_NAME=specbench_apibench PORT="${BENCH_PORT:-8091}" FAKE_SMTP_PORT=0 NODE_ENV=development
+node dist-server/server/cli/setup.js >/dev/null
+node dist-server/server/index.js >"$DATA_DIR/bench-server.log" 2>&1 &
+server_pid=$!
+for _ in $(seq 1 50); do curl -sf "http://127.0.0.1:$PORT/api/health" >/dev/null && break; sleep 0.2; done
+bench_status=0
+BENCH_URL="http://127.0.0.1:$PORT" npx tsx --tsconfig server/tsconfig.json scripts/bench-api.ts || bench_status=$?
+BENCH_URL="http://127.0.0.1:$PORT" npx tsx --tsconfig server/tsconfig.json scripts/bench-web.ts || bench_status=$?
+kill -TERM "$server_pid" 2>/dev/null; wait "$server_pid" 2>/dev/null || true
+db_sql "DROP DATABASE IF EXISTS specbench_apibench;"
+if [ "$db_state" = started ]; then bash "$ROOT/scripts/db.sh" stop; fi
+exit "$bench_status"

@@ -14,7 +14,7 @@ const preview = (over: Partial<ImportPreviewDto> = {}): ImportPreviewDto => ({
   uploaderName: 'Lead', createdAt: '2026-01-05T10:00:00Z', committedAt: null, committedByName: null,
   fileErrors: [],
   created: [row(2, { parameter: 'stator resistance', warnings: [{ line: 2, column: 'nominal', reason: 'nominal 45 is unusual' }] })],
-  updated: [row(3, { specId: 40, changes: [{ field: 'max', before: 3.2, after: 3.5 }] })],
+  updated: [{ ...row(3, { specId: 40 }), changes: [{ field: 'max', before: 3.2, after: 3.5 }] }],
   unchanged: [row(4, { specId: 41, parameter: 'secondary winding resistance' })],
   rejected: [
     { line: 5, column: 'min', reason: 'min 4 is greater than max 3' },

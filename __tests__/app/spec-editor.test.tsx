@@ -61,7 +61,7 @@ describe('SpecCreateForm', () => {
     render(<SpecCreateForm submitting={false} onSubmit={onSubmit} initial={EMPTY_SPEC_FORM} />);
     fireEvent.press(screen.getByTestId('spec-create-submit'));
     await waitFor(() => expect(screen.getByText('make is required')).toBeTruthy());
-    expect(screen.getByText('yearFrom must be a year')).toBeTruthy();
+    expect(screen.getByText('Year from must be a year')).toBeTruthy();
     expect(screen.getByText('source title is required')).toBeTruthy();
     expect(onSubmit).not.toHaveBeenCalled();
   });

@@ -1,9 +1,10 @@
-import type { Browser, Locator, Page } from 'playwright-core';
+import fs from 'node:fs';
+import type { Browser, Page } from 'playwright-core';
 import { AppDataSource } from '../../server/db/data-source';
 import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
-import { e2eAccount, signInThroughApi } from '../helpers/e2e-accounts';
-import { toCsv, uniqueMake, validRow, type Cells } from '../fixtures/csv/rows';
+import { csvRowOf, demoSpec, signedInEditor, until } from '../helpers/curation-e2e';
+import { toCsv, uniqueMake, validRow } from '../fixtures/csv/rows';
 
 useTestDatabase();
 let web: Awaited<ReturnType<typeof startWebServer>>;
@@ -18,37 +19,8 @@ afterAll(async () => {
   await web?.close();
 });
 
-type SpecRow = { id: number; min: number; nominal: number | null; max: number; version: number };
-
-/** A demo spec with both limits, its id and values; `skip` picks different specs for different tests. */
-async function demoSpec(skip: number): Promise<SpecRow> {
-  const [s] = await AppDataSource.query(
-    `SELECT id, min_value AS min, nominal_value AS nominal, max_value AS max, version FROM specs
-      WHERE quantity_kind = 'resistance' AND min_value IS NOT NULL AND max_value IS NOT NULL ORDER BY id LIMIT 1 OFFSET ?`, [skip]);
-  return s;
-}
-
-/** The spec as a CSV row of the import format, read from the database. */
-async function csvRowOf(specId: number): Promise<Cells> {
-  const [r] = await AppDataSource.query(
-    `SELECT mk.name AS make, vm.name AS model, vm.year_from, vm.year_to, vm.variant, c.name AS component, s.parameter,
-       s.min_value AS min, s.nominal_value AS nominal, s.max_value AS max, s.unit, s.ref_temp_c, s.material, s.test_points,
-       s.conditions, src.title AS source_title, src.edition AS source_edition, s.source_page, src.url AS source_url, s.notes
-     FROM specs s JOIN components c ON c.id = s.component_id JOIN vehicle_models vm ON vm.id = c.model_id
-     JOIN makes mk ON mk.id = vm.make_id LEFT JOIN sources src ON src.id = s.source_id WHERE s.id = ?`, [specId]);
-  return Object.fromEntries(Object.entries(r).map(([k, v]) => [k, v === null ? '' : String(v)])) as Cells;
-}
-
-async function editorPage(name: string, viewport = DESKTOP): Promise<Page> {
-  const editor = await e2eAccount('editor', name);
-  const page = await (await browser.newContext({ viewport })).newPage();
-  await signInThroughApi(page, web.url, editor.email);
-  return page;
-}
-
 const text = (page: Page, testId: string) => page.getByTestId(testId).innerText();
-/** Waits until the element's text matches (data may refresh after the first paint). */
-const until = (loc: Locator, re: RegExp | string) => loc.filter({ hasText: re }).waitFor();
+const editorPage = (name: string, viewport = DESKTOP) => signedInEditor(browser, web.url, name, viewport);
 
 it('an editor uploads a CSV, reads the dry run (updated, created, rejected with line numbers), commits once and sees the change on the spec card', async () => {
   const spec = await demoSpec(0);
@@ -100,6 +72,18 @@ it('an editor uploads a CSV, reads the dry run (updated, created, rejected with 
   // A batch commits once: the API refuses a second commit, whoever asks.
   const [{ n }] = await AppDataSource.query('SELECT COUNT(*) AS n FROM spec_revisions WHERE origin_ref = ?', [`batch #${batchId}`]);
   expect(Number(n)).toBe(2);
+
+  // The library exports in the same format, with the committed value, through a download that carries the token.
+  await page.goBack();
+  await screen.getByTestId('export-make').fill('Kestrel Moto');
+  const download = page.waitForEvent('download');
+  await screen.getByTestId('export-csv').click();
+  const saved = await download;
+  expect(saved.suggestedFilename()).toBe('specbench-specs-kestrel-moto.csv');
+  const exported = fs.readFileSync((await saved.path())!, 'utf8');
+  expect(exported.split(/\r?\n/)[0]).toMatch(/^\uFEFF?make,model,year_from/);
+  expect(exported).toContain(`,${newMax},`);
+  expect(exported).not.toContain(make);
 
   const phone = await editorPage('import-lead', PHONE);
   await phone.goto(`${web.url}/editor/import?batch=${batchId}`);

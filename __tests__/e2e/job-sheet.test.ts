@@ -100,7 +100,7 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
 
   // 1. Pass, mid-band: from the model sheet to the spec card, picking the job from the list.
   await page.getByTestId('job-open-model').click();
-  await page.getByTestId(`component-${primary.componentId}`).getByRole('link', { name: /^primary winding resistance:/ }).click();
+  await page.getByTestId(`component-${primary.componentId}`).getByRole('link', { name: /^primary winding resistance:/i }).click();
   await page.getByTestId('spec-screen').getByTestId('calculator').waitFor();
   const calc = page.getByTestId('spec-screen').getByTestId('calculator');
   await calc.getByLabel('Meter reading', { exact: true }).fill(String((primary.min + primary.max) / 2));

@@ -50,17 +50,18 @@ describe('POST /api/imports/:id/commit', () => {
   it("records in each revision the full snapshot with the cited source as the library spells it", async () => {
     const make = uniqueMake();
     await commit((await preview(validFile(make, 1))).id).expect(200);
-    const batch = await preview(toCsv([validRow(make, { component: 'ignition coil 1', source_title: 'INVENTED  workshop manual', max: '3.3' })]));
+    const notes = 'Ω "quoted", then a\nsecond line with a \\ backslash';
+    const batch = await preview(toCsv([validRow(make, { component: 'ignition coil 1', source_title: 'INVENTED  workshop manual', max: '3.3', notes })]));
     expect(batch.counts).toMatchObject({ updated: 1 });
     await commit(batch.id).expect(200);
     const specId = batch.updated[0].specId;
     const history = (await request(app).get(`/api/specs/${specId}/revisions`).expect(200)).body;
     expect(history.revisions[0].snapshot).toEqual({
       parameter: 'primary winding resistance', min: 2.4, nominal: 2.8, max: 3.3, unit: 'Ω', refTempC: 20, material: 'copper',
-      testPoints: 'black/yellow (+) to ground', conditions: 'engine cold', notes: null, sourcePage: '5-12',
+      testPoints: 'black/yellow (+) to ground', conditions: 'engine cold', notes, sourcePage: '5-12',
       sourceId: expect.any(Number), sourceTitle: 'Invented Workshop Manual', sourceEdition: '2nd edition', status: 'published',
     });
-    expect(history.revisions[0].changes).toEqual([{ field: 'max', before: 3.2, after: 3.3 }]);
+    expect(history.revisions[0].changes).toEqual([{ field: 'max', before: 3.2, after: 3.3 }, { field: 'notes', before: null, after: notes }]);
   });
 
   it('when rows were rejected, writes only the accepted ones', async () => {

@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { CommitPanel } from '../../components/curation/commit-panel';
 import { EditorGate } from '../../components/curation/editor-gate';
+import { ImportCounts } from '../../components/curation/import-counts';
 import { ImportPreview } from '../../components/curation/import-preview';
 import { LibraryFiles } from '../../components/curation/library-files';
 import { RecentImports } from '../../components/curation/recent-imports';
@@ -46,6 +47,7 @@ export default function ImportScreen() {
           <Text variant="heading">Import #{p.id}: {p.fileName}</Text>
           <Text variant="small" color="textMuted">Uploaded by {p.uploaderName} · {new Date(p.createdAt).toLocaleString()}</Text>
         </View>
+        <ImportCounts counts={p.counts} />
         <CommitPanel preview={p} committing={commit.isPending} error={commit.error} onCommit={() => commit.mutate()} onOpenSpec={openSpec} />
         <ImportPreview preview={p} onOpenSpec={openSpec} onPage={setOffset} />
       </>

@@ -5,13 +5,12 @@ import { Spacing } from '../../lib/theme';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
 import { FieldChanges } from './field-changes';
-import { ImportCounts } from './import-counts';
 import { ImportGroup } from './import-group';
 import { ImportRow, ProblemRow } from './import-row';
 
 export type ImportPreviewProps = { preview: ImportPreviewDto; onOpenSpec: (id: number) => void; onPage: (offset: number) => void };
 
-/** The dry run: totals, then the rows grouped as created, updated (field by field), unchanged, rejected and warnings. */
+/** The dry run's rows, grouped as created, updated (field by field), unchanged, rejected and warnings. */
 export function ImportPreview({ preview: p, onOpenSpec, onPage }: ImportPreviewProps) {
   const [showUnchanged, setShowUnchanged] = useState(false);
   const warnings = [...p.created, ...p.updated, ...p.unchanged].flatMap((r) => r.warnings).sort((a, b) => a.line - b.line);
@@ -19,7 +18,6 @@ export function ImportPreview({ preview: p, onOpenSpec, onPage }: ImportPreviewP
   const largest = Math.max(p.counts.created, p.counts.updated, p.counts.unchanged, p.counts.rejected);
   return (
     <View style={styles.wrap} testID="import-preview">
-      <ImportCounts counts={p.counts} />
       {p.fileErrors.length ? (
         <ImportGroup title="The file cannot be imported" total={p.fileErrors.length} testID="import-file-errors">
           {p.fileErrors.map((e, i) => <ProblemRow key={i} problem={e} />)}

@@ -16,13 +16,6 @@ export function LibraryFiles({ wide }: { wide: boolean }) {
   const [make, setMake] = useState('');
   return (
     <>
-      <Card testID="csv-template">
-        <Text variant="heading">The file format</Text>
-        <Text color="textMuted">UTF-8 CSV with a header row. A row matches a spec by make, model, years, variant, component and parameter.</Text>
-        <Button label="Download the template" variant="secondary" style={styles.button} onPress={() => template.mutate()} disabled={template.isPending} testID="download-template" />
-        {template.error ? <Text color="fail" accessibilityRole="alert">{describeError(template.error)}</Text> : null}
-        <ColumnReference initiallyOpen={wide} />
-      </Card>
       <Card testID="library-export">
         <Text variant="heading">Export the library</Text>
         <TextField label="Only this make (optional)" value={make} onChangeText={setMake} placeholder="All makes" testID="export-make" />
@@ -31,6 +24,13 @@ export function LibraryFiles({ wide }: { wide: boolean }) {
             onPress={() => exporter.mutate(make.trim() || undefined)} testID="export-csv" />
         </View>
         {exporter.error ? <Text color="fail" accessibilityRole="alert">{describeError(exporter.error)}</Text> : null}
+      </Card>
+      <Card testID="csv-template">
+        <Text variant="heading">The file format</Text>
+        <Text color="textMuted">UTF-8 CSV with a header row. A row matches a spec by make, model, years, variant, component and parameter.</Text>
+        <Button label="Download the template" variant="secondary" style={styles.button} onPress={() => template.mutate()} disabled={template.isPending} testID="download-template" />
+        {template.error ? <Text color="fail" accessibilityRole="alert">{describeError(template.error)}</Text> : null}
+        <ColumnReference initiallyOpen={wide} />
       </Card>
     </>
   );

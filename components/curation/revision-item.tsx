@@ -10,6 +10,7 @@ const ORIGIN = { edit: 'Edited', import: 'Imported', correction: 'Correction acc
 
 /** "Imported (batch #12)", "Reverted (to version 2)": how the revision came about and from what. */
 export function originText(r: RevisionDiffDto, all: RevisionDiffDto[]): string {
+  if (r.origin === 'edit' && r.changedFields[0] === 'created') return 'Created';
   if (!r.originRef) return ORIGIN[r.origin];
   const target = r.origin === 'revert' ? all.find((x) => `revision #${x.id}` === r.originRef) : undefined;
   return `${ORIGIN[r.origin]} (${target ? `to version ${target.version}` : r.originRef})`;
@@ -27,7 +28,7 @@ export function RevisionItem({ revision: r, origin, current, children }: Revisio
       <Text variant="small" color="textMuted">{new Date(r.createdAt).toLocaleString()} · {r.authorName}</Text>
       <Text variant="small">{r.reason}</Text>
       {created ? <Text variant="small" color="textMuted">Created with:</Text> : null}
-      <FieldChanges changes={r.changes} testID={`revision-${r.version}-changes`} />
+      <FieldChanges changes={r.changes} created={created} testID={`revision-${r.version}-changes`} />
       {children}
     </View>
   );

@@ -59,7 +59,6 @@ export class CurationImports1796176000000 implements MigrationInterface {
       \`source_edition\` varchar(200) NULL,
       \`source_page\` varchar(200) NULL,
       \`source_url\` varchar(500) NULL,
-      \`snapshot\` longtext NULL,
       \`changes\` longtext NULL,
       \`problems\` longtext NULL,
       PRIMARY KEY (\`batch_id\`, \`line\`),

@@ -1,10 +1,11 @@
 import { Router } from 'express';
 import { ExportQuery } from '../../../lib/contracts/imports';
 import { validate } from '../../middleware/validate';
-import { streamSpecsCsv } from './export.service';
+import { openSpecsExport } from './export.service';
+import { sendCsv } from './csv-download';
 
 export const exportRouter = Router();
 
 exportRouter.get('/specs.csv', validate('query', ExportQuery), async (_req, res) => {
-  await streamSpecsCsv(res, res.locals.query);
+  await sendCsv(res, await openSpecsExport(res.locals.query));
 });

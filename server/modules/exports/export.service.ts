@@ -1,9 +1,8 @@
 /**
  * Export of the published library in the import format (lib/csv toSpecCsv: RFC 4180, CRLF,
- * formula-like text neutralised), streamed in chunks so memory stays flat however large
- * the library. Exported and imported again, every row comes back "unchanged".
+ * formula-like text neutralised), produced in chunks of 1000 specs so memory stays flat
+ * however large the library. Exported and imported again, every row comes back "unchanged".
  */
-import type { Response } from 'express';
 import type { ExportQuery } from '../../../lib/contracts/imports';
 import { toSpecCsv, type SpecCsvRow } from '../../../lib/csv';
 import type { CanonicalUnit } from '../../../lib/units';
@@ -57,30 +56,18 @@ async function rowsFor(ids: number[]): Promise<SpecCsvRow[]> {
   return ids.map((id) => byId.get(id)).filter((r): r is SpecCsvRow => r !== undefined);
 }
 
-/** Writes one chunk, waiting while the client's buffer is full (or until it hangs up). */
-async function send(res: Response, chunk: string): Promise<void> {
-  if (res.write(chunk)) return;
-  await new Promise<void>((resolve) => {
-    const done = () => { res.off('drain', done); res.off('close', done); resolve(); };
-    res.on('drain', done).on('close', done);
-  });
+export type CsvDownload = { fileName: string; chunks: AsyncGenerator<string> };
+
+async function* csvChunks(ids: number[]): AsyncGenerator<string> {
+  yield BOM + toSpecCsv([]);
+  for (let i = 0; i < ids.length; i += CHUNK) {
+    const csv = toSpecCsv(await rowsFor(ids.slice(i, i + CHUNK)));
+    yield csv.slice(csv.indexOf('\r\n') + 2); // toSpecCsv always begins with the header line
+  }
 }
 
-/** Answers 404 before the first byte when the make or model is unknown; then streams the file. */
-export async function streamSpecsCsv(res: Response, query: ExportQuery): Promise<void> {
+/** Resolves the filter first, so an unknown make or model is a 404 before the first byte. */
+export async function openSpecsExport(query: ExportQuery): Promise<CsvDownload> {
   const filter = await resolveFilter(query);
-  const ids = await orderedIds(filter);
-  res.attachment(`specbench-specs${filter.label}.csv`).type('text/csv; charset=utf-8').setHeader('Cache-Control', 'no-store');
-  try {
-    await send(res, BOM + toSpecCsv([]));
-    for (let i = 0; i < ids.length && !res.destroyed; i += CHUNK) {
-      const csv = toSpecCsv(await rowsFor(ids.slice(i, i + CHUNK)));
-      await send(res, csv.slice(csv.indexOf('\r\n') + 2)); // toSpecCsv always begins with the header line
-    }
-    res.end();
-  } catch (err) {
-    // The status line has gone out: cut the download short rather than append an error to it.
-    console.error('CSV export failed part-way:', err);
-    res.destroy(err as Error);
-  }
+  return { fileName: `specbench-specs${filter.label}.csv`, chunks: csvChunks(await orderedIds(filter)) };
 }

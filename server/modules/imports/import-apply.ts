@@ -134,9 +134,11 @@ async function updateSpecs(m: EntityManager, batchId: number, expected: number) 
 }
 
 const REVISION = 'INSERT INTO spec_revisions (spec_id, version, snapshot, changed_fields, author_id, author_name, reason, origin, origin_ref)';
-/** The staged snapshot head (see import-stage.ts) completed with the cited source and the status. */
-const snapshot = (status: string) =>
-  `CONCAT(st.snapshot, ',"sourceId":', src.id, ',"sourceTitle":', JSON_QUOTE(src.title), ',"sourceEdition":', JSON_QUOTE(src.edition), ',"status":"', ${status}, '"}')`;
+/** The revision snapshot (the SpecSnapshot of spec-snapshot.ts) built from the staged values and the cited source. */
+const snapshot = (status: string) => `JSON_OBJECT('parameter', st.parameter, 'min', st.min_value, 'nominal', st.nominal_value,
+  'max', st.max_value, 'unit', st.unit, 'refTempC', st.ref_temp_c, 'material', st.material, 'testPoints', st.test_points,
+  'conditions', st.conditions, 'notes', st.notes, 'sourcePage', st.source_page, 'sourceId', src.id, 'sourceTitle', src.title,
+  'sourceEdition', src.edition, 'status', ${status})`;
 const CITED = 'JOIN import_source_ids si ON si.ord = st.source_ord JOIN sources src ON src.id = si.id';
 
 async function insertRevisions(m: EntityManager, batchId: number, base: number, author: unknown[], counts: { created: number; updated: number }) {

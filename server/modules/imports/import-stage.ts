@@ -5,10 +5,9 @@
  * works on this table set-based, see import-apply.ts).
  */
 import type { EntityManager } from 'typeorm';
-import type { RowProblem, SpecCsvRow } from '../../../lib/csv';
+import type { RowProblem } from '../../../lib/csv';
 import { unitKind } from '../../../lib/units';
 import { foldKey, makeKey, modelKey, sourceKey } from '../library/keys';
-import { snapshotOfRow } from '../specs/spec-snapshot';
 import type { PlannedRow } from './import-plan';
 
 /** Rows per INSERT: about 1 KB each, far below max_allowed_packet (16 MB). */
@@ -19,22 +18,13 @@ const COLUMNS = [
   'component', 'parameter', 'make_key', 'model_key', 'component_key', 'parameter_key', 'source_key',
   'model_ord', 'component_ord', 'source_ord', 'firsts', 'create_ord',
   'quantity_kind', 'min_value', 'nominal_value', 'max_value', 'unit', 'ref_temp_c', 'material', 'test_points',
-  'conditions', 'notes', 'source_title', 'source_edition', 'source_page', 'source_url', 'snapshot', 'changes', 'problems',
+  'conditions', 'notes', 'source_title', 'source_edition', 'source_page', 'source_url', 'changes', 'problems',
 ];
 const INSERT = `INSERT INTO import_batch_rows (${COLUMNS.map((c) => `\`${c}\``).join(', ')}) VALUES ?`;
 
 type Cell = string | number | null;
 const json = (value: unknown[]): string | null => (value.length ? JSON.stringify(value) : null);
 
-/**
- * The revision snapshot as JSON text without its source and status fields and without the
- * closing brace: the commit appends the id, title and edition of the source the spec
- * cites and its status with CONCAT, which costs far less per row than JSON_SET.
- */
-function snapshotHead(row: SpecCsvRow): string {
-  const { sourceId: _id, sourceTitle: _title, sourceEdition: _edition, status: _status, ...head } = snapshotOfRow(row);
-  return JSON.stringify(head).slice(0, -1);
-}
 const problemsOf = (problems: RowProblem[]) => problems.map((p) => ({ column: p.column, reason: p.reason }));
 
 /** Bits of `firsts`: the row is the first of the batch's created rows to need this make, model, component or source. */
@@ -71,11 +61,15 @@ class Numbering {
 
 function keyCells(p: PlannedRow, n: Numbering): Cell[] {
   const r = p.row;
-  const keys = { make: makeKey(r.make), model: modelKey(r), component: foldKey(r.component), parameter: foldKey(r.parameter), source: sourceKey({ title: r.sourceTitle, edition: r.sourceEdition }) };
+  const keys = {
+    make: makeKey(r.make), model: modelKey(r), component: foldKey(r.component), parameter: foldKey(r.parameter),
+    source: sourceKey({ title: r.sourceTitle, edition: r.sourceEdition }),
+  };
   const componentKey = `${keys.model}|${keys.component}`;
   const creates = p.action === 'create';
-  const firsts = (creates && n.first(`m:${keys.make}`) ? FIRST.make : 0) | (creates && n.first(`v:${keys.model}`) ? FIRST.model : 0)
-    | (creates && n.first(`c:${componentKey}`) ? FIRST.component : 0) | (p.action !== 'unchanged' && n.first(`s:${keys.source}`) ? FIRST.source : 0);
+  const bit = (needed: boolean, key: string, value: number) => (needed && n.first(key) ? value : 0);
+  const firsts = bit(creates, `m:${keys.make}`, FIRST.make) | bit(creates, `v:${keys.model}`, FIRST.model)
+    | bit(creates, `c:${componentKey}`, FIRST.component) | bit(p.action !== 'unchanged', `s:${keys.source}`, FIRST.source);
   return [
     keys.make, keys.model, keys.component, keys.parameter, keys.source,
     n.ord(`v:${keys.model}`), n.ord(`c:${componentKey}`), n.ord(`s:${keys.source}`), firsts, creates ? n.nextCreated() : null,
@@ -89,7 +83,7 @@ function plannedCells(batchId: number, p: PlannedRow, warnings: RowProblem[], n:
     r.component.trim(), r.parameter.trim(), ...keyCells(p, n),
     unitKind(r.unit), r.min, r.nominal, r.max, r.unit, r.refTempC, r.material, r.testPoints || null,
     r.conditions || null, r.notes || null, r.sourceTitle.trim(), r.sourceEdition.trim(), r.sourcePage || null, r.sourceUrl,
-    snapshotHead(r), json(p.changes), json(problemsOf(warnings)),
+    json(p.changes), json(problemsOf(warnings)),
   ];
 }
 

@@ -7,6 +7,7 @@ import type { SearchQuery, SearchResultDto, SearchGroupDto, QuantityKind } from 
 import { formatRange, type CanonicalUnit } from '../../../lib/units';
 import { AppDataSource } from '../../db/data-source';
 import { SearchIndex, type SearchDoc } from './search-index';
+import { markLibraryChanged, onLibraryChanged } from '../library/library-changes';
 
 type IndexedSpec = SearchDoc & {
   makeId: number; quantityKind: QuantityKind; min: number | null; nominal: number | null; max: number | null; unit: string;
@@ -16,9 +17,10 @@ const RECHECK_MS = 3000;
 let state: { index: SearchIndex; fingerprint: string; checkedAt: number } | null = null;
 let building: Promise<SearchIndex> | null = null;
 
-export function markLibraryChanged() {
+export { markLibraryChanged };
+onLibraryChanged(() => {
   if (state) state.checkedAt = 0;
-}
+});
 
 async function fingerprint(): Promise<string> {
   const [row] = await AppDataSource.query("SELECT COUNT(*) AS n, MAX(updated_at) AS t FROM specs WHERE status = 'published'");

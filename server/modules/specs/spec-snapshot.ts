@@ -1,10 +1,9 @@
 /**
- * Revision snapshots: the full values of a spec as one revision left them, built the same
- * way by the editor, the reverter and the importer, and compared field by field for the
- * history's diffs.
+ * Revision snapshots: the full values of a spec as one revision left them, built here for
+ * the editor and the reverter (the importer builds the same object in SQL, JSON_OBJECT in
+ * import-apply.ts), and compared field by field for the history's diffs.
  */
 import type { FieldChangeDto } from '../../../lib/contracts/curation';
-import type { SpecCsvRow } from '../../../lib/csv';
 import type { Source } from '../library/source.entity';
 import type { Spec } from './spec.entity';
 import type { SpecSnapshot } from './spec-revision.entity';
@@ -23,17 +22,6 @@ export function snapshotOfSpec(spec: SpecValues, source: Pick<Source, 'id' | 'ti
     refTempC: spec.refTempC, material: spec.material, testPoints: spec.testPoints, conditions: spec.conditions,
     notes: spec.notes, sourceId: source?.id ?? null, sourceTitle: source?.title ?? null,
     sourceEdition: source?.edition ?? null, sourcePage: spec.sourcePage, status: spec.status,
-  };
-}
-
-/** An imported row's snapshot; sourceId and status are filled in by the commit (JSON_SET). */
-export function snapshotOfRow(row: SpecCsvRow): SpecSnapshot {
-  return {
-    parameter: row.parameter.trim(), min: row.min, nominal: row.nominal, max: row.max, unit: row.unit,
-    refTempC: row.refTempC, material: row.material, testPoints: row.testPoints || null,
-    conditions: row.conditions || null, notes: row.notes || null, sourceId: null,
-    sourceTitle: row.sourceTitle.trim(), sourceEdition: row.sourceEdition.trim(), sourcePage: row.sourcePage || null,
-    status: 'published',
   };
 }
 

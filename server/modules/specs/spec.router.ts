@@ -1,10 +1,10 @@
 import { Router } from 'express';
 import { IdParams } from '../../../lib/contracts/library';
 import { validate } from '../../middleware/validate';
-import { getSpec } from './spec.service';
+import { readSpec } from './spec.service';
 
 export const specRouter = Router();
 
 specRouter.get('/:id', validate('params', IdParams), async (_req, res) => {
-  res.json(await getSpec(res.locals.params.id));
+  res.json(await readSpec(res.locals.params.id));
 });

@@ -5,6 +5,7 @@ import { AppError } from '../../errors/app-error';
 import { Spec } from './spec.entity';
 import { SpecRevision } from './spec-revision.entity';
 import { toComponent, toModelRef, toRevision, toSource, toSpecSummary } from './spec.mapper';
+import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
 
 export async function getSpec(id: number): Promise<SpecDetailDto> {
   const spec = await AppDataSource.getRepository(Spec).findOne({
@@ -22,4 +23,28 @@ export async function getSpec(id: number): Promise<SpecDetailDto> {
     updatedAt: spec.updatedAt.toISOString(),
     revisions: revisions.map(toRevision),
   };
+}
+
+/**
+ * Spec cards are read far more often than written: GET /api/specs/:id answers from a
+ * small in-memory cache, dropped whenever the library changes in this process and
+ * trusted for at most a few seconds (another server process may have written).
+ * Writers use getSpec(), which always reads the database.
+ */
+const CACHE_TTL_MS = 5000;
+const CACHE_MAX = 5000;
+const cache = new Map<number, { dto: SpecDetailDto; at: number }>();
+onLibraryChanged(() => cache.clear());
+
+export async function readSpec(id: number): Promise<SpecDetailDto> {
+  const hit = cache.get(id);
+  if (hit && Date.now() - hit.at < CACHE_TTL_MS) return hit.dto;
+  const generation = libraryGeneration();
+  const dto = await getSpec(id);
+  // A write that landed while this read was under way may not be in it: do not keep it.
+  if (generation === libraryGeneration()) {
+    if (cache.size >= CACHE_MAX) cache.delete(cache.keys().next().value!);
+    cache.set(id, { dto, at: Date.now() });
+  }
+  return dto;
 }
