@@ -1,16 +1,13 @@
 import { useState } from 'react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { Stack } from 'expo-router';
-import { useFonts } from 'expo-font';
-import { SourceSans3_400Regular } from '@expo-google-fonts/source-sans-3/400Regular';
-import { SourceSans3_600SemiBold } from '@expo-google-fonts/source-sans-3/600SemiBold';
-import { SourceSans3_700Bold } from '@expo-google-fonts/source-sans-3/700Bold';
 import { ApiError } from '../lib/api/client';
 import { SessionProvider } from '../lib/session/session-provider';
 import { HeaderAccount } from '../components/ui/header-account';
 import { ReadingQueueSync } from '../components/jobs/reading-queue-sync';
 import { Fonts } from '../lib/theme';
 import { useTheme } from '../lib/theme/use-theme';
+import { useAppFonts } from '../lib/theme/use-app-fonts';
 
 export { ErrorBoundary } from 'expo-router';
 
@@ -28,9 +25,9 @@ function makeQueryClient() {
 
 export default function RootLayout() {
   const [queryClient] = useState(makeQueryClient);
-  const [fontsLoaded, fontError] = useFonts({ SourceSans3_400Regular, SourceSans3_600SemiBold, SourceSans3_700Bold });
+  const fontsReady = useAppFonts();
   const t = useTheme();
-  if (!fontsLoaded && !fontError) return null;
+  if (!fontsReady) return null;
   return (
     <QueryClientProvider client={queryClient}>
       <SessionProvider>

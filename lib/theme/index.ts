@@ -1,3 +1,5 @@
+import { Platform } from 'react-native';
+
 /**
  * The one theme module: colours for light and dark, spacing, radii and type.
  * Nothing else in the app picks a colour.
@@ -51,10 +53,15 @@ export type ThemeColor = keyof ThemeColors;
 export const Spacing = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
 export const Radius = { sm: 4, md: 8, lg: 12 } as const;
 
+/** On the web a system sans-serif stands in until Source Sans 3 has loaded (no flash of serif text). */
+const withFallback = (family: string) =>
+  Platform.OS === 'web' ? `${family}, system-ui, -apple-system, "Segoe UI", Roboto, sans-serif` : family;
+
 export const Fonts = {
-  regular: 'SourceSans3_400Regular',
-  semibold: 'SourceSans3_600SemiBold',
-  bold: 'SourceSans3_700Bold',
+  regular: withFallback('SourceSans3_400Regular'),
+  semibold: withFallback('SourceSans3_600SemiBold'),
+  // Two weights are bundled; headings use the semibold.
+  bold: withFallback('SourceSans3_600SemiBold'),
 } as const;
 
 export const Type = {

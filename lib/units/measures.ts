@@ -7,7 +7,10 @@
  * (1 in = 25.4 mm, NIST SP 811 Appendix B). 0.3048 = 381/1250 exactly.
  */
 import configureMeasurements, { type Measure, type Unit } from 'convert-units';
-import allMeasures from 'convert-units/definitions/all';
+// Only the measures Specbench uses: the full set would add every unit of mass, energy… to the app bundle.
+import baseLength from 'convert-units/definitions/length';
+import voltage from 'convert-units/definitions/voltage';
+import current from 'convert-units/definitions/current';
 
 type ResistanceUnit = 'Ω' | 'kΩ' | 'MΩ';
 
@@ -26,8 +29,6 @@ export const resistance: Measure<'SI', ResistanceUnit> = {
   },
 };
 
-const baseLength = allMeasures.length as Measure<string, string>;
-
 export const length: Measure<string, string> = {
   systems: {
     ...baseLength.systems,
@@ -44,7 +45,8 @@ export const length: Measure<string, string> = {
 };
 
 export const convertUnits = configureMeasurements({
-  ...(allMeasures as Record<string, Measure<string, string>>),
   length,
+  voltage,
+  current,
   resistance,
 } as Record<string, Measure<string, string>>);
