@@ -5,8 +5,7 @@ import { ApiError } from '../lib/api/client';
 import { SessionProvider } from '../lib/session/session-provider';
 import { HeaderAccount } from '../components/ui/header-account';
 import { ReadingQueueSync } from '../components/jobs/reading-queue-sync';
-import { Fonts } from '../lib/theme';
-import { useTheme } from '../lib/theme/use-theme';
+import { useHeaderOptions } from '../lib/theme/use-header-options';
 import { useAppFonts } from '../lib/theme/use-app-fonts';
 
 export { ErrorBoundary } from 'expo-router';
@@ -26,7 +25,7 @@ function makeQueryClient() {
 export default function RootLayout() {
   const [queryClient] = useState(makeQueryClient);
   const fontsReady = useAppFonts();
-  const t = useTheme();
+  const header = useHeaderOptions();
   if (!fontsReady) return null;
   return (
     <QueryClientProvider client={queryClient}>
@@ -34,10 +33,7 @@ export default function RootLayout() {
       <ReadingQueueSync />
       <Stack
         screenOptions={{
-          headerStyle: { backgroundColor: t.surface },
-          headerTintColor: t.primary,
-          headerTitleStyle: { fontFamily: Fonts.semibold, color: t.text },
-          contentStyle: { backgroundColor: t.background },
+          ...header,
           headerRight: () => <HeaderAccount />,
         }}
       >

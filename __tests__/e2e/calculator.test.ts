@@ -1,23 +1,13 @@
-import type { Browser, Page } from 'playwright-core';
-import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
+import type { Page } from 'playwright-core';
+import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 import { AppDataSource } from '../../server/db/data-source';
 
 useTestDatabase();
-let web: Awaited<ReturnType<typeof startWebServer>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  web = await startWebServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await web?.close();
-});
+const app = useWebApp();
 
 async function openPrimaryWindingCard(page: Page) {
-  await page.goto(web.url);
+  await page.goto(app.url);
   await page.getByTestId('search-screen').getByLabel('Search specs').fill('kestrl 900 primry');
   await page.getByTestId('search-results').locator('[data-testid^="hit-"]').first().click();
   await page.getByTestId('spec-screen').getByTestId('calculator').waitFor();
@@ -25,7 +15,7 @@ async function openPrimaryWindingCard(page: Page) {
 
 describe.each([['phone', PHONE], ['desktop', DESKTOP]])('inline calculator at %s size', (name, viewport) => {
   it('a reading with lead resistance and meter accuracy gives a verdict, the band picture and the steps', async () => {
-    const page = await browser.newPage({ viewport });
+    const page = await app.browser.newPage({ viewport });
     await openPrimaryWindingCard(page);
     const specId = Number(new URL(page.url()).pathname.split('/').pop());
     const [spec] = await AppDataSource.query('SELECT min_value AS min, max_value AS max FROM specs WHERE id = ?', [specId]);
@@ -52,8 +42,8 @@ describe.each([['phone', PHONE], ['desktop', DESKTOP]])('inline calculator at %s
 });
 
 it('the standalone calculator judges limits typed by hand and remembers the meter accuracy on the device', async () => {
-  const page = await browser.newPage({ viewport: PHONE });
-  await page.goto(`${web.url}/calculator`);
+  const page = await app.browser.newPage({ viewport: PHONE });
+  await page.goto(`${app.url}/calculator`);
   const screen = page.getByTestId('calculator-screen');
   await screen.getByLabel('Minimum', { exact: true }).fill('0.7');
   await screen.getByLabel('Maximum', { exact: true }).fill('0.8');

@@ -1,21 +1,10 @@
-import type { Browser } from 'playwright-core';
 import { AppDataSource } from '../../server/db/data-source';
-import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
+import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 import { e2eAccount, signInThroughApi } from '../helpers/e2e-accounts';
 
 useTestDatabase();
-let web: Awaited<ReturnType<typeof startWebServer>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  web = await startWebServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await web?.close();
-});
+const app = useWebApp();
 
 it('a contributor proposes, an editor accepts, the contributor sees the decision and the spec card the new value with its history', async () => {
   const [spec] = await AppDataSource.query("SELECT id, max_value AS max FROM specs WHERE quantity_kind = 'resistance' AND min_value IS NOT NULL AND max_value IS NOT NULL ORDER BY id DESC LIMIT 1");
@@ -23,9 +12,9 @@ it('a contributor proposes, an editor accepts, the contributor sees the decision
   const contributor = await e2eAccount('contributor', 'propose-tech');
   const editor = await e2eAccount('editor', 'review-lead');
 
-  const tech = await (await browser.newContext({ viewport: PHONE })).newPage();
-  await signInThroughApi(tech, web.url, contributor.email);
-  await tech.goto(`${web.url}/specs/${spec.id}`);
+  const tech = await (await app.browser.newContext({ viewport: PHONE })).newPage();
+  await signInThroughApi(tech, app.url, contributor.email);
+  await tech.goto(`${app.url}/specs/${spec.id}`);
   await tech.getByTestId('spec-screen').getByTestId('propose-correction').click();
   const form = tech.getByTestId('propose-screen');
   await form.getByLabel('Maximum', { exact: true }).fill(String(newMax));
@@ -39,8 +28,8 @@ it('a contributor proposes, an editor accepts, the contributor sees the decision
   const id = Number((await mine.getByText(/^#\d+ · Waiting/).first().innerText()).match(/#(\d+)/)![1]);
   await screenshot(tech, 'my-proposals-pending-phone');
 
-  const lead = await (await browser.newContext({ viewport: DESKTOP })).newPage();
-  await signInThroughApi(lead, web.url, editor.email);
+  const lead = await (await app.browser.newContext({ viewport: DESKTOP })).newPage();
+  await signInThroughApi(lead, app.url, editor.email);
   await lead.getByTestId('review-badge').click();
   await lead.getByTestId('review-queue-screen').getByTestId(`review-${id}`).click();
   const review = lead.getByTestId('review-screen');
@@ -56,7 +45,7 @@ it('a contributor proposes, an editor accepts, the contributor sees the decision
   await tech.getByTestId('my-proposals-screen').getByText(`#${id} · Accepted`).waitFor();
   await expect(tech.getByTestId(`decision-${id}`).innerText()).resolves.toMatch(/Checked against SB-31/);
   await screenshot(tech, 'my-proposals-decided-phone');
-  await tech.goto(`${web.url}/specs/${spec.id}`);
+  await tech.goto(`${app.url}/specs/${spec.id}`);
   const card = tech.getByTestId('spec-screen');
   await expect(card.getByTestId('spec-display').innerText()).resolves.toContain(String(newMax));
   await expect(card.getByTestId('revision-list').innerText()).resolves.toMatch(new RegExp(`correction #${id}`));

@@ -1,26 +1,15 @@
-import type { Browser } from 'playwright-core';
-import { PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
+import { PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 import { e2eAccount, signInThroughApi } from '../helpers/e2e-accounts';
 import { signedInEditor, until } from '../helpers/curation-e2e';
 import { uniqueMake } from '../fixtures/csv/rows';
 
 useTestDatabase();
-let web: Awaited<ReturnType<typeof startWebServer>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  web = await startWebServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await web?.close();
-});
+const app = useWebApp();
 
 it('an editor creates a spec from the home screen; the form shows the schema’s messages first, then the card opens', async () => {
   const make = uniqueMake('E2E New');
-  const page = await signedInEditor(browser, web.url, 'create-lead', PHONE);
+  const page = await signedInEditor(app.browser, app.url, 'create-lead', PHONE);
   await page.getByTestId('home-new-spec').click();
   const form = page.getByTestId('spec-create-form');
   await form.getByLabel('Make', { exact: true }).fill(make);
@@ -49,13 +38,13 @@ it('an editor creates a spec from the home screen; the form shows the schema’s
 });
 
 it('the editor screens show a sign-in prompt when signed out and "Editors only" to other roles', async () => {
-  const page = await (await browser.newContext({ viewport: PHONE })).newPage();
-  await page.goto(`${web.url}/editor/import`);
+  const page = await (await app.browser.newContext({ viewport: PHONE })).newPage();
+  await page.goto(`${app.url}/editor/import`);
   await page.getByTestId('import-screen').getByTestId('sign-in-prompt').waitFor();
   const tech = await e2eAccount('contributor', 'curious-tech');
-  await signInThroughApi(page, web.url, tech.email);
+  await signInThroughApi(page, app.url, tech.email);
   expect(await page.getByTestId('home-import').count()).toBe(0);
-  await page.goto(`${web.url}/editor/specs/new`);
+  await page.goto(`${app.url}/editor/specs/new`);
   await page.getByTestId('new-spec-screen').getByText(/^Editors only/).waitFor();
   expect(await page.getByTestId('spec-create-form').count()).toBe(0);
 });

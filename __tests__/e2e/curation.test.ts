@@ -1,26 +1,16 @@
 import fs from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { AppDataSource } from '../../server/db/data-source';
-import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
+import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 import { csvRowOf, demoSpec, signedInEditor, until } from '../helpers/curation-e2e';
 import { toCsv, uniqueMake, validRow } from '../fixtures/csv/rows';
 
 useTestDatabase();
-let web: Awaited<ReturnType<typeof startWebServer>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  web = await startWebServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await web?.close();
-});
+const app = useWebApp();
 
 const text = (page: Page, testId: string) => page.getByTestId(testId).innerText();
-const editorPage = (name: string, viewport = DESKTOP) => signedInEditor(browser, web.url, name, viewport);
+const editorPage = (name: string, viewport = DESKTOP) => signedInEditor(app.browser, app.url, name, viewport);
 
 it('an editor uploads a CSV, reads the dry run (updated, created, rejected with line numbers), commits once and sees the change on the spec card', async () => {
   const spec = await demoSpec(0);
@@ -86,7 +76,7 @@ it('an editor uploads a CSV, reads the dry run (updated, created, rejected with 
   expect(exported).not.toContain(make);
 
   const phone = await editorPage('import-lead', PHONE);
-  await phone.goto(`${web.url}/editor/import?batch=${batchId}`);
+  await phone.goto(`${app.url}/editor/import?batch=${batchId}`);
   await phone.getByTestId('commit-done').waitFor();
   await screenshot(phone, 'curation-import-phone');
 });
@@ -95,7 +85,7 @@ it('an editor edits a spec through the form; the card shows the new value and th
   const spec = await demoSpec(1);
   const newMax = Number((spec.max * 1.05).toFixed(2));
   const page = await editorPage('form-lead');
-  await page.goto(`${web.url}/specs/${spec.id}`);
+  await page.goto(`${app.url}/specs/${spec.id}`);
   await page.getByTestId('spec-screen').getByTestId('edit-spec').click();
   const form = page.getByTestId('spec-edit-form');
   await form.getByLabel('Maximum', { exact: true }).fill(String(newMax));
@@ -116,7 +106,7 @@ it('two editors save the same spec: the second sees both values side by side, re
   const first = await editorPage('stale-first');
   const second = await editorPage('stale-second');
   for (const p of [first, second]) {
-    await p.goto(`${web.url}/editor/specs/${spec.id}`);
+    await p.goto(`${app.url}/editor/specs/${spec.id}`);
     await p.getByTestId('spec-edit-form').waitFor();
   }
   const save = async (p: Page, max: number, reason: string) => {

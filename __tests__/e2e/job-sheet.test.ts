@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
-import { DESKTOP, PHONE, SCREENSHOTS, launchChromium, screenshot, startWebServer } from '../helpers/browser';
+import { DESKTOP, PHONE, SCREENSHOTS, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 import { AppDataSource } from '../../server/db/data-source';
 import { signAccessToken } from '../../server/auth/tokens';
@@ -10,17 +10,7 @@ import { emailKey } from '../../server/modules/users/user.mapper';
 import type { JobDetailDto } from '../../lib/contracts/jobs';
 
 useTestDatabase();
-let web: Awaited<ReturnType<typeof startWebServer>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  web = await startWebServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await web?.close();
-});
+const app = useWebApp();
 
 const EMAIL = 'tech.jobsheet@test.specbench.example';
 const PASSWORD = 'coil-and-stator-on-the-bench';
@@ -44,7 +34,7 @@ async function kestrelSpec(component: string, parameter: string): Promise<SpecRo
 }
 
 async function signIn(page: Page) {
-  await page.goto(`${web.url}/sign-in`);
+  await page.goto(`${app.url}/sign-in`);
   const form = page.getByTestId('sign-in-form');
   await form.getByLabel('E-mail address', { exact: true }).fill(EMAIL);
   await form.getByLabel('Password', { exact: true }).fill(PASSWORD);
@@ -78,7 +68,7 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   const primary = await kestrelSpec('ignition coil (rear)', 'primary winding resistance');
   const pickup = await kestrelSpec('pickup coil', 'pickup coil resistance');
   const stator = await kestrelSpec('stator', 'stator winding resistance');
-  const context: BrowserContext = await browser.newContext({ viewport: PHONE, acceptDownloads: true });
+  const context: BrowserContext = await app.browser.newContext({ viewport: PHONE, acceptDownloads: true });
   const page = await context.newPage();
   await signIn(page);
 
@@ -112,13 +102,13 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
 
   // 2. Marginal, exactly on the upper limit without meter accuracy; 3. fail, four times the maximum.
   for (const [spec, value, word] of [[pickup, pickup.max, 'MARGINAL'], [stator, stator.max * 4, 'FAIL']] as const) {
-    await page.goto(`${web.url}/specs/${spec.id}?job=${jobId}`);
+    await page.goto(`${app.url}/specs/${spec.id}?job=${jobId}`);
     await page.getByTestId('spec-screen').getByTestId('calculator').waitFor();
     const outcome = await takeReading(page, value, word);
     await expect(outcome.innerText()).resolves.toBe(`Added to job #${jobId}`);
   }
 
-  await page.goto(`${web.url}/jobs/${jobId}`);
+  await page.goto(`${app.url}/jobs/${jobId}`);
   const sheet = page.getByTestId('job-sheet');
   await expect(sheet.getByTestId('verdict-counts').innerText()).resolves.toMatch(/1 pass · 1 marginal · 1 fail/);
   await expect(sheet.locator('[data-testid^="job-reading-"]').count()).resolves.toBe(3);
@@ -146,7 +136,7 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await expect(sheet.getByTestId('queue-waiting').count()).resolves.toBe(0);
   await expect(sheet.getByTestId('verdict-counts').innerText()).resolves.toMatch(/2 pass · 1 marginal · 0 fail/);
   await expect(sheet.getByTestId(`job-reading-${failed.id}`).getByTestId('reading-retaken').innerText()).resolves.toBe('re-taken');
-  const res = await fetch(`${web.url}/api/jobs/${jobId}`, { headers: { Authorization: `Bearer ${signAccessToken(user)}` } });
+  const res = await fetch(`${app.url}/api/jobs/${jobId}`, { headers: { Authorization: `Bearer ${signAccessToken(user)}` } });
   const job = (await res.json()) as JobDetailDto;
   expect(job.readings.map((r) => r.verdict)).toEqual(['pass', 'marginal', 'fail', 'pass']);
   expect(new Set(job.readings.map((r) => r.idempotencyKey)).size).toBe(4);
@@ -187,21 +177,21 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await page.emulateMedia({ media: 'screen' });
 
   // My jobs lists it with its counts.
-  await page.goto(`${web.url}/jobs`);
+  await page.goto(`${app.url}/jobs`);
   await page.getByTestId('job-list').getByTestId(`job-${jobId}`).waitFor();
   await expect(page.getByTestId(`job-${jobId}`).innerText()).resolves.toMatch(/2 pass · 1 marginal · 0 fail/);
   await screenshot(page, 'job-list-phone');
 
   // Wide screens: two columns.
   await page.setViewportSize(DESKTOP);
-  await page.goto(`${web.url}/jobs/${jobId}`);
+  await page.goto(`${app.url}/jobs/${jobId}`);
   await sheet.getByTestId('job-summary').waitFor();
   await sheet.locator('[data-testid^="job-reading-"]').nth(3).waitFor();
   await screenshot(page, 'job-sheet-desktop');
 
   // Limits typed by hand: the standalone calculator adds the reading with a label; it lands under "Other checks".
   await page.setViewportSize(PHONE);
-  await page.goto(`${web.url}/calculator?job=${jobId}`);
+  await page.goto(`${app.url}/calculator?job=${jobId}`);
   const standalone = page.getByTestId('calculator-screen');
   await standalone.getByRole('radio', { name: 'What are you checking?: Gap' }).click();
   await standalone.getByLabel('Minimum', { exact: true }).fill('0.7');
@@ -221,14 +211,14 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
 });
 
 it('signed out, the calculator still judges and offers to sign in; My jobs asks to sign in', async () => {
-  const page = await browser.newPage({ viewport: PHONE });
+  const page = await app.browser.newPage({ viewport: PHONE });
   const stator = await kestrelSpec('stator', 'stator winding resistance');
-  await page.goto(`${web.url}/specs/${stator.id}`);
+  await page.goto(`${app.url}/specs/${stator.id}`);
   const calc = page.getByTestId('spec-screen').getByTestId('calculator');
   await calc.getByLabel('Meter reading', { exact: true }).fill(String(stator.max * 4));
   await expect(calc.getByTestId('verdict-word').innerText()).resolves.toBe('FAIL');
   await expect(calc.getByTestId('add-to-job-sign-in').innerText()).resolves.toBe('Sign in to keep readings on a job');
-  await page.goto(`${web.url}/jobs`);
+  await page.goto(`${app.url}/jobs`);
   await page.getByTestId('jobs-sign-in').waitFor();
   await page.close();
 });

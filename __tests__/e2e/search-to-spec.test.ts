@@ -1,30 +1,19 @@
 import type { SpecDetailDto } from '../../lib/contracts/library';
-import type { Browser } from 'playwright-core';
-import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
+import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 
 useTestDatabase();
-let web: Awaited<ReturnType<typeof startWebServer>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  web = await startWebServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await web?.close();
-});
+const app = useWebApp();
 
 describe.each([
   ['phone', PHONE],
   ['desktop', DESKTOP],
 ])('search → spec card at %s size', (name, viewport) => {
   it('a query with typos in model and parameter opens the right spec card and shows its value', async () => {
-    const page = await browser.newPage({ viewport });
+    const page = await app.browser.newPage({ viewport });
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
-    await page.goto(web.url);
+    await page.goto(app.url);
     const search = page.getByTestId('search-screen');
     await search.getByLabel('Search specs').fill('kestrl 900 primry');
     const firstHit = search.getByTestId('search-results').locator('[data-testid^="hit-"]').first();
@@ -39,7 +28,7 @@ describe.each([
     const shown = await card.getByTestId('spec-display').innerText();
     expect(shown).toMatch(/^\d[\d.]*–\d[\d.]* Ω/);
     const specId = Number(new URL(page.url()).pathname.split('/').pop());
-    const api = (await (await fetch(`${web.url}/api/specs/${specId}`)).json()) as SpecDetailDto;
+    const api = (await (await fetch(`${app.url}/api/specs/${specId}`)).json()) as SpecDetailDto;
     expect(api.parameter).toMatch(/primary winding/i);
     expect(`${api.model.make.name} ${api.model.name}`).toMatch(/kestrel.*900/i);
     expect(shown).toBe(api.display);
@@ -57,8 +46,8 @@ describe.each([
 });
 
 it('the model sheet lists components with inline values', async () => {
-  const page = await browser.newPage({ viewport: PHONE });
-  await page.goto(web.url);
+  const page = await app.browser.newPage({ viewport: PHONE });
+  await page.goto(app.url);
   await page.getByTestId('model-list').getByRole('link').first().click();
   const sheet = page.getByTestId('model-screen');
   await sheet.waitFor();

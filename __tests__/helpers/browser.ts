@@ -44,3 +44,21 @@ export async function screenshot(page: Page, name: string) {
   await page.screenshot({ path: path.join(SCREENSHOTS, `${name}.png`) });
   await page.setViewportSize(viewport);
 }
+
+/** For an e2e file: the app on a loopback port and one Chromium, started before its tests and closed after. */
+export function useWebApp(): { readonly url: string; readonly browser: Browser } {
+  let web: Awaited<ReturnType<typeof startWebServer>> | undefined;
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    web = await startWebServer();
+    browser = await launchChromium();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await web?.close();
+  });
+  return {
+    get url() { return web!.url; },
+    get browser() { return browser!; },
+  };
+}

@@ -3,6 +3,7 @@ import { createApp } from '../../server/app';
 import { AppDataSource } from '../../server/db/data-source';
 import { COLUMN_REFERENCE } from '../../lib/csv';
 import { useTestDatabase } from '../helpers/test-db';
+import { expectProblem } from '../helpers/problems';
 import { authHeader } from '../helpers/auth';
 import { malformedCorpus } from '../fixtures/csv/corpus';
 import { toCsv, uniqueMake, validFile, validRow } from '../fixtures/csv/rows';
@@ -12,12 +13,6 @@ const app = createApp({ webDist: null });
 let editor: { Authorization: string };
 beforeAll(async () => { editor = await authHeader('editor'); });
 
-function expectProblem(res: request.Response, status: number, code?: string) {
-  expect(res.status).toBe(status);
-  expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
-  expect(res.body).toMatchObject({ status, title: expect.any(String), detail: expect.any(String), ...(code ? { code } : {}) });
-  expect(JSON.stringify(res.body)).not.toMatch(/at .*\.(ts|js):\d+|SELECT|ER_/);
-}
 
 const upload = (bytes: Buffer | string, fileName = 'specs.csv', contentType = 'text/csv') =>
   request(app).post('/api/imports').set(editor).attach('file', Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes, 'utf8'), { filename: fileName, contentType });

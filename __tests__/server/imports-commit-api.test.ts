@@ -2,6 +2,7 @@ import request from 'supertest';
 import { createApp } from '../../server/app';
 import { AppDataSource } from '../../server/db/data-source';
 import { useTestDatabase } from '../helpers/test-db';
+import { expectProblem } from '../helpers/problems';
 import { authHeader } from '../helpers/auth';
 import { toCsv, uniqueMake, validFile, validRow } from '../fixtures/csv/rows';
 
@@ -10,11 +11,6 @@ const app = createApp({ webDist: null });
 let editor: { Authorization: string };
 beforeAll(async () => { editor = await authHeader('editor'); });
 
-function expectProblem(res: request.Response, status: number, code?: string) {
-  expect(res.status).toBe(status);
-  expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
-  expect(res.body).toMatchObject({ status, detail: expect.any(String), ...(code ? { code } : {}) });
-}
 
 const upload = (text: string, fileName = 'specs.csv') =>
   request(app).post('/api/imports').set(editor).attach('file', Buffer.from(text, 'utf8'), { filename: fileName, contentType: 'text/csv' });

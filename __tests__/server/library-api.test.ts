@@ -2,17 +2,12 @@ import request from 'supertest';
 import { createApp } from '../../server/app';
 import { AppDataSource } from '../../server/db/data-source';
 import { useTestDatabase } from '../helpers/test-db';
+import { expectProblem } from '../helpers/problems';
 import { loadDemoLibrary } from '../../server/db/seeds/demo-library';
 
 useTestDatabase();
 const app = createApp({ webDist: null });
 
-function expectProblem(res: request.Response, status: number, code: string) {
-  expect(res.status).toBe(status);
-  expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
-  expect(res.body).toMatchObject({ status, code, title: expect.any(String), detail: expect.any(String) });
-  expect(JSON.stringify(res.body)).not.toMatch(/at .*\.(ts|js):\d+|SELECT|ER_/);
-}
 
 async function firstModelId(): Promise<number> {
   const res = await request(app).get('/api/models').expect(200);

@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { useTestDatabase } from '../helpers/test-db';
+import { expectProblem } from '../helpers/problems';
 import { authHeader } from '../helpers/auth';
 import { toCsv, uniqueMake, validRow } from '../fixtures/csv/rows';
 
@@ -9,11 +10,6 @@ const app = createApp({ webDist: null });
 let editor: { Authorization: string };
 beforeAll(async () => { editor = await authHeader('editor'); });
 
-function expectProblem(res: request.Response, status: number, code?: string) {
-  expect(res.status).toBe(status);
-  expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
-  expect(res.body).toMatchObject({ status, detail: expect.any(String), ...(code ? { code } : {}) });
-}
 
 const patch = (id: number, body: object) => request(app).patch(`/api/specs/${id}`).set(editor).send(body);
 const revert = (id: number, body: object) => request(app).post(`/api/specs/${id}/revert`).set(editor).send(body);

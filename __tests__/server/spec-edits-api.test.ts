@@ -3,6 +3,7 @@ import { createApp } from '../../server/app';
 import { AppDataSource } from '../../server/db/data-source';
 import { SpecRevision } from '../../server/modules/specs/spec-revision.entity';
 import { useTestDatabase } from '../helpers/test-db';
+import { expectProblem } from '../helpers/problems';
 import { authHeader } from '../helpers/auth';
 import { uniqueMake } from '../fixtures/csv/rows';
 
@@ -11,12 +12,6 @@ const app = createApp({ webDist: null });
 let editor: { Authorization: string };
 beforeAll(async () => { editor = await authHeader('editor'); });
 
-function expectProblem(res: request.Response, status: number, code?: string) {
-  expect(res.status).toBe(status);
-  expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
-  expect(res.body).toMatchObject({ status, detail: expect.any(String), ...(code ? { code } : {}) });
-  expect(JSON.stringify(res.body)).not.toMatch(/at .*\.(ts|js):\d+|SELECT|ER_/);
-}
 
 const newSpec = (make: string, over: Record<string, unknown> = {}) => ({
   make, model: 'Vireo 250', yearFrom: 2015, yearTo: 2019, variant: 'EU', component: 'pickup coil',

@@ -1,6 +1,5 @@
 import { Stack } from 'expo-router';
-import { Fonts } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { useHeaderOptions } from '../../lib/theme/use-header-options';
 
 /**
  * The sign-in pages. The group keeps their URLs short (/sign-in, /verify …); the root
@@ -8,14 +7,11 @@ import { useTheme } from '../../lib/theme/use-theme';
  * the root's back button when the group was opened from another page.
  */
 export default function AuthLayout() {
-  const t = useTheme();
+  const header = useHeaderOptions();
   return (
     <Stack
       screenOptions={{
-        headerStyle: { backgroundColor: t.surface },
-        headerTintColor: t.primary,
-        headerTitleStyle: { fontFamily: Fonts.semibold, color: t.text },
-        contentStyle: { backgroundColor: t.background },
+        ...header,
         // Each page names itself in its card; `title` still names the browser tab.
         headerTitle: 'Specbench',
       }}

@@ -1,4 +1,4 @@
-import { Pressable, StyleSheet, View } from 'react-native';
+import { Pressable } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { Calculator } from '../../components/calculator/calculator';
 import { Citation } from '../../components/library/citation';
@@ -9,11 +9,11 @@ import { EditSpecButton } from '../../components/curation/edit-spec-button';
 import { SafetyNotes } from '../../components/library/safety-notes';
 import { SpecValues } from '../../components/library/spec-values';
 import { Screen } from '../../components/ui/screen';
+import { TwoColumns } from '../../components/ui/two-columns';
 import { Text } from '../../components/ui/text';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { describeError } from '../../lib/api/describe-error';
 import { useSpecQuery } from '../../lib/hooks/use-library';
-import { Spacing } from '../../lib/theme';
 import type { CanonicalUnit } from '../../lib/units';
 import { useIsWide } from '../../lib/theme/use-theme';
 
@@ -49,21 +49,8 @@ export default function SpecCardScreen() {
         <Text color="primary">{modelTitle(s.model)}</Text>
       </Pressable>
       <EditSpecButton specId={s.id} />
-      <View style={[styles.columns, wide && styles.columnsWide]}>
-        <View style={[styles.column, wide && styles.columnWide]}>
-          <SpecValues spec={s} />
-          {wide ? reference : check}
-        </View>
-        <View style={[styles.column, wide && styles.columnWide]}>{wide ? check : reference}</View>
-      </View>
+      {/* On a phone the calculator comes right after the values; on a wide screen it has the right column. */}
+      <TwoColumns first={<><SpecValues spec={s} />{wide ? reference : check}</>} second={wide ? check : reference} />
     </Screen>
   );
 }
-
-const styles = StyleSheet.create({
-  columns: { gap: Spacing.lg },
-  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  column: { gap: Spacing.lg, minWidth: 0 },
-  // Side by side the columns share the width; stacked on a phone each takes its own height.
-  columnWide: { flex: 1 },
-});
