@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { BatteryCharge } from '../components/calculator/battery-charge';
 import { Calculator } from '../components/calculator/calculator';
 import { LimitsForm } from '../components/calculator/limits-form';
 import { QualitativeCheck } from '../components/calculator/qualitative-check';
@@ -43,6 +44,7 @@ export default function StandaloneCalculatorScreen() {
               <LimitsForm kind={mode} limits={limits} onChangeLimits={setLimits} unit={unit} onChangeUnit={setUnit} copper={copper} onChangeCopper={setCopper} />
             )}
             <SafetyNotes component={mode === 'voltage' ? 'charging battery' : 'ignition'} parameter="" />
+            {mode === 'voltage' ? <BatteryCharge /> : null}
           </>
         )}
         second={mode !== 'diode' && mode !== 'continuity' ? <Calculator spec={spec} kind={mode} testID="standalone-calculator" /> : null}

@@ -29,12 +29,7 @@ export default function SearchScreen() {
     <Screen testID="search-screen">
       <View style={styles.intro}>
         <Text variant="title">Find a spec</Text>
-        <Text color="textMuted">Make, model, year, component or parameter — typos are fine.</Text>
-      </View>
-      <View style={styles.buttons}>
-        <Button label="Calculator for limits typed by hand" variant="secondary" onPress={() => router.push('/calculator')} style={styles.calcButton} />
-        {session.status === 'signed-in' ? <Button label="My jobs" variant="secondary" onPress={() => router.push('/jobs')} testID="home-my-jobs" /> : null}
-        <EditorActions />
+        <Text color="textMuted">Make, model, year, component or parameter — typos are fine. The value shows in the list.</Text>
       </View>
       <TextField
         label="Search specs"
@@ -49,6 +44,11 @@ export default function SearchScreen() {
         inputMode="search"
         testID="search-input"
       />
+      <View style={styles.buttons}>
+        <Button label="Calculator for limits typed by hand" variant="secondary" onPress={() => router.push('/calculator')} style={styles.calcButton} />
+        {session.status === 'signed-in' ? <Button label="My jobs" variant="secondary" onPress={() => router.push('/jobs')} testID="home-my-jobs" /> : null}
+        <EditorActions />
+      </View>
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={styles.main}>
           <SearchArea q={q} onOpenSpec={openSpec} onOpenModel={openModel} />

@@ -133,6 +133,19 @@ describe('unknown routes and bodies', () => {
 });
 
 describe('demo library loader', () => {
+  it('loading it again keeps an editor’s change to a demo spec', async () => {
+    const [spec] = await AppDataSource.query("SELECT id, max_value AS max, version FROM specs WHERE max_value IS NOT NULL ORDER BY id DESC LIMIT 1");
+    await AppDataSource.query('UPDATE specs SET max_value = ?, version = version + 1 WHERE id = ?', [spec.max + 1, spec.id]);
+    try {
+      const [summary] = await loadDemoLibrary();
+      expect(summary.counts.updated).toBe(0);
+      const [after] = await AppDataSource.query('SELECT max_value AS max FROM specs WHERE id = ?', [spec.id]);
+      expect(after.max).toBeCloseTo(spec.max + 1, 9);
+    } finally {
+      await AppDataSource.query('UPDATE specs SET max_value = ?, version = version - 1 WHERE id = ?', [spec.max, spec.id]);
+    }
+  });
+
   it('loading the demo library again changes nothing', async () => {
     const before = await AppDataSource.query('SELECT COUNT(*) AS n FROM spec_revisions');
     const [summary] = await loadDemoLibrary();

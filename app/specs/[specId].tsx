@@ -1,5 +1,6 @@
 import { Pressable } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
+import { BatteryCharge } from '../../components/calculator/battery-charge';
 import { Calculator } from '../../components/calculator/calculator';
 import { Citation } from '../../components/library/citation';
 import { ProposeLinks } from '../../components/corrections/propose-links';
@@ -33,6 +34,7 @@ export default function SpecCardScreen() {
         kind={s.quantityKind}
         spec={{ min: s.min, nominal: s.nominal, max: s.max, unit: s.unit as CanonicalUnit, refTempC: s.refTempC, material: s.material }}
       />
+      {/rest voltage|open-circuit voltage/i.test(s.parameter) ? <BatteryCharge /> : null}
     </>
   );
   const reference = (

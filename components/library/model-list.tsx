@@ -26,7 +26,7 @@ export function ModelList({ models, onOpenModel }: ModelListProps) {
               style={({ pressed }) => [styles.row, { borderTopColor: t.border, backgroundColor: pressed ? t.surfaceMuted : 'transparent' }]}
             >
               <Text style={styles.name}>{modelTitle(m).slice(make.length + 1)}</Text>
-              <Text variant="small" color="textMuted">{m.specCount} specs</Text>
+              <Text variant="small" color="textMuted">{m.specCount === 1 ? '1 spec' : `${m.specCount} specs`}</Text>
             </Pressable>
           ))}
         </Card>

@@ -1,6 +1,7 @@
 /**
  * Loads the demo library (data/*.csv, in the import format) through the same importer
- * editors use. Running it again changes nothing.
+ * editors use. Running it again changes nothing: specs already in the library (perhaps
+ * edited since) are left alone; only missing ones are created.
  */
 import fs from 'node:fs';
 import path from 'node:path';
@@ -14,7 +15,7 @@ export async function loadDemoLibrary(dataDir = path.join(config.rootDir, 'data'
   const summaries: ImportSummary[] = [];
   for (const file of DEMO_FILES) {
     const text = fs.readFileSync(path.join(dataDir, file), 'utf8');
-    summaries.push(await importCsvNow(text, file, DEMO_ACTOR, 'Demo library (invented makes, models and sources)'));
+    summaries.push(await importCsvNow(text, file, DEMO_ACTOR, 'Demo library (invented makes, models and sources)', { createOnly: true }));
   }
   return summaries;
 }

@@ -115,15 +115,19 @@ export async function commitImport(id: number, actor: Actor, reason?: string): P
 /**
  * Validates and commits a whole file at once (no preview): rows that fail validation are
  * reported and skipped; the rest go in one transaction. A file that changes nothing leaves
- * no trace, so loading the same file twice is a no-op.
+ * no trace, so loading the same file twice is a no-op. With `createOnly`, specs the library
+ * already has are left as they are (the demo loader must not undo editors' changes).
  */
-export async function importCsvNow(text: string, fileName: string, actor: Actor, reason: string): Promise<ImportSummary> {
+export async function importCsvNow(
+  text: string, fileName: string, actor: Actor, reason: string, options: { createOnly?: boolean } = {},
+): Promise<ImportSummary> {
   const checked = validateSpecCsv(text);
   if (checked.fileErrors.length) {
     throw AppError.unprocessable(`${fileName}: ${checked.fileErrors[0].reason}`, checked.fileErrors.map((e) => ({ path: problemPath(e), message: e.reason })));
   }
   const summary = await AppDataSource.transaction(async (m): Promise<ImportSummary> => {
-    const plan = await planImport(m, checked.accepted);
+    const plan = (await planImport(m, checked.accepted))
+      .map((p) => (options.createOnly && p.action === 'update' ? { ...p, action: 'unchanged' as const, changes: [] } : p));
     const counts = countsOf(plan, checked);
     if (counts.created + counts.updated === 0) return { batchId: null, counts, rejected: checked.rejected };
     const batch = await stageBatch(m, checked, plan, { ...uploaderOf({ fileName, bytes: Buffer.from(text, 'utf8') }, actor), reason });
