@@ -27,7 +27,11 @@ function sameOrigin(req: Request) {
 
 export function authRouter() {
   const r = Router();
-  const signInLimit = limiter('sign-in', 10, 15 * MINUTE, (req) => String(req.body?.email ?? '').toLowerCase());
+  // Per address (guessing one account's password) and per client (trying many accounts).
+  const signInLimit = [
+    limiter('sign-in', 10, 15 * MINUTE, (req) => String(req.body?.email ?? '').toLowerCase()),
+    limiter('sign-in-any', 60, 15 * MINUTE),
+  ];
   r.post('/sign-up', limiter('sign-up', 20, 60 * MINUTE), validate('body', SignUpBody), async (_req, res) => {
     await auth.signUp(res.locals.body);
     res.status(202).json({ message: 'Check your e-mail for a link to confirm the address.' });
@@ -35,7 +39,7 @@ export function authRouter() {
   r.post('/verify', limiter('verify', 30, 15 * MINUTE), validate('body', TokenBody), async (_req, res) => {
     res.json({ user: await auth.verifyEmail(res.locals.body.token) });
   });
-  r.post('/sign-in', signInLimit, validate('body', SignInBody), async (req, res) => sendSession(req, res, await auth.signIn(res.locals.body)));
+  r.post('/sign-in', ...signInLimit, validate('body', SignInBody), async (req, res) => sendSession(req, res, await auth.signIn(res.locals.body)));
   r.post('/refresh', async (req, res) => {
     sameOrigin(req);
     sendSession(req, res, await auth.refresh(req.cookies?.[REFRESH_COOKIE]));
