@@ -5,6 +5,7 @@ import { SearchResults } from '../components/library/search-results';
 import { ModelList } from '../components/library/model-list';
 import { EditorActions } from '../components/curation/editor-actions';
 import { Button } from '../components/ui/button';
+import { MainAndSide } from '../components/ui/main-and-side';
 import { Screen } from '../components/ui/screen';
 import { Text } from '../components/ui/text';
 import { TextField } from '../components/ui/text-field';
@@ -49,17 +50,15 @@ export default function SearchScreen() {
         {session.status === 'signed-in' ? <Button label="My jobs" variant="secondary" onPress={() => router.push('/jobs')} testID="home-my-jobs" /> : null}
         <EditorActions />
       </View>
-      <View style={[styles.columns, wide && styles.columnsWide]}>
-        <View style={styles.main}>
-          <SearchArea q={q} onOpenSpec={openSpec} onOpenModel={openModel} />
-        </View>
-        {(wide || q.trim() === '') && (
-          <View style={[styles.side, wide && styles.sideWide]}>
+      <MainAndSide
+        main={<SearchArea q={q} onOpenSpec={openSpec} onOpenModel={openModel} />}
+        side={(wide || q.trim() === '') && (
+          <>
             <Text variant="heading">Browse the library</Text>
             <BrowseModels onOpenModel={openModel} />
-          </View>
+          </>
         )}
-      </View>
+      />
     </Screen>
   );
 }
@@ -85,9 +84,4 @@ const styles = StyleSheet.create({
   intro: { gap: Spacing.xs },
   calcButton: { alignSelf: 'flex-start' },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: Spacing.sm },
-  columns: { gap: Spacing.xl },
-  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  main: { flex: 1, minWidth: 0 },
-  side: { gap: Spacing.md },
-  sideWide: { width: 380 },
 });

@@ -8,6 +8,7 @@ import { ImportPreview } from '../../components/curation/import-preview';
 import { LibraryFiles } from '../../components/curation/library-files';
 import { RecentImports } from '../../components/curation/recent-imports';
 import { UploadPanel } from '../../components/curation/upload-panel';
+import { MainAndSide } from '../../components/ui/main-and-side';
 import { Screen } from '../../components/ui/screen';
 import { Text } from '../../components/ui/text';
 import { ErrorState, LoadingState } from '../../components/ui/states';
@@ -59,16 +60,20 @@ export default function ImportScreen() {
       <Stack.Screen options={{ title: 'Import specs' }} />
       <EditorGate reason="to import specs">
         <Text variant="title">Import specs from CSV</Text>
-        <View style={[styles.columns, wide && styles.columnsWide]}>
-          <View style={styles.main}>
-            <UploadPanel uploading={upload.isPending} progress={upload.progress} fileName={fileName} error={upload.error} onPick={pick} />
-            {batchView()}
-          </View>
-          <View style={[styles.side, wide && styles.sideWide]}>
-            <RecentImports selectedId={batchId} onOpen={open} />
-            <LibraryFiles wide={wide} />
-          </View>
-        </View>
+        <MainAndSide
+          main={(
+            <>
+              <UploadPanel uploading={upload.isPending} progress={upload.progress} fileName={fileName} error={upload.error} onPick={pick} />
+              {batchView()}
+            </>
+          )}
+          side={(
+            <>
+              <RecentImports selectedId={batchId} onOpen={open} />
+              <LibraryFiles wide={wide} />
+            </>
+          )}
+        />
       </EditorGate>
     </Screen>
   );
@@ -76,9 +81,4 @@ export default function ImportScreen() {
 
 const styles = StyleSheet.create({
   title: { gap: 2 },
-  columns: { gap: Spacing.lg },
-  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  main: { flex: 1, minWidth: 0, gap: Spacing.md },
-  side: { gap: Spacing.md },
-  sideWide: { width: 380 },
 });
