@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { ComponentSpecs } from '../../components/library/component-specs';
-import { modelTitle } from '../../components/library/model-title';
+import { modelTitle } from '../../lib/format/model-title';
 import { Screen } from '../../components/ui/screen';
 import { Text } from '../../components/ui/text';
 import { EmptyState, ErrorState, LoadingState } from '../../components/ui/states';

@@ -4,7 +4,7 @@ import { BatteryCharge } from '../../components/calculator/battery-charge';
 import { Calculator } from '../../components/calculator/calculator';
 import { Citation } from '../../components/library/citation';
 import { ProposeLinks } from '../../components/corrections/propose-links';
-import { modelTitle } from '../../components/library/model-title';
+import { modelTitle } from '../../lib/format/model-title';
 import { RevisionHistory } from '../../components/curation/revision-history';
 import { EditSpecButton } from '../../components/curation/edit-spec-button';
 import { SafetyNotes } from '../../components/library/safety-notes';

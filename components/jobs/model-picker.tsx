@@ -3,7 +3,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import type { ModelSummaryDto } from '../../lib/contracts/library';
 import { Radius, Spacing } from '../../lib/theme';
 import { useTheme } from '../../lib/theme/use-theme';
-import { modelTitle } from '../library/model-title';
+import { modelTitle } from '../../lib/format/model-title';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 

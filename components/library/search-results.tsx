@@ -4,7 +4,7 @@ import { Spacing } from '../../lib/theme';
 import { useTheme } from '../../lib/theme/use-theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import { modelTitle } from './model-title';
+import { modelTitle } from '../../lib/format/model-title';
 
 export type SearchResultsProps = {
   result: SearchResultDto;

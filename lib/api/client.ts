@@ -17,37 +17,42 @@ export class ApiError extends Error {
   }
 }
 
-const BASE_URL = process.env.EXPO_PUBLIC_API_URL ?? '';
+export const BASE_URL = process.env.EXPO_PUBLIC_API_URL ?? '';
 
 let accessToken: string | null = null;
 let onUnauthorized: (() => void) | null = null;
 export function setAccessToken(token: string | null) {
   accessToken = token;
 }
-/** The session's bearer token, for the one request apiFetch cannot make (upload with progress, lib/api/upload.ts). */
-export const getAccessToken = () => accessToken;
 /** Called when a request made with a token is refused with 401: the session has ended. */
 export function setUnauthorizedHandler(handler: (() => void) | null) {
   onUnauthorized = handler;
 }
 
+/** Accept and Authorization headers every request sends (accepting problem details too). */
+export function requestHeaders(accept = 'application/json'): Record<string, string> {
+  const headers: Record<string, string> = { Accept: `${accept}, application/problem+json` };
+  if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
+  return headers;
+}
+
+/** The ApiError for an answer that is not ok, from its problem details (when it has any). */
+export function errorFromAnswer(status: number, text: string, sentToken: boolean): ApiError {
+  if (status === 401 && sentToken) onUnauthorized?.();
+  let p: { code?: string; detail?: string; errors?: FieldError[] } = {};
+  try { p = text ? JSON.parse(text) : {}; } catch { /* not problem details */ }
+  return new ApiError(status, p.code ?? 'http_error', p.detail ?? `The server answered ${status}.`, p.errors ?? [], p as Record<string, unknown>);
+}
+
 export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
   const headers = new Headers(init.headers);
-  headers.set('Accept', 'application/json, application/problem+json');
+  for (const [k, v] of Object.entries(requestHeaders())) headers.set(k, v);
   if (init.body && typeof init.body === 'string' && !headers.has('Content-Type')) headers.set('Content-Type', 'application/json');
-  if (accessToken) headers.set('Authorization', `Bearer ${accessToken}`);
   const res = await fetch(`${BASE_URL}${path}`, { ...init, headers, credentials: 'include' });
   const text = await res.text();
-  let body: unknown = null;
-  if (text) {
-    try { body = JSON.parse(text); } catch { body = null; }
-  }
-  if (!res.ok) {
-    if (res.status === 401 && headers.has('Authorization')) onUnauthorized?.();
-    const p = (body ?? {}) as { code?: string; detail?: string; errors?: FieldError[] };
-    throw new ApiError(res.status, p.code ?? 'http_error', p.detail ?? `The server answered ${res.status}.`, p.errors ?? [], (body ?? {}) as Record<string, unknown>);
-  }
-  return body as T;
+  if (!res.ok) throw errorFromAnswer(res.status, text, headers.has('Authorization'));
+  if (!text) return null as T;
+  try { return JSON.parse(text) as T; } catch { return null as T; }
 }
 
 /** Builds a query string from defined values only. */
@@ -63,11 +68,8 @@ export function query(params: Record<string, string | number | undefined | null>
  * token and ApiError on failure, but the body comes back as a Blob, not JSON.
  */
 export async function apiFetchBlob(path: string, accept: string): Promise<Blob> {
-  const headers = new Headers({ Accept: `${accept}, application/problem+json` });
-  if (accessToken) headers.set('Authorization', `Bearer ${accessToken}`);
+  const headers = requestHeaders(accept);
   const res = await fetch(`${BASE_URL}${path}`, { headers, credentials: 'include' });
   if (res.ok) return res.blob();
-  if (res.status === 401 && accessToken) onUnauthorized?.();
-  const p = (await res.json().catch(() => ({}))) as { code?: string; detail?: string; errors?: FieldError[] };
-  throw new ApiError(res.status, p.code ?? 'http_error', p.detail ?? `The server answered ${res.status}.`, p.errors ?? [], p as Record<string, unknown>);
+  throw errorFromAnswer(res.status, await res.text(), 'Authorization' in headers);
 }

@@ -4,9 +4,7 @@
  * https://developer.mozilla.org/docs/Web/API/XMLHttpRequest/upload. Same base URL, bearer
  * token and ApiError as apiFetch.
  */
-import { ApiError, getAccessToken, type FieldError } from './client';
-
-const BASE_URL = process.env.EXPO_PUBLIC_API_URL ?? '';
+import { ApiError, BASE_URL, errorFromAnswer, requestHeaders } from './client';
 
 /** A picked file: on web the browser's File, on native a file URI the runtime reads. */
 export type UploadFile = { name: string; mimeType: string; file?: Blob; uri: string };
@@ -21,24 +19,17 @@ function formWith(field: string, f: UploadFile): FormData {
   return form;
 }
 
-function toError(xhr: XMLHttpRequest): ApiError {
-  let p: { code?: string; detail?: string; errors?: FieldError[] } = {};
-  try { p = JSON.parse(xhr.responseText); } catch { /* not problem details */ }
-  return new ApiError(xhr.status, p.code ?? 'http_error', p.detail ?? `The server answered ${xhr.status}.`, p.errors ?? [], p as Record<string, unknown>);
-}
-
 /** POSTs one file as multipart/form-data in `field`; resolves with the JSON answer. */
 export function uploadFile<T>(path: string, field: string, file: UploadFile, onProgress?: UploadProgress): Promise<T> {
   return new Promise<T>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', `${BASE_URL}${path}`);
     xhr.withCredentials = true;
-    xhr.setRequestHeader('Accept', 'application/json, application/problem+json');
-    const token = getAccessToken();
-    if (token) xhr.setRequestHeader('Authorization', `Bearer ${token}`);
+    const headers = requestHeaders();
+    for (const [k, v] of Object.entries(headers)) xhr.setRequestHeader(k, v);
     xhr.upload.onprogress = (e) => { if (e.lengthComputable && e.total > 0) onProgress?.(e.loaded / e.total); };
     xhr.onload = () => {
-      if (xhr.status < 200 || xhr.status >= 300) return reject(toError(xhr));
+      if (xhr.status < 200 || xhr.status >= 300) return reject(errorFromAnswer(xhr.status, xhr.responseText, 'Authorization' in headers));
       try { resolve(JSON.parse(xhr.responseText) as T); } catch { reject(new ApiError(xhr.status, 'bad_response', 'The server sent an answer that could not be read.')); }
     };
     // Same class apiFetch's network failures have, so describeError says "no connection".

@@ -1,6 +1,7 @@
 /** Corrections → DTOs: names, the proposer's record, and the three-way field view for review. */
 import { In } from 'typeorm';
 import type { CorrectionDto, CorrectionReviewDto, ProposedValues } from '../../../lib/contracts/corrections';
+import { modelTitle } from '../../../lib/format/model-title';
 import { AppDataSource } from '../../db/data-source';
 import { Component } from '../library/component.entity';
 import { VehicleModel } from '../library/vehicle-model.entity';
@@ -12,7 +13,6 @@ import type { Correction } from './correction.entity';
 
 export const COMPARED = ['min', 'nominal', 'max', 'unit', 'refTempC', 'material', 'testPoints', 'conditions', 'source'] as const;
 
-const title = (m: VehicleModel) => `${m.make.name} ${m.name} (${m.yearFrom}–${m.yearTo ?? ''}${m.variant ? `, ${m.variant}` : ''})`;
 export const citationText = (c: Correction['citation']) => `${c.title}${c.edition ? `, ${c.edition}` : ''}, p. ${c.page}`;
 
 export async function toDtos(rows: Correction[]): Promise<CorrectionDto[]> {
@@ -31,7 +31,7 @@ export async function toDtos(rows: Correction[]): Promise<CorrectionDto[]> {
     const model = models.find((m) => m.id === r.modelId);
     return {
       id: r.id, kind: r.kind, status: r.status, specId: r.specId, componentId: r.componentId, modelId: r.modelId,
-      modelTitle: model ? title(model) : '', componentName: spec?.component.name ?? comps.find((c) => c.id === r.componentId)?.name ?? String(r.proposed.component ?? ''),
+      modelTitle: model ? modelTitle(model) : '', componentName: spec?.component.name ?? comps.find((c) => c.id === r.componentId)?.name ?? String(r.proposed.component ?? ''),
       parameter: spec?.parameter ?? String(r.proposed.parameter ?? ''), proposed: r.proposed as ProposedValues, citation: r.citation,
       rationale: r.rationale, baseVersion: r.baseVersion,
       proposer: { id: r.proposerId, name: users.find((u) => u.id === r.proposerId)?.displayName ?? 'unknown', accepted: count(r.proposerId, 'accepted'), rejected: count(r.proposerId, 'rejected') },

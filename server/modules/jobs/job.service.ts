@@ -5,6 +5,7 @@
 import { In } from 'typeorm';
 import type { CreateJobBody, JobDetailDto, JobSummaryDto, UpdateJobBody } from '../../../lib/contracts/jobs';
 import { AppDataSource } from '../../db/data-source';
+import { modelTitle } from '../../../lib/format/model-title';
 import { AppError } from '../../errors/app-error';
 import type { SignedInUser } from '../../auth/roles';
 import { VehicleModel } from '../library/vehicle-model.entity';
@@ -14,7 +15,6 @@ import { Job } from './job.entity';
 import { Reading } from './reading.entity';
 import { toJobSummary, toReadingDto } from './job.mapper';
 
-const modelTitle = (m: VehicleModel) => `${m.make.name} ${m.name} (${m.yearFrom}–${m.yearTo ?? ''}${m.variant ? `, ${m.variant}` : ''})`;
 
 export async function findOwnJob(user: SignedInUser, id: number): Promise<Job> {
   const job = await AppDataSource.getRepository(Job).findOneBy({ id });
