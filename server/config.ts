@@ -23,6 +23,8 @@ const ROOT = findRoot(__dirname);
 const Env = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+  /** The address the server listens on: loopback unless the operator opens it up on purpose. */
+  HOST: z.string().min(1).default('127.0.0.1'),
   DB_HOST: z.string().default('127.0.0.1'),
   DB_PORT: z.coerce.number().int().min(1).max(65535).default(3307),
   DB_USER: z.string().default('specbench'),
@@ -42,10 +44,14 @@ const Env = z.object({
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
   MAIL_FROM: z.string().default('Specbench <no-reply@specbench.example>'),
   OUTBOX_POLL_MS: z.coerce.number().int().min(50).default(1000),
-  DEMO_PASSWORD: z.string().min(12).default('bench-demo-2026'),
+  /** The demo accounts' password; in production it must be set, and not to the default. */
+  DEMO_PASSWORD: z.string().min(12).optional(),
 });
 
-export type Config = z.infer<typeof Env> & { rootDir: string; dataDir: string; webDist: string; jwtSecret: string; appUrl: string };
+/** The development default for the demo accounts, printed by `npm start`; refused in production. */
+export const DEFAULT_DEMO_PASSWORD = 'bench-demo-2026';
+
+export type Config = Omit<z.infer<typeof Env>, 'DEMO_PASSWORD'> & { DEMO_PASSWORD: string; rootDir: string; dataDir: string; webDist: string; jwtSecret: string; appUrl: string };
 
 /** JWT_SECRET, or a random key kept in the data folder so tokens survive restarts. */
 function jwtSecret(given: string | undefined, dataDir: string): string {
@@ -70,15 +76,31 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Invalid environment:\n${lines}`);
   }
   const dataDir = parsed.data.DATA_DIR ?? path.join(ROOT, '.data');
-  if (parsed.data.NODE_ENV === 'production' && !parsed.data.JWT_SECRET) throw new Error('Invalid environment:\n  JWT_SECRET is required in production');
+  if (parsed.data.NODE_ENV === 'production') refuseDevelopmentDefaults(parsed.data);
   return {
     ...parsed.data,
+    DEMO_PASSWORD: parsed.data.DEMO_PASSWORD ?? DEFAULT_DEMO_PASSWORD,
     rootDir: ROOT,
     dataDir,
     webDist: parsed.data.WEB_DIST ?? path.join(ROOT, 'dist'),
     jwtSecret: jwtSecret(parsed.data.JWT_SECRET, dataDir),
     appUrl: (parsed.data.APP_URL ?? `http://localhost:${parsed.data.PORT}`).replace(/\/$/, ''),
   };
+}
+
+/**
+ * Production never runs on development conveniences: the fake mail server (whose mailbox
+ * would show password-reset links) and the published demo password would each let anyone
+ * take over an account.
+ */
+function refuseDevelopmentDefaults(env: z.infer<typeof Env>) {
+  const problems: string[] = [];
+  if (!env.JWT_SECRET) problems.push('JWT_SECRET is required in production');
+  if (!env.SMTP_URL) problems.push('SMTP_URL is required in production (the local fake mail server is for development only)');
+  if (!env.DEMO_PASSWORD || env.DEMO_PASSWORD === DEFAULT_DEMO_PASSWORD) {
+    problems.push('DEMO_PASSWORD must be set in production, and not to the development default');
+  }
+  if (problems.length) throw new Error(`Invalid environment:\n${problems.map((p) => `  ${p}`).join('\n')}`);
 }
 
 export const config = loadConfig();

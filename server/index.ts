@@ -28,11 +28,13 @@ async function main() {
   await AppDataSource.initialize();
   if (!config.SMTP_URL && config.NODE_ENV !== 'production') {
     const port = await fakeSmtp.start(config.FAKE_SMTP_PORT);
-    console.log(`Local mail server on 127.0.0.1:${port}; messages at http://localhost:${config.PORT}/dev/mailbox`);
+    console.log(`Local mail server on 127.0.0.1:${port}. Development only: its messages (sign-up and password-reset links)`);
+    console.log(`are shown at http://localhost:${config.PORT}/dev/mailbox to this machine alone; set SMTP_URL for real mail.`);
   }
   startOutboxWorker();
-  server = createApp().listen(config.PORT, '0.0.0.0', () => {
-    console.log(`Specbench is running at http://localhost:${config.PORT}  (API under /api, Ctrl-C stops it)`);
+  server = createApp().listen(config.PORT, config.HOST, () => {
+    const where = config.HOST === '127.0.0.1' ? `http://localhost:${config.PORT}` : `http://${config.HOST}:${config.PORT}`;
+    console.log(`Specbench is running at ${where}  (listening on ${config.HOST}; set HOST to open it up; API under /api, Ctrl-C stops it)`);
   });
 }
 
