@@ -5,6 +5,8 @@
  *  - app:    React Native screens and components under jest-expo (web)
  *  - e2e:    the served web build driven in Debian's Chromium by playwright-core
  */
+/** The `@/` alias of both tsconfigs, for every project. */
+const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1' };
 const tsJest = (tsconfig) => ({ '^.+\\.tsx?$': ['ts-jest', { tsconfig, diagnostics: { warnOnly: false } }] });
 
 module.exports = {
@@ -13,12 +15,14 @@ module.exports = {
     {
       displayName: 'lib',
       testEnvironment: 'node',
+      moduleNameMapper,
       testMatch: ['<rootDir>/__tests__/lib/**/*.test.ts'],
       transform: tsJest('<rootDir>/server/tsconfig.json'),
     },
     {
       displayName: 'server',
       testEnvironment: 'node',
+      moduleNameMapper,
       testMatch: ['<rootDir>/__tests__/server/**/*.test.ts'],
       transform: tsJest('<rootDir>/server/tsconfig.json'),
       globalSetup: '<rootDir>/__tests__/helpers/global-setup.ts',
@@ -28,11 +32,13 @@ module.exports = {
     {
       displayName: 'app',
       preset: 'jest-expo',
+      moduleNameMapper,
       testMatch: ['<rootDir>/__tests__/app/**/*.test.tsx'],
     },
     {
       displayName: 'e2e',
       testEnvironment: 'node',
+      moduleNameMapper,
       testMatch: ['<rootDir>/__tests__/e2e/**/*.test.ts'],
       transform: tsJest('<rootDir>/server/tsconfig.json'),
       globalSetup: '<rootDir>/__tests__/helpers/global-setup.ts',

@@ -1,12 +1,12 @@
 import { useState } from 'react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { Stack } from 'expo-router';
-import { ApiError } from '../lib/api/client';
-import { SessionProvider } from '../lib/session/session-provider';
-import { HeaderAccount } from '../components/ui/header-account';
-import { ReadingQueueSync } from '../components/jobs/reading-queue-sync';
-import { useHeaderOptions } from '../lib/theme/use-header-options';
-import { useAppFonts } from '../lib/theme/use-app-fonts';
+import { ApiError } from '@/lib/api/client';
+import { SessionProvider } from '@/lib/session/session-provider';
+import { HeaderAccount } from '@/components/ui/header-account';
+import { ReadingQueueSync } from '@/components/jobs/reading-queue-sync';
+import { useHeaderOptions } from '@/lib/theme/use-header-options';
+import { useAppFonts } from '@/lib/theme/use-app-fonts';
 
 export { ErrorBoundary } from 'expo-router';
 
@@ -30,32 +30,32 @@ export default function RootLayout() {
   return (
     <QueryClientProvider client={queryClient}>
       <SessionProvider>
-      <ReadingQueueSync />
-      <Stack
-        screenOptions={{
-          ...header,
-          headerRight: () => <HeaderAccount />,
-        }}
-      >
-        <Stack.Screen name="index" options={{ title: 'Specbench' }} />
-        <Stack.Screen name="models/[modelId]" options={{ title: 'Model sheet' }} />
-        <Stack.Screen name="specs/[specId]" options={{ title: 'Spec' }} />
-        <Stack.Screen name="calculator" options={{ title: 'Calculator' }} />
-        <Stack.Screen name="jobs/index" options={{ title: 'My jobs' }} />
-        <Stack.Screen name="jobs/[jobId]" options={{ title: 'Job sheet' }} />
-        <Stack.Screen name="jobs/[jobId]/report" options={{ title: 'Job report' }} />
-        <Stack.Screen name="(auth)" options={{ headerShown: false }} />
-        <Stack.Screen name="account" options={{ title: 'Your account' }} />
-        <Stack.Screen name="admin/users" options={{ title: 'Users and roles' }} />
-        <Stack.Screen name="corrections/index" options={{ title: 'My proposals' }} />
-        <Stack.Screen name="corrections/new" options={{ title: 'Propose a correction' }} />
-        <Stack.Screen name="corrections/[correctionId]" options={{ title: 'Proposal' }} />
-        <Stack.Screen name="review/index" options={{ title: 'Review corrections' }} />
-        <Stack.Screen name="review/[correctionId]" options={{ title: 'Review' }} />
-        <Stack.Screen name="editor/import" options={{ title: 'Import specs' }} />
-        <Stack.Screen name="editor/specs/new" options={{ title: 'New spec' }} />
-        <Stack.Screen name="editor/specs/[specId]" options={{ title: 'Edit spec' }} />
-      </Stack>
+        <ReadingQueueSync />
+        <Stack
+          screenOptions={{
+            ...header,
+            headerRight: () => <HeaderAccount />,
+          }}
+        >
+          <Stack.Screen name="index" options={{ title: 'Specbench' }} />
+          <Stack.Screen name="models/[modelId]" options={{ title: 'Model sheet' }} />
+          <Stack.Screen name="specs/[specId]" options={{ title: 'Spec' }} />
+          <Stack.Screen name="calculator" options={{ title: 'Calculator' }} />
+          <Stack.Screen name="jobs/index" options={{ title: 'My jobs' }} />
+          <Stack.Screen name="jobs/[jobId]" options={{ title: 'Job sheet' }} />
+          <Stack.Screen name="jobs/[jobId]/report" options={{ title: 'Job report' }} />
+          <Stack.Screen name="(auth)" options={{ headerShown: false }} />
+          <Stack.Screen name="account" options={{ title: 'Your account' }} />
+          <Stack.Screen name="admin/users" options={{ title: 'Users and roles' }} />
+          <Stack.Screen name="corrections/index" options={{ title: 'My proposals' }} />
+          <Stack.Screen name="corrections/new" options={{ title: 'Propose a correction' }} />
+          <Stack.Screen name="corrections/[correctionId]" options={{ title: 'Proposal' }} />
+          <Stack.Screen name="review/index" options={{ title: 'Review corrections' }} />
+          <Stack.Screen name="review/[correctionId]" options={{ title: 'Review' }} />
+          <Stack.Screen name="editor/import" options={{ title: 'Import specs' }} />
+          <Stack.Screen name="editor/specs/new" options={{ title: 'New spec' }} />
+          <Stack.Screen name="editor/specs/[specId]" options={{ title: 'Edit spec' }} />
+        </Stack>
       </SessionProvider>
     </QueryClientProvider>
   );

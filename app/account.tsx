@@ -1,19 +1,19 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Redirect, useRouter } from 'expo-router';
-import { AccountSummary } from '../components/account/account-summary';
-import { ChangePasswordForm } from '../components/account/change-password-form';
-import { FormAlert } from '../components/account/form-alert';
-import { FormPanel } from '../components/account/form-panel';
-import { formFailure } from '../components/account/form-state';
-import { Button } from '../components/ui/button';
-import { Screen } from '../components/ui/screen';
-import { Text } from '../components/ui/text';
-import { LoadingState } from '../components/ui/states';
-import { useChangePasswordMutation, useSignOutEverywhereMutation } from '../lib/hooks/use-auth';
-import { useSession } from '../lib/session/session-provider';
-import { Spacing } from '../lib/theme';
-import { useIsWide } from '../lib/theme/use-theme';
+import { AccountSummary } from '@/components/account/account-summary';
+import { ChangePasswordForm } from '@/components/account/change-password-form';
+import { FormAlert } from '@/components/account/form-alert';
+import { FormPanel } from '@/components/account/form-panel';
+import { formFailure } from '@/components/account/form-state';
+import { Button } from '@/components/ui/button';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { LoadingState } from '@/components/ui/states';
+import { useChangePasswordMutation, useSignOutEverywhereMutation } from '@/lib/hooks/use-auth';
+import { useSession } from '@/lib/session/session-provider';
+import { Spacing } from '@/lib/theme';
+import { useIsWide } from '@/lib/theme/use-theme';
 
 export default function AccountScreen() {
   const router = useRouter();
@@ -35,7 +35,12 @@ export default function AccountScreen() {
     }
   };
 
-  if (session.status === 'restoring' || leaving) return <Screen><LoadingState label={leaving ? 'Signing out' : 'Loading your account'} /></Screen>;
+  if (session.status === 'restoring' || leaving)
+    return (
+      <Screen>
+        <LoadingState label={leaving ? 'Signing out' : 'Loading your account'} />
+      </Screen>
+    );
   if (!session.user) return <Redirect href="/sign-in" />;
   const user = session.user;
 
@@ -45,13 +50,26 @@ export default function AccountScreen() {
         <View style={[styles.column, wide && styles.columnWide]}>
           <AccountSummary user={user} />
           {session.can('admin') ? (
-            <Button label="Manage users and roles" variant="secondary" onPress={() => router.push('/admin/users')} testID="to-admin-users" />
+            <Button
+              label="Manage users and roles"
+              variant="secondary"
+              onPress={() => router.push('/admin/users')}
+              testID="to-admin-users"
+            />
           ) : null}
-          <FormPanel title="Sessions" intro="Signing out everywhere ends the sessions on every phone and computer, this one included.">
+          <FormPanel
+            title="Sessions"
+            intro="Signing out everywhere ends the sessions on every phone and computer, this one included."
+          >
             {everywhere.error ? <FormAlert tone="error" message={formFailure(everywhere.error)!.message} /> : null}
             <Button label="Sign out" onPress={() => leave(session.signOut)} testID="sign-out" />
-            <Button label={everywhere.isPending ? 'Signing out everywhere…' : 'Sign out everywhere'} variant="secondary"
-              disabled={everywhere.isPending} onPress={() => leave(() => everywhere.mutateAsync())} testID="sign-out-everywhere" />
+            <Button
+              label={everywhere.isPending ? 'Signing out everywhere…' : 'Sign out everywhere'}
+              variant="secondary"
+              disabled={everywhere.isPending}
+              onPress={() => leave(() => everywhere.mutateAsync())}
+              testID="sign-out-everywhere"
+            />
           </FormPanel>
         </View>
         <View style={[styles.column, wide && styles.columnWide]}>
@@ -64,7 +82,9 @@ export default function AccountScreen() {
               onSubmit={(values) => change.mutate(values, { onSuccess: () => setFormKey((k) => k + 1) })}
             />
           </FormPanel>
-          <Text variant="small" color="textMuted">Forgotten the current password? Sign out and use “Forgot your password?” on the sign-in page.</Text>
+          <Text variant="small" color="textMuted">
+            Forgotten the current password? Sign out and use “Forgot your password?” on the sign-in page.
+          </Text>
         </View>
       </View>
     </Screen>

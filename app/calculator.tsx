@@ -1,20 +1,24 @@
 import { useState } from 'react';
-import { BatteryCharge } from '../components/calculator/battery-charge';
-import { Calculator } from '../components/calculator/calculator';
-import { LimitsForm } from '../components/calculator/limits-form';
-import { QualitativeCheck } from '../components/calculator/qualitative-check';
-import { SafetyNotes } from '../components/library/safety-notes';
-import { ChoiceRow } from '../components/ui/choice-row';
-import { Screen } from '../components/ui/screen';
-import { TwoColumns } from '../components/ui/two-columns';
-import { Text } from '../components/ui/text';
-import { parseDecimal } from '../lib/calculator/form';
-import { unitsOfKind, type CanonicalUnit, type QuantityKind } from '../lib/units';
+import { BatteryCharge } from '@/components/calculator/battery-charge';
+import { Calculator } from '@/components/calculator/calculator';
+import { LimitsForm } from '@/components/calculator/limits-form';
+import { QualitativeCheck } from '@/components/calculator/qualitative-check';
+import { SafetyNotes } from '@/components/library/safety-notes';
+import { ChoiceRow } from '@/components/ui/choice-row';
+import { Screen } from '@/components/ui/screen';
+import { TwoColumns } from '@/components/ui/two-columns';
+import { Text } from '@/components/ui/text';
+import { parseDecimal } from '@/lib/calculator/form';
+import { unitsOfKind, type CanonicalUnit, type QuantityKind } from '@/lib/units';
 
 type Mode = QuantityKind | 'diode' | 'continuity';
-const MODES: Array<{ value: Mode; label: string }> = [
-  { value: 'resistance', label: 'Resistance' }, { value: 'voltage', label: 'Voltage' }, { value: 'current', label: 'Current' },
-  { value: 'length', label: 'Gap' }, { value: 'diode', label: 'Diode' }, { value: 'continuity', label: 'Continuity' },
+const MODES: { value: Mode; label: string }[] = [
+  { value: 'resistance', label: 'Resistance' },
+  { value: 'voltage', label: 'Voltage' },
+  { value: 'current', label: 'Current' },
+  { value: 'length', label: 'Gap' },
+  { value: 'diode', label: 'Diode' },
+  { value: 'continuity', label: 'Continuity' },
 ];
 
 /** For a spec that is not in the library: type the limits by hand. */
@@ -27,10 +31,17 @@ export default function StandaloneCalculatorScreen() {
     setMode(m);
     if (m !== 'diode' && m !== 'continuity') setUnit(unitsOfKind(m)[0]);
   };
-  const num = (s: string) => { const v = parseDecimal(s); return v === undefined || Number.isNaN(v) ? undefined : v; };
+  const num = (s: string) => {
+    const v = parseDecimal(s);
+    return v === undefined || Number.isNaN(v) ? undefined : v;
+  };
   const spec = {
-    min: num(limits.min), nominal: num(limits.nominal), max: num(limits.max), unit,
-    refTempC: num(limits.refTempC), material: mode === 'resistance' && copper ? 'copper' as const : 'none' as const,
+    min: num(limits.min),
+    nominal: num(limits.nominal),
+    max: num(limits.max),
+    unit,
+    refTempC: num(limits.refTempC),
+    material: mode === 'resistance' && copper ? ('copper' as const) : ('none' as const),
   };
   return (
     <Screen testID="calculator-screen">
@@ -38,16 +49,30 @@ export default function StandaloneCalculatorScreen() {
       <Text color="textMuted">For a spec that is not in the library: type the limits from your manual.</Text>
       <ChoiceRow label="What are you checking?" options={MODES} value={mode} onChange={choose} />
       <TwoColumns
-        first={(
+        first={
           <>
-            {mode === 'diode' || mode === 'continuity' ? <QualitativeCheck kind={mode} /> : (
-              <LimitsForm kind={mode} limits={limits} onChangeLimits={setLimits} unit={unit} onChangeUnit={setUnit} copper={copper} onChangeCopper={setCopper} />
+            {mode === 'diode' || mode === 'continuity' ? (
+              <QualitativeCheck kind={mode} />
+            ) : (
+              <LimitsForm
+                kind={mode}
+                limits={limits}
+                onChangeLimits={setLimits}
+                unit={unit}
+                onChangeUnit={setUnit}
+                copper={copper}
+                onChangeCopper={setCopper}
+              />
             )}
             <SafetyNotes component={mode === 'voltage' ? 'charging battery' : 'ignition'} parameter="" />
             {mode === 'voltage' ? <BatteryCharge /> : null}
           </>
-        )}
-        second={mode !== 'diode' && mode !== 'continuity' ? <Calculator spec={spec} kind={mode} testID="standalone-calculator" /> : null}
+        }
+        second={
+          mode !== 'diode' && mode !== 'continuity' ? (
+            <Calculator spec={spec} kind={mode} testID="standalone-calculator" />
+          ) : null
+        }
       />
     </Screen>
   );

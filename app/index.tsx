@@ -1,21 +1,21 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
-import { SearchResults } from '../components/library/search-results';
-import { ModelList } from '../components/library/model-list';
-import { EditorActions } from '../components/curation/editor-actions';
-import { Button } from '../components/ui/button';
-import { MainAndSide } from '../components/ui/main-and-side';
-import { Screen } from '../components/ui/screen';
-import { Text } from '../components/ui/text';
-import { TextField } from '../components/ui/text-field';
-import { EmptyState, ErrorState, LoadingState } from '../components/ui/states';
-import { describeError } from '../lib/api/describe-error';
-import { useDebouncedValue } from '../lib/hooks/use-debounced-value';
-import { useModelsQuery, useSearchQuery } from '../lib/hooks/use-library';
-import { useSession } from '../lib/session/session-provider';
-import { Spacing } from '../lib/theme';
-import { useIsWide } from '../lib/theme/use-theme';
+import { SearchResults } from '@/components/library/search-results';
+import { ModelList } from '@/components/library/model-list';
+import { EditorActions } from '@/components/curation/editor-actions';
+import { Button } from '@/components/ui/button';
+import { MainAndSide } from '@/components/ui/main-and-side';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
+import { describeError } from '@/lib/api/describe-error';
+import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import { useModelsQuery, useSearchQuery } from '@/lib/hooks/use-library';
+import { useSession } from '@/lib/session/session-provider';
+import { Spacing } from '@/lib/theme';
+import { useIsWide } from '@/lib/theme/use-theme';
 
 export default function SearchScreen() {
   const router = useRouter();
@@ -30,7 +30,9 @@ export default function SearchScreen() {
     <Screen testID="search-screen">
       <View style={styles.intro}>
         <Text variant="title">Find a spec</Text>
-        <Text color="textMuted">Make, model, year, component or parameter — typos are fine. The value shows in the list.</Text>
+        <Text color="textMuted">
+          Make, model, year, component or parameter — typos are fine. The value shows in the list.
+        </Text>
       </View>
       <TextField
         label="Search specs"
@@ -46,29 +48,47 @@ export default function SearchScreen() {
         testID="search-input"
       />
       <View style={styles.buttons}>
-        <Button label="Calculator for limits typed by hand" variant="secondary" onPress={() => router.push('/calculator')} style={styles.calcButton} />
-        {session.status === 'signed-in' ? <Button label="My jobs" variant="secondary" onPress={() => router.push('/jobs')} testID="home-my-jobs" /> : null}
+        <Button
+          label="Calculator for limits typed by hand"
+          variant="secondary"
+          onPress={() => router.push('/calculator')}
+          style={styles.calcButton}
+        />
+        {session.status === 'signed-in' ? (
+          <Button label="My jobs" variant="secondary" onPress={() => router.push('/jobs')} testID="home-my-jobs" />
+        ) : null}
         <EditorActions />
       </View>
       <MainAndSide
         main={<SearchArea q={q} onOpenSpec={openSpec} onOpenModel={openModel} />}
-        side={(wide || q.trim() === '') && (
-          <>
-            <Text variant="heading">Browse the library</Text>
-            <BrowseModels onOpenModel={openModel} />
-          </>
-        )}
+        side={
+          (wide || q.trim() === '') && (
+            <>
+              <Text variant="heading">Browse the library</Text>
+              <BrowseModels onOpenModel={openModel} />
+            </>
+          )
+        }
       />
     </Screen>
   );
 }
 
-function SearchArea({ q, onOpenSpec, onOpenModel }: { q: string; onOpenSpec: (id: number) => void; onOpenModel: (id: number) => void }) {
+function SearchArea({
+  q,
+  onOpenSpec,
+  onOpenModel,
+}: {
+  q: string;
+  onOpenSpec: (id: number) => void;
+  onOpenModel: (id: number) => void;
+}) {
   const search = useSearchQuery(q);
   if (q.trim() === '') return null;
   if (search.isPending) return <LoadingState label="Searching" />;
   if (search.error) return <ErrorState message={describeError(search.error)} onRetry={search.refetch} />;
-  if (search.data.total === 0) return <EmptyState message={`Nothing matches “${q}”. Try a make, a model or a part name.`} />;
+  if (search.data.total === 0)
+    return <EmptyState message={`Nothing matches “${q}”. Try a make, a model or a part name.`} />;
   return <SearchResults result={search.data} onOpenSpec={onOpenSpec} onOpenModel={onOpenModel} />;
 }
 
@@ -76,7 +96,8 @@ function BrowseModels({ onOpenModel }: { onOpenModel: (id: number) => void }) {
   const models = useModelsQuery();
   if (models.isPending) return <LoadingState label="Loading models" />;
   if (models.error) return <ErrorState message={describeError(models.error)} onRetry={models.refetch} />;
-  if (models.data.length === 0) return <EmptyState message="The library is empty. An editor can import specs from CSV." />;
+  if (models.data.length === 0)
+    return <EmptyState message="The library is empty. An editor can import specs from CSV." />;
   return <ModelList models={models.data} onOpenModel={onOpenModel} />;
 }
 

@@ -18,7 +18,9 @@ function get(path: string): Promise<{ status: number; body: string }> {
     const req = http.get({ hostname: base.hostname, port: base.port, path, agent }, (res) => {
       let body = '';
       res.setEncoding('utf8');
-      res.on('data', (c: string) => { body += c; });
+      res.on('data', (c: string) => {
+        body += c;
+      });
       res.on('end', () => resolve({ status: res.statusCode ?? 0, body }));
     });
     req.on('error', reject);
@@ -26,10 +28,12 @@ function get(path: string): Promise<{ status: number; body: string }> {
 }
 
 async function specIds(): Promise<number[]> {
-  const models = JSON.parse((await get('/api/models')).body) as Array<{ id: number }>;
+  const models = JSON.parse((await get('/api/models')).body) as { id: number }[];
   const ids: number[] = [];
   for (const m of models) {
-    const detail = JSON.parse((await get(`/api/models/${m.id}`)).body) as { components: Array<{ specs: Array<{ id: number }> }> };
+    const detail = JSON.parse((await get(`/api/models/${m.id}`)).body) as {
+      components: { specs: { id: number }[] }[];
+    };
     for (const c of detail.components) for (const s of c.specs) ids.push(s.id);
   }
   return ids;
@@ -55,11 +59,19 @@ async function main() {
   };
   await Promise.all(Array.from({ length: connections }, worker));
   latencies.sort((a, b) => a - b);
-  const p = (q: number) => latencies[Math.min(latencies.length - 1, Math.ceil((q / 100) * latencies.length) - 1)].toFixed(2);
+  const p = (q: number) =>
+    latencies[Math.min(latencies.length - 1, Math.ceil((q / 100) * latencies.length) - 1)].toFixed(2);
   const p95 = Number(p(95));
-  console.log(`spec reads: ${connections} connections × ${seconds} s, ${latencies.length} requests (${(latencies.length / seconds).toFixed(0)}/s), ${errors} errors`);
-  console.log(`spec read latency: p50 ${p(50)} ms · p95 ${p(95)} ms · p99 ${p(99)} ms · target p95 ≤ 25 ms with zero errors → ${p95 <= 25 && errors === 0 ? 'met' : 'MISSED'}`);
+  console.log(
+    `spec reads: ${connections} connections × ${seconds} s, ${latencies.length} requests (${(latencies.length / seconds).toFixed(0)}/s), ${errors} errors`,
+  );
+  console.log(
+    `spec read latency: p50 ${p(50)} ms · p95 ${p(95)} ms · p99 ${p(99)} ms · target p95 ≤ 25 ms with zero errors → ${p95 <= 25 && errors === 0 ? 'met' : 'MISSED'}`,
+  );
   agent.destroy();
 }
 
-main().catch((err) => { console.error(err); process.exit(1); });
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});

@@ -3,13 +3,33 @@
  * (coil windings, pickup, stator, plug gap, battery, regulator, fuse). Every name and value
  * is invented; the values only need to pass validation, so they vary a little per model.
  */
-import { SPEC_CSV_COLUMNS } from '../lib/csv';
+import { SPEC_CSV_COLUMNS } from '@/lib/csv';
 
-type Spec = [component: string, parameter: string, min: number | '', nominal: number | '', max: number | '', unit: string, refTemp: number | '', material: string, testPoints: string];
+type Spec = [
+  component: string,
+  parameter: string,
+  min: number | '',
+  nominal: number | '',
+  max: number | '',
+  unit: string,
+  refTemp: number | '',
+  material: string,
+  testPoints: string,
+];
 
 const SPECS: Spec[] = [
   ['ignition coil', 'primary winding resistance', 2.4, 2.8, 3.2, 'Ω', 20, 'copper', 'orange/white (+) to ground'],
-  ['ignition coil', 'secondary winding resistance', 8.5, 9.5, 10.5, 'kΩ', 20, 'copper', 'HT lead core to ground, cap removed'],
+  [
+    'ignition coil',
+    'secondary winding resistance',
+    8.5,
+    9.5,
+    10.5,
+    'kΩ',
+    20,
+    'copper',
+    'HT lead core to ground, cap removed',
+  ],
   ['pickup coil', 'pickup coil resistance', 400, 480, 560, 'Ω', 20, 'copper', 'blue/yellow to green/white'],
   ['pickup coil', 'pickup coil air gap', 0.5, 0.7, 0.9, 'mm', '', 'none', 'rotor tooth to pickup face'],
   ['stator', 'stator winding resistance', 0.2, 0.3, 0.4, 'Ω', 20, 'copper', 'yellow to yellow, each pair'],
@@ -21,12 +41,14 @@ const SPECS: Spec[] = [
 ];
 
 /** RFC 4180 quoting where a cell needs it (both the importer and LOAD DATA read it). */
-const cell = (value: string | number) => (/[",\r\n]/.test(String(value)) ? `"${String(value).replace(/"/g, '""')}"` : String(value));
+const cell = (value: string | number) =>
+  /[",\r\n]/.test(String(value)) ? `"${String(value).replace(/"/g, '""')}"` : String(value);
 
 const FAMILIES = ['Trail', 'Urban', 'Ridge', 'Drift', 'Surge', 'Vela', 'Strale', 'Moor', 'Quill', 'Fen'];
 
 /** Varies a value by model (±5 %), keeping min ≤ nominal ≤ max. */
-const vary = (value: number | '', model: number) => (value === '' ? '' : Number((value * (1 + ((model % 11) - 5) / 100)).toPrecision(4)));
+const vary = (value: number | '', model: number) =>
+  value === '' ? '' : Number((value * (1 + ((model % 11) - 5) / 100)).toPrecision(4));
 
 export function makeBenchCsv(rows: number, makePrefix = 'Benchmake'): string {
   const lines = [SPEC_CSV_COLUMNS.join(',')];
@@ -36,11 +58,32 @@ export function makeBenchCsv(rows: number, makePrefix = 'Benchmake'): string {
     const yearFrom = 1995 + (model % 25);
     for (const [component, parameter, min, nominal, max, unit, refTemp, material, testPoints] of SPECS) {
       if (lines.length > rows) break;
-      lines.push([
-        make, name, yearFrom, yearFrom + 4, model % 3 === 0 ? 'EU' : 'US', component, parameter,
-        vary(min, model), vary(nominal, model), vary(max, model), unit, refTemp, material, testPoints,
-        'engine cold', `${make} Service Manual`, '2nd edition', `${1 + (model % 9)}-${10 + (model % 40)}`, '', '',
-      ].map(cell).join(','));
+      lines.push(
+        [
+          make,
+          name,
+          yearFrom,
+          yearFrom + 4,
+          model % 3 === 0 ? 'EU' : 'US',
+          component,
+          parameter,
+          vary(min, model),
+          vary(nominal, model),
+          vary(max, model),
+          unit,
+          refTemp,
+          material,
+          testPoints,
+          'engine cold',
+          `${make} Service Manual`,
+          '2nd edition',
+          `${1 + (model % 9)}-${10 + (model % 40)}`,
+          '',
+          '',
+        ]
+          .map(cell)
+          .join(','),
+      );
     }
   }
   return lines.join('\r\n') + '\r\n';

@@ -15,10 +15,10 @@ import os from 'node:os';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import mariadb from 'mariadb';
-import { config } from '../server/config';
-import { AppDataSource } from '../server/db/data-source';
-import { ensureDatabase } from '../server/db/ensure-database';
-import { commitImport, previewValidated, validateUpload } from '../server/modules/imports/import.service';
+import { config } from '@/server/config';
+import { AppDataSource } from '@/server/db/data-source';
+import { ensureDatabase } from '@/server/db/ensure-database';
+import { commitImport, previewValidated, validateUpload } from '@/server/modules/imports/import.service';
 import { makeBenchCsv } from './bench-import-data';
 
 const ROWS = 50_000;
@@ -28,11 +28,17 @@ const ACTOR = { id: null, name: 'Specbench benchmark' };
 /** Peak resident memory while `fn` runs, sampled every 20 ms. */
 async function timed<T>(fn: () => Promise<T> | T): Promise<{ value: T; seconds: number; peakMb: number }> {
   let peak = process.memoryUsage().rss;
-  const sampler = setInterval(() => { peak = Math.max(peak, process.memoryUsage().rss); }, 20);
+  const sampler = setInterval(() => {
+    peak = Math.max(peak, process.memoryUsage().rss);
+  }, 20);
   const t = performance.now();
   try {
     const value = await fn();
-    return { value, seconds: (performance.now() - t) / 1000, peakMb: Math.max(peak, process.memoryUsage().rss) / 2 ** 20 };
+    return {
+      value,
+      seconds: (performance.now() - t) / 1000,
+      peakMb: Math.max(peak, process.memoryUsage().rss) / 2 ** 20,
+    };
   } finally {
     clearInterval(sampler);
   }
@@ -46,12 +52,18 @@ const BARE_TABLE = `CREATE TABLE IF NOT EXISTS bulk_specs (make varchar(120), mo
 /** The same file through MariaDB's own loader: parsing, type conversion and the insert, nothing else. */
 async function bulkLoad(file: string): Promise<number> {
   const conn = await mariadb.createConnection({
-    host: config.DB_HOST, port: config.DB_PORT, user: config.DB_USER, password: config.DB_PASSWORD, database: DB, permitLocalInfile: true,
+    host: config.DB_HOST,
+    port: config.DB_PORT,
+    user: config.DB_USER,
+    password: config.DB_PASSWORD,
+    database: DB,
+    permitLocalInfile: true,
   });
   try {
     await conn.query(BARE_TABLE);
     await conn.query('TRUNCATE TABLE bulk_specs');
-    const result = await conn.query(`LOAD DATA LOCAL INFILE ${conn.escape(file)} INTO TABLE bulk_specs CHARACTER SET utf8mb4
+    const result =
+      await conn.query(`LOAD DATA LOCAL INFILE ${conn.escape(file)} INTO TABLE bulk_specs CHARACTER SET utf8mb4
       FIELDS TERMINATED BY ',' OPTIONALLY ENCLOSED BY '"' LINES TERMINATED BY '\\r\\n' IGNORE 1 LINES
       (make, model, year_from, @year_to, variant, component, parameter, @min, @nominal, @max, unit, @ref, material,
        test_points, conditions, source_title, source_edition, source_page, @url, notes)
@@ -67,7 +79,14 @@ const s = (seconds: number) => `${seconds.toFixed(2)} s`;
 const rate = (seconds: number) => `${Math.round(ROWS / seconds).toLocaleString('en')} rows/s`;
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
-type Round = { validation: number; preview: number; commit: number; load: number; peakMb: [number, number, number]; bytes: Buffer };
+type Round = {
+  validation: number;
+  preview: number;
+  commit: number;
+  load: number;
+  peakMb: [number, number, number];
+  bytes: Buffer;
+};
 
 async function round(n: number, file: string): Promise<Round> {
   const text = makeBenchCsv(ROWS, `Benchmake r${n}`);
@@ -79,18 +98,26 @@ async function round(n: number, file: string): Promise<Round> {
   const validation = await timed(() => validateUpload(bytes));
   const preview = await timed(() => previewValidated(upload, validation.value, ACTOR));
   const commit = await timed(() => commitImport(preview.value.id, ACTOR, 'Benchmark import'));
-  if (commit.value.counts.created !== ROWS) throw new Error(`Round ${n} created ${commit.value.counts.created} specs, expected ${ROWS}`);
-  const load = early ?? await timed(() => bulkLoad(file));
+  if (commit.value.counts.created !== ROWS)
+    throw new Error(`Round ${n} created ${commit.value.counts.created} specs, expected ${ROWS}`);
+  const load = early ?? (await timed(() => bulkLoad(file)));
   if (load.value !== ROWS) throw new Error(`Bulk load wrote ${load.value} rows, expected ${ROWS}`);
-  console.log(`  round ${n}: validation ${s(validation.seconds)} · preview ${s(preview.seconds)} · commit ${s(commit.seconds)} · bulk load ${s(load.seconds)}${loadFirst ? ' (before the import)' : ''} · ratio ${(100 * load.seconds / commit.seconds).toFixed(0)} %`);
+  console.log(
+    `  round ${n}: validation ${s(validation.seconds)} · preview ${s(preview.seconds)} · commit ${s(commit.seconds)} · bulk load ${s(load.seconds)}${loadFirst ? ' (before the import)' : ''} · ratio ${((100 * load.seconds) / commit.seconds).toFixed(0)} %`,
+  );
   return {
-    validation: validation.seconds, preview: preview.seconds, commit: commit.seconds, load: load.seconds,
-    peakMb: [validation.peakMb, preview.peakMb, commit.peakMb], bytes,
+    validation: validation.seconds,
+    preview: preview.seconds,
+    commit: commit.seconds,
+    load: load.seconds,
+    peakMb: [validation.peakMb, preview.peakMb, commit.peakMb],
+    bytes,
   };
 }
 
 async function main() {
-  if (config.DB_NAME !== DB) throw new Error(`Refusing to run: DB_NAME is ${config.DB_NAME}, expected ${DB} (run through npm run bench).`);
+  if (config.DB_NAME !== DB)
+    throw new Error(`Refusing to run: DB_NAME is ${config.DB_NAME}, expected ${DB} (run through npm run bench).`);
   await ensureDatabase(DB);
   await AppDataSource.initialize();
   const file = path.join(os.tmpdir(), `specbench-bench-${process.pid}.csv`);
@@ -99,19 +126,30 @@ async function main() {
     console.log(`import benchmark: ${ROWS.toLocaleString('en')} invented rows per file, three rounds`);
     const rounds: Round[] = [];
     for (const n of [1, 2, 3]) rounds.push(await round(n, file));
-    const [{ specs, revisions }] = await AppDataSource.query('SELECT (SELECT COUNT(*) FROM specs) AS specs, (SELECT COUNT(*) FROM spec_revisions) AS revisions');
-    if (Number(specs) !== 3 * ROWS || Number(revisions) !== 3 * ROWS) throw new Error(`Expected ${3 * ROWS} specs and revisions, found ${specs} and ${revisions}`);
-    const again = await timed(async () => previewValidated({ fileName: 'again.csv', bytes: rounds[0].bytes }, validateUpload(rounds[0].bytes), ACTOR));
+    const [{ specs, revisions }] = await AppDataSource.query(
+      'SELECT (SELECT COUNT(*) FROM specs) AS specs, (SELECT COUNT(*) FROM spec_revisions) AS revisions',
+    );
+    if (Number(specs) !== 3 * ROWS || Number(revisions) !== 3 * ROWS)
+      throw new Error(`Expected ${3 * ROWS} specs and revisions, found ${specs} and ${revisions}`);
+    const again = await timed(async () =>
+      previewValidated({ fileName: 'again.csv', bytes: rounds[0].bytes }, validateUpload(rounds[0].bytes), ACTOR),
+    );
 
     const m = (key: 'validation' | 'preview' | 'commit' | 'load') => median(rounds.map((r) => r[key]));
     const total = median(rounds.map((r) => r.validation + r.preview + r.commit));
     const ratio = median(rounds.map((r) => r.load / r.commit));
-    console.log(`import (median of 3): ${(rounds[0].bytes.length / 2 ** 20).toFixed(1)} MB file · validation ${s(m('validation'))} · preview ${s(m('preview'))} · commit ${s(m('commit'))} (${rate(m('commit'))}, one revision per spec) · end to end ${s(total)} · target ≤ 60 s → ${total <= 60 ? 'met' : 'MISSED'}`);
+    console.log(
+      `import (median of 3): ${(rounds[0].bytes.length / 2 ** 20).toFixed(1)} MB file · validation ${s(m('validation'))} · preview ${s(m('preview'))} · commit ${s(m('commit'))} (${rate(m('commit'))}, one revision per spec) · end to end ${s(total)} · target ≤ 60 s → ${total <= 60 ? 'met' : 'MISSED'}`,
+    );
     const changed = again.value.counts.created + again.value.counts.updated;
     const peak = (phase: number) => Math.max(...rounds.map((r) => r.peakMb[phase])).toFixed(0);
-    console.log(`import: peak RSS ${peak(0)} / ${peak(1)} / ${peak(2)} MB (validation / preview / commit; the commit runs in MariaDB) · re-import of the same file: ${again.value.counts.unchanged.toLocaleString('en')} unchanged, ${changed} changed, in ${s(again.seconds)}`);
+    console.log(
+      `import: peak RSS ${peak(0)} / ${peak(1)} / ${peak(2)} MB (validation / preview / commit; the commit runs in MariaDB) · re-import of the same file: ${again.value.counts.unchanged.toLocaleString('en')} unchanged, ${changed} changed, in ${s(again.seconds)}`,
+    );
     console.log(`bulk load (LOAD DATA LOCAL INFILE, bare table, median of 3): ${s(m('load'))} (${rate(m('load'))})`);
-    console.log(`commit / bulk-load throughput (median of 3 pairs): ${(ratio * 100).toFixed(0)} % · target ≥ 25 % → ${ratio >= 0.25 ? 'met' : 'MISSED'}`);
+    console.log(
+      `commit / bulk-load throughput (median of 3 pairs): ${(ratio * 100).toFixed(0)} % · target ≥ 25 % → ${ratio >= 0.25 ? 'met' : 'MISSED'}`,
+    );
   } finally {
     fs.rmSync(file, { force: true });
     await AppDataSource.query(`DROP DATABASE IF EXISTS \`${DB}\``).catch(() => undefined);

@@ -18,12 +18,19 @@ async function call(method: string, url: string, token?: string, body?: unknown,
   const headers: Record<string, string> = { 'Content-Type': 'application/json' };
   if (token) headers.Authorization = `Bearer ${token}`;
   if (key) headers['Idempotency-Key'] = key;
-  const res = await fetch(`${base}${url}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) });
-  return { status: res.status, body: await res.json().catch(() => null) as Record<string, unknown> | null };
+  const res = await fetch(`${base}${url}`, {
+    method,
+    headers,
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  return { status: res.status, body: (await res.json().catch(() => null)) as Record<string, unknown> | null };
 }
 
 async function main() {
-  const signIn = await call('POST', '/api/auth/sign-in', undefined, { email: 'contributor@specbench.example', password: process.env.DEMO_PASSWORD ?? 'bench-demo-2026' });
+  const signIn = await call('POST', '/api/auth/sign-in', undefined, {
+    email: 'contributor@specbench.example',
+    password: process.env.DEMO_PASSWORD ?? 'bench-demo-2026',
+  });
   if (signIn.status !== 200) throw new Error(`sign-in answered ${signIn.status}`);
   const token = String(signIn.body!.accessToken);
   const job = await call('POST', '/api/jobs', token, { machineLabel: 'Restart check bench machine' });
@@ -38,11 +45,22 @@ async function main() {
       const key = `restart-${randomUUID()}`;
       counts.sent += 1;
       try {
-        const res = await call('POST', `/api/jobs/${jobId}/readings`, token, { spec: { min: 1, max: 2, unit: 'ohm' }, label: 'Restart check', reading: { value: 1.5, unit: 'ohm' } }, key);
-        if (res.status === 201 || res.status === 200) { counts.acked += 1; acked.add(key); lastOkAt = Date.now(); }
-        else if (res.status === 503) counts.unavailable += 1;
+        const res = await call(
+          'POST',
+          `/api/jobs/${jobId}/readings`,
+          token,
+          { spec: { min: 1, max: 2, unit: 'ohm' }, label: 'Restart check', reading: { value: 1.5, unit: 'ohm' } },
+          key,
+        );
+        if (res.status === 201 || res.status === 200) {
+          counts.acked += 1;
+          acked.add(key);
+          lastOkAt = Date.now();
+        } else if (res.status === 503) counts.unavailable += 1;
         else counts.other += 1;
-      } catch { counts.other += 1; }
+      } catch {
+        counts.other += 1;
+      }
       if (counts.unavailable > 0 && Date.now() < end) await new Promise((r) => setTimeout(r, 100));
     }
   };
@@ -55,11 +73,18 @@ async function main() {
   })();
   await Promise.all([...Array.from({ length: 10 }, writer), restart]);
   const sheet = await call('GET', `/api/jobs/${jobId}`, token);
-  const stored = new Set(((sheet.body?.readings ?? []) as Array<{ idempotencyKey: string }>).map((r) => r.idempotencyKey));
+  const stored = new Set(((sheet.body?.readings ?? []) as { idempotencyKey: string }[]).map((r) => r.idempotencyKey));
   const lost = [...acked].filter((k) => !stored.has(k)).length;
   const recovered = lastOkAt > restartedAt && sheet.status === 200;
-  console.log(`database restart under writes: ${counts.sent} sent · ${counts.acked} acknowledged · ${counts.unavailable} answered 503 · ${counts.other} other errors`);
-  console.log(`after the restart: ${recovered ? 'recovered without restarting the server' : 'did NOT recover'} · acknowledged writes missing: ${lost} → ${recovered && lost === 0 && counts.other === 0 ? 'met' : 'MISSED'}`);
+  console.log(
+    `database restart under writes: ${counts.sent} sent · ${counts.acked} acknowledged · ${counts.unavailable} answered 503 · ${counts.other} other errors`,
+  );
+  console.log(
+    `after the restart: ${recovered ? 'recovered without restarting the server' : 'did NOT recover'} · acknowledged writes missing: ${lost} → ${recovered && lost === 0 && counts.other === 0 ? 'met' : 'MISSED'}`,
+  );
 }
 
-main().catch((err) => { console.error(err); process.exit(1); });
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});

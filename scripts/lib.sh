@@ -92,6 +92,7 @@ build_server() {
   log "compiling the server"
   rm -rf dist-server
   npx tsc -p server/tsconfig.json
+  npx tsc-alias -p server/tsconfig.json
 }
 
 # Rebuilds the web app only when its sources changed since the last build.

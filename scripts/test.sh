@@ -1,10 +1,12 @@
 #!/usr/bin/env bash
-# npm test: the same set-up as npm start, against throwaway test databases, then the
-# whole jest suite (lib, server, app, e2e). Ends with "N passed, N failed" and the
+# npm test: lint and type checks, then the same set-up as npm start against throwaway
+# test databases, then the whole jest suite (lib, server, app, e2e). Ends with "N passed, N failed" and the
 # runner's exit code.
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 
 ensure_npm
+log "lint and type checks"
+(cd "$ROOT" && npm run -s lint && npm run -s typecheck)
 ensure_apt chromium chromium
 db_start
 trap '[ "$DB_STARTED_HERE" = 1 ] && db_stop' EXIT

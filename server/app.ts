@@ -26,7 +26,7 @@ import { correctionRouter } from './modules/corrections/correction.router';
 import { devMailboxRouter } from './modules/mail/dev-mailbox.router';
 
 /** Every API router and where it is mounted under /api (the access test walks this list). */
-export function apiRouters(): Array<[string, express.Router]> {
+export function apiRouters(): [string, express.Router][] {
   return [
     ['/health', healthRouter],
     ['/auth', authRouter()],
@@ -47,18 +47,20 @@ export function createApp(options: { webDist?: string | null } = {}) {
   const app = express();
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
-  app.use(helmet({
-    contentSecurityPolicy: {
-      directives: {
-        defaultSrc: ["'self'"],
-        scriptSrc: ["'self'"],
-        styleSrc: ["'self'", "'unsafe-inline'"],
-        imgSrc: ["'self'", 'data:', 'blob:'],
-        fontSrc: ["'self'", 'data:'],
-        connectSrc: ["'self'"],
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+        },
       },
-    },
-  }));
+    }),
+  );
   app.set('trust proxy', 'loopback');
   app.use(express.json({ limit: '100kb' }));
   app.use(cookieParser());

@@ -29,7 +29,10 @@ const Env = z.object({
   DB_PORT: z.coerce.number().int().min(1).max(65535).default(3307),
   DB_USER: z.string().default('specbench'),
   DB_PASSWORD: z.string().default('specbench-local'),
-  DB_NAME: z.string().regex(/^[A-Za-z0-9_]+$/).default('specbench'),
+  DB_NAME: z
+    .string()
+    .regex(/^[A-Za-z0-9_]+$/)
+    .default('specbench'),
   DATA_DIR: z.string().optional(),
   WEB_DIST: z.string().optional(),
   /** HS256 signing key; generated into DATA_DIR/jwt-secret on first start when absent. */
@@ -51,7 +54,14 @@ const Env = z.object({
 /** The development default for the demo accounts, printed by `npm start`; refused in production. */
 export const DEFAULT_DEMO_PASSWORD = 'bench-demo-2026';
 
-export type Config = Omit<z.infer<typeof Env>, 'DEMO_PASSWORD'> & { DEMO_PASSWORD: string; rootDir: string; dataDir: string; webDist: string; jwtSecret: string; appUrl: string };
+export type Config = Omit<z.infer<typeof Env>, 'DEMO_PASSWORD'> & {
+  DEMO_PASSWORD: string;
+  rootDir: string;
+  dataDir: string;
+  webDist: string;
+  jwtSecret: string;
+  appUrl: string;
+};
 
 /** JWT_SECRET, or a random key kept in the data folder so tokens survive restarts. */
 function jwtSecret(given: string | undefined, dataDir: string): string {
@@ -96,7 +106,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
 function refuseDevelopmentDefaults(env: z.infer<typeof Env>) {
   const problems: string[] = [];
   if (!env.JWT_SECRET) problems.push('JWT_SECRET is required in production');
-  if (!env.SMTP_URL) problems.push('SMTP_URL is required in production (the local fake mail server is for development only)');
+  if (!env.SMTP_URL)
+    problems.push('SMTP_URL is required in production (the local fake mail server is for development only)');
   if (!env.DEMO_PASSWORD || env.DEMO_PASSWORD === DEFAULT_DEMO_PASSWORD) {
     problems.push('DEMO_PASSWORD must be set in production, and not to the development default');
   }

@@ -12,15 +12,24 @@ let server: Server | undefined;
 function shutdown(code: number) {
   stopOutboxWorker();
   void fakeSmtp.stop();
-  const done = () => AppDataSource.destroy().catch(() => undefined).finally(() => process.exit(code));
+  const done = () =>
+    AppDataSource.destroy()
+      .catch(() => undefined)
+      .finally(() => process.exit(code));
   if (server) server.close(done);
   else done();
   const force = setTimeout(() => process.exit(code), 5000) as unknown as { unref(): void };
   force.unref();
 }
 
-process.on('unhandledRejection', (reason) => { console.error('Unhandled rejection:', reason); shutdown(1); });
-process.on('uncaughtException', (err) => { console.error('Uncaught exception:', err); shutdown(1); });
+process.on('unhandledRejection', (reason) => {
+  console.error('Unhandled rejection:', reason);
+  shutdown(1);
+});
+process.on('uncaughtException', (err) => {
+  console.error('Uncaught exception:', err);
+  shutdown(1);
+});
 process.on('SIGINT', () => shutdown(0));
 process.on('SIGTERM', () => shutdown(0));
 
@@ -28,14 +37,24 @@ async function main() {
   await AppDataSource.initialize();
   if (!config.SMTP_URL && config.NODE_ENV !== 'production') {
     const port = await fakeSmtp.start(config.FAKE_SMTP_PORT);
-    console.log(`Local mail server on 127.0.0.1:${port}. Development only: its messages (sign-up and password-reset links)`);
-    console.log(`are shown at http://localhost:${config.PORT}/dev/mailbox to this machine alone; set SMTP_URL for real mail.`);
+    console.log(
+      `Local mail server on 127.0.0.1:${port}. Development only: its messages (sign-up and password-reset links)`,
+    );
+    console.log(
+      `are shown at http://localhost:${config.PORT}/dev/mailbox to this machine alone; set SMTP_URL for real mail.`,
+    );
   }
   startOutboxWorker();
   server = createApp().listen(config.PORT, config.HOST, () => {
-    const where = config.HOST === '127.0.0.1' ? `http://localhost:${config.PORT}` : `http://${config.HOST}:${config.PORT}`;
-    console.log(`Specbench is running at ${where}  (listening on ${config.HOST}; set HOST to open it up; API under /api, Ctrl-C stops it)`);
+    const where =
+      config.HOST === '127.0.0.1' ? `http://localhost:${config.PORT}` : `http://${config.HOST}:${config.PORT}`;
+    console.log(
+      `Specbench is running at ${where}  (listening on ${config.HOST}; set HOST to open it up; API under /api, Ctrl-C stops it)`,
+    );
   });
 }
 
-main().catch((err) => { console.error('Specbench could not start:', err); process.exit(1); });
+main().catch((err) => {
+  console.error('Specbench could not start:', err);
+  process.exit(1);
+});

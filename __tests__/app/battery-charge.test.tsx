@@ -1,5 +1,5 @@
 import { fireEvent, render, screen } from '@testing-library/react-native';
-import { BatteryCharge } from '../../components/calculator/battery-charge';
+import { BatteryCharge } from '@/components/calculator/battery-charge';
 
 describe('BatteryCharge', () => {
   it('reads a flooded battery at 12.45 V as 75 % (a table row)', () => {

@@ -1,19 +1,41 @@
 import { fireEvent, render, screen, within } from '@testing-library/react-native';
-import { CommitPanel } from '../../components/curation/commit-panel';
-import { ImportPreview } from '../../components/curation/import-preview';
-import type { ImportPreviewDto, ImportRowDto } from '../../lib/contracts/imports';
+import { CommitPanel } from '@/components/curation/commit-panel';
+import { ImportPreview } from '@/components/curation/import-preview';
+import type { ImportPreviewDto, ImportRowDto } from '@/lib/contracts/imports';
 
 const row = (line: number, over: Partial<ImportRowDto> = {}): ImportRowDto => ({
-  line, specId: null, make: 'Testmake', model: 'Alpha 500', yearFrom: 2010, yearTo: 2014, variant: 'EU',
-  component: 'ignition coil', parameter: 'primary winding resistance', display: '2.4–3.2 Ω', warnings: [], ...over,
+  line,
+  specId: null,
+  make: 'Testmake',
+  model: 'Alpha 500',
+  yearFrom: 2010,
+  yearTo: 2014,
+  variant: 'EU',
+  component: 'ignition coil',
+  parameter: 'primary winding resistance',
+  display: '2.4–3.2 Ω',
+  warnings: [],
+  ...over,
 });
 
 const preview = (over: Partial<ImportPreviewDto> = {}): ImportPreviewDto => ({
-  id: 12, fileName: 'coils.csv', sha256: 'ab', fileSize: 400, status: 'previewed',
+  id: 12,
+  fileName: 'coils.csv',
+  sha256: 'ab',
+  fileSize: 400,
+  status: 'previewed',
   counts: { created: 1, updated: 1, unchanged: 1, rejected: 2, warnings: 1 },
-  uploaderName: 'Lead', createdAt: '2026-01-05T10:00:00Z', committedAt: null, committedByName: null,
+  uploaderName: 'Lead',
+  createdAt: '2026-01-05T10:00:00Z',
+  committedAt: null,
+  committedByName: null,
   fileErrors: [],
-  created: [row(2, { parameter: 'stator resistance', warnings: [{ line: 2, column: 'nominal', reason: 'nominal 45 is unusual' }] })],
+  created: [
+    row(2, {
+      parameter: 'stator resistance',
+      warnings: [{ line: 2, column: 'nominal', reason: 'nominal 45 is unusual' }],
+    }),
+  ],
   updated: [{ ...row(3, { specId: 40 }), changes: [{ field: 'max', before: 3.2, after: 3.5 }] }],
   unchanged: [row(4, { specId: 41, parameter: 'secondary winding resistance' })],
   rejected: [

@@ -1,17 +1,48 @@
 import { fireEvent, render, screen } from '@testing-library/react-native';
-import { SearchResults } from '../../components/library/search-results';
-import type { SearchResultDto } from '../../lib/contracts/library';
+import { SearchResults } from '@/components/library/search-results';
+import type { SearchResultDto } from '@/lib/contracts/library';
 
 const result: SearchResultDto = {
   query: 'test',
   total: 2,
-  groups: [{
-    model: { id: 7, make: { id: 1, name: 'Testmake' }, name: 'Alpha 500', yearFrom: 2010, yearTo: 2014, variant: 'EU' },
-    hits: [
-      { specId: 11, component: 'Ignition coil', parameter: 'Primary winding resistance', quantityKind: 'resistance', min: 1, nominal: null, max: 2, unit: 'Ω', display: '1–2 Ω', score: 1 },
-      { specId: 12, component: 'Spark plug', parameter: 'Electrode gap', quantityKind: 'length', min: 0.6, nominal: null, max: 0.7, unit: 'mm', display: '0.6–0.7 mm', score: 0.9 },
-    ],
-  }],
+  groups: [
+    {
+      model: {
+        id: 7,
+        make: { id: 1, name: 'Testmake' },
+        name: 'Alpha 500',
+        yearFrom: 2010,
+        yearTo: 2014,
+        variant: 'EU',
+      },
+      hits: [
+        {
+          specId: 11,
+          component: 'Ignition coil',
+          parameter: 'Primary winding resistance',
+          quantityKind: 'resistance',
+          min: 1,
+          nominal: null,
+          max: 2,
+          unit: 'Ω',
+          display: '1–2 Ω',
+          score: 1,
+        },
+        {
+          specId: 12,
+          component: 'Spark plug',
+          parameter: 'Electrode gap',
+          quantityKind: 'length',
+          min: 0.6,
+          nominal: null,
+          max: 0.7,
+          unit: 'mm',
+          display: '0.6–0.7 mm',
+          score: 0.9,
+        },
+      ],
+    },
+  ],
 };
 
 describe('SearchResults', () => {

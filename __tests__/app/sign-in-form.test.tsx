@@ -1,5 +1,5 @@
 import { fireEvent, render, screen } from '@testing-library/react-native';
-import { SignInForm } from '../../components/account/sign-in-form';
+import { SignInForm } from '@/components/account/sign-in-form';
 
 describe('SignInForm', () => {
   it('when submitted empty, shows the schema messages under the fields and does not submit', () => {
@@ -40,8 +40,11 @@ describe('SignInForm', () => {
 
   it('shows the server failure and its field messages, and disables the button while pending', () => {
     render(
-      <SignInForm onSubmit={jest.fn()} pending
-        failure={{ message: 'The e-mail address or the password is wrong.', fields: { password: 'Wrong password' } }} />,
+      <SignInForm
+        onSubmit={jest.fn()}
+        pending
+        failure={{ message: 'The e-mail address or the password is wrong.', fields: { password: 'Wrong password' } }}
+      />,
     );
 
     expect(screen.getByText('The e-mail address or the password is wrong.')).toBeTruthy();

@@ -1,19 +1,53 @@
 import { fireEvent, render, screen, waitFor, within } from '@testing-library/react-native';
-import { SpecCreateForm } from '../../components/curation/spec-create-form';
-import { SpecEditForm } from '../../components/curation/spec-edit-form';
-import { EMPTY_SPEC_FORM, specToForm, toUpdateBody } from '../../components/curation/spec-form-values';
-import { StaleEditView } from '../../components/curation/stale-edit-view';
-import type { SpecDetailDto } from '../../lib/contracts/library';
+import { SpecCreateForm } from '@/components/curation/spec-create-form';
+import { SpecEditForm } from '@/components/curation/spec-edit-form';
+import { EMPTY_SPEC_FORM, specToForm, toUpdateBody } from '@/components/curation/spec-form-values';
+import { StaleEditView } from '@/components/curation/stale-edit-view';
+import type { SpecDetailDto } from '@/lib/contracts/library';
 
 const spec = (over: Partial<SpecDetailDto> = {}): SpecDetailDto => ({
-  id: 9, componentId: 3, parameter: 'primary winding resistance', quantityKind: 'resistance', min: 2.4, nominal: 2.8, max: 3.2,
-  unit: 'Ω', refTempC: 20, material: 'copper', status: 'published', version: 4, display: '2.4–3.2 Ω',
-  testPoints: 'orange/white to ground', conditions: 'engine cold', notes: null, sourcePage: '7-12',
-  source: { id: 1, title: 'Invented Manual', edition: '3rd', publisher: null, year: null, kind: 'service_manual', url: null },
+  id: 9,
+  componentId: 3,
+  parameter: 'primary winding resistance',
+  quantityKind: 'resistance',
+  min: 2.4,
+  nominal: 2.8,
+  max: 3.2,
+  unit: 'Ω',
+  refTempC: 20,
+  material: 'copper',
+  status: 'published',
+  version: 4,
+  display: '2.4–3.2 Ω',
+  testPoints: 'orange/white to ground',
+  conditions: 'engine cold',
+  notes: null,
+  sourcePage: '7-12',
+  source: {
+    id: 1,
+    title: 'Invented Manual',
+    edition: '3rd',
+    publisher: null,
+    year: null,
+    kind: 'service_manual',
+    url: null,
+  },
   component: { id: 3, name: 'ignition coil', locationNotes: null, connectorNotes: null },
   model: { id: 2, make: { id: 1, name: 'Testmake' }, name: 'Alpha 500', yearFrom: 2010, yearTo: 2014, variant: 'EU' },
   updatedAt: '2026-01-05T10:00:00Z',
-  revisions: [{ id: 30, version: 4, changedFields: ['max'], authorName: 'Other Editor', reason: 'SB-12 widens the limit', origin: 'edit', originRef: null, createdAt: '2026-01-05T10:00:00Z', snapshot: {} }],
+  revisions: [
+    {
+      id: 30,
+      version: 4,
+      changedFields: ['max'],
+      authorName: 'Other Editor',
+      reason: 'SB-12 widens the limit',
+      origin: 'edit',
+      originRef: null,
+      createdAt: '2026-01-05T10:00:00Z',
+      snapshot: {},
+    },
+  ],
   ...over,
 });
 
@@ -26,8 +60,11 @@ describe('toUpdateBody', () => {
 
   it('sends the whole source when one of its fields changes', () => {
     const base = specToForm(spec());
-    expect(toUpdateBody(base, { ...base, source: { ...base.source, page: '7-13' }, reason: 'page' }, 4))
-      .toEqual({ source: { title: 'Invented Manual', edition: '3rd', page: '7-13', url: null }, version: 4, reason: 'page' });
+    expect(toUpdateBody(base, { ...base, source: { ...base.source, page: '7-13' }, reason: 'page' }, 4)).toEqual({
+      source: { title: 'Invented Manual', edition: '3rd', page: '7-13', url: null },
+      version: 4,
+      reason: 'page',
+    });
   });
 });
 
@@ -37,10 +74,21 @@ describe('StaleEditView', () => {
     const base = specToForm(spec({ version: 3 }));
     const onReapply = jest.fn();
     render(
-      <StaleEditView current={spec({ max: 3.4 })} base={base} baseVersion={3} mine={{ ...base, max: '3.5' }} changed={['max']} busy={false}
-        onReapply={onReapply} onEditMine={jest.fn()} onDiscard={jest.fn()} />,
+      <StaleEditView
+        current={spec({ max: 3.4 })}
+        base={base}
+        baseVersion={3}
+        mine={{ ...base, max: '3.5' }}
+        changed={['max']}
+        busy={false}
+        onReapply={onReapply}
+        onEditMine={jest.fn()}
+        onDiscard={jest.fn()}
+      />,
     );
-    expect(screen.getByText(/You started from version 3; it is now at version 4 \(Other Editor: “SB-12 widens the limit”\)/)).toBeTruthy();
+    expect(
+      screen.getByText(/You started from version 3; it is now at version 4 \(Other Editor: “SB-12 widens the limit”\)/),
+    ).toBeTruthy();
     const row = within(screen.getByTestId('stale-row-max'));
     expect(row.getByText('3.4')).toBeTruthy();
     expect(row.getByText('3.5')).toBeTruthy();
@@ -51,8 +99,15 @@ describe('StaleEditView', () => {
 });
 
 const VALID = {
-  ...EMPTY_SPEC_FORM, make: 'Testmake', model: 'Alpha 500', yearFrom: '2010', component: 'stator', parameter: 'stator winding resistance',
-  min: '0,2', max: '0.4', source: { title: 'Invented Manual', edition: '', page: '4-2', url: '' },
+  ...EMPTY_SPEC_FORM,
+  make: 'Testmake',
+  model: 'Alpha 500',
+  yearFrom: '2010',
+  component: 'stator',
+  parameter: 'stator winding resistance',
+  min: '0,2',
+  max: '0.4',
+  source: { title: 'Invented Manual', edition: '', page: '4-2', url: '' },
 };
 
 describe('SpecCreateForm', () => {
@@ -79,7 +134,15 @@ describe('SpecCreateForm', () => {
     render(<SpecCreateForm submitting={false} onSubmit={onSubmit} initial={VALID} />);
     fireEvent.press(screen.getByTestId('spec-create-submit'));
     await waitFor(() => expect(onSubmit).toHaveBeenCalled());
-    expect(onSubmit.mock.calls[0][0]).toMatchObject({ make: 'Testmake', yearFrom: 2010, yearTo: null, min: 0.2, max: 0.4, unit: 'Ω', source: { page: '4-2', url: null } });
+    expect(onSubmit.mock.calls[0][0]).toMatchObject({
+      make: 'Testmake',
+      yearFrom: 2010,
+      yearTo: null,
+      min: 0.2,
+      max: 0.4,
+      unit: 'Ω',
+      source: { page: '4-2', url: null },
+    });
   });
 });
 
@@ -87,7 +150,15 @@ describe('SpecEditForm', () => {
   it('when nothing changed, says so instead of sending', async () => {
     const onSubmit = jest.fn();
     const base = specToForm(spec());
-    render(<SpecEditForm base={base} version={4} initial={{ ...base, reason: 'no change' }} submitting={false} onSubmit={onSubmit} />);
+    render(
+      <SpecEditForm
+        base={base}
+        version={4}
+        initial={{ ...base, reason: 'no change' }}
+        submitting={false}
+        onSubmit={onSubmit}
+      />,
+    );
     fireEvent.press(screen.getByTestId('spec-edit-submit'));
     await waitFor(() => expect(screen.getByText('Change at least one field before saving.')).toBeTruthy());
     expect(onSubmit).not.toHaveBeenCalled();

@@ -1,10 +1,10 @@
 import type { Browser, Locator, Page } from 'playwright-core';
-import { AppDataSource } from '../../server/db/data-source';
-import { fakeSmtp } from '../../server/modules/mail/fake-smtp';
-import { resetTransport, startOutboxWorker, stopOutboxWorker } from '../../server/modules/mail/mailer';
-import { hashPassword } from '../../server/modules/auth/passwords';
-import { User } from '../../server/modules/users/user.entity';
-import { emailKey } from '../../server/modules/users/user.mapper';
+import { AppDataSource } from '@/server/db/data-source';
+import { fakeSmtp } from '@/server/modules/mail/fake-smtp';
+import { resetTransport, startOutboxWorker, stopOutboxWorker } from '@/server/modules/mail/mailer';
+import { hashPassword } from '@/server/modules/auth/passwords';
+import { User } from '@/server/modules/users/user.entity';
+import { emailKey } from '@/server/modules/users/user.mapper';
 import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 
@@ -28,8 +28,12 @@ beforeAll(async () => {
   startOutboxWorker(200);
   // testUser() stores an unusable hash; this admin signs in through the form, so it needs a real one.
   await AppDataSource.getRepository(User).insert({
-    email: ADMIN.email, emailKey: emailKey(ADMIN.email), displayName: ADMIN.name,
-    passwordHash: await hashPassword(ADMIN.password), role: 'admin', emailVerifiedAt: new Date(),
+    email: ADMIN.email,
+    emailKey: emailKey(ADMIN.email),
+    displayName: ADMIN.name,
+    passwordHash: await hashPassword(ADMIN.password),
+    role: 'admin',
+    emailVerifiedAt: new Date(),
   });
   web = await startWebServer();
   browser = await launchChromium();
@@ -112,7 +116,9 @@ describe('accounts in the browser', () => {
     const signInScreen = page.getByTestId('sign-in-screen');
     await signInScreen.waitFor();
     await signIn(page, { email: TECH.email, password: 'not-the-password' });
-    await expect(signInScreen.getByTestId('sign-in-error').innerText()).resolves.toMatch(/e-mail address or the password is wrong/);
+    await expect(signInScreen.getByTestId('sign-in-error').innerText()).resolves.toMatch(
+      /e-mail address or the password is wrong/,
+    );
     await screenshot(page, 'accounts-sign-in-error-phone');
     await signIn(page, TECH);
     await page.getByTestId('search-screen').waitFor();
@@ -156,7 +162,8 @@ describe('accounts in the browser', () => {
     await waitUntil(async () => (await rows.count()) === 1 && (await rows.first().innerText()).includes(TECH.email));
     const row = rows.first();
     await row.getByRole('radio', { name: 'Role: Editor' }).click();
-    const roleOf = async () => (await AppDataSource.getRepository(User).findOneByOrFail({ emailKey: emailKey(TECH.email) })).role;
+    const roleOf = async () =>
+      (await AppDataSource.getRepository(User).findOneByOrFail({ emailKey: emailKey(TECH.email) })).role;
     await waitUntil(async () => (await roleOf()) === 'editor', 'the role change to be saved');
 
     await row.getByRole('button', { name: 'Show history' }).click();

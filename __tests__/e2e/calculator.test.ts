@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
-import { AppDataSource } from '../../server/db/data-source';
+import { AppDataSource } from '@/server/db/data-source';
 
 useTestDatabase();
 const app = useWebApp();
@@ -13,12 +13,17 @@ async function openPrimaryWindingCard(page: Page) {
   await page.getByTestId('spec-screen').getByTestId('calculator').waitFor();
 }
 
-describe.each([['phone', PHONE], ['desktop', DESKTOP]])('inline calculator at %s size', (name, viewport) => {
+describe.each([
+  ['phone', PHONE],
+  ['desktop', DESKTOP],
+])('inline calculator at %s size', (name, viewport) => {
   it('a reading with lead resistance and meter accuracy gives a verdict, the band picture and the steps', async () => {
     const page = await app.browser.newPage({ viewport });
     await openPrimaryWindingCard(page);
     const specId = Number(new URL(page.url()).pathname.split('/').pop());
-    const [spec] = await AppDataSource.query('SELECT min_value AS min, max_value AS max FROM specs WHERE id = ?', [specId]);
+    const [spec] = await AppDataSource.query('SELECT min_value AS min, max_value AS max FROM specs WHERE id = ?', [
+      specId,
+    ]);
     const calc = page.getByTestId('spec-screen').getByTestId('calculator');
     // A raw reading of the middle of the band plus 0.5 Ω of test leads: inside after the leads are subtracted.
     const middle = (spec.min + spec.max) / 2;
@@ -61,7 +66,11 @@ it('the standalone calculator judges limits typed by hand and remembers the mete
   await page.getByTestId('calculator-screen').getByTestId('standalone-calculator').waitFor();
   const percent = page.getByTestId('standalone-calculator').getByLabel('% of reading', { exact: true });
   // The remembered value arrives from device storage just after the first render.
-  await page.waitForFunction((el) => (el as { value?: string } | null)?.value === '2.5', await percent.elementHandle(), { timeout: 5000 }).catch(() => undefined);
+  await page
+    .waitForFunction((el) => (el as { value?: string } | null)?.value === '2.5', await percent.elementHandle(), {
+      timeout: 5000,
+    })
+    .catch(() => undefined);
   await expect(percent.inputValue()).resolves.toBe('2.5');
   await page.close();
 });

@@ -1,4 +1,4 @@
-import { AppDataSource } from '../../server/db/data-source';
+import { AppDataSource } from '@/server/db/data-source';
 import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 import { e2eAccount, signInThroughApi } from '../helpers/e2e-accounts';
@@ -7,7 +7,9 @@ useTestDatabase();
 const app = useWebApp();
 
 it('a contributor proposes, an editor accepts, the contributor sees the decision and the spec card the new value with its history', async () => {
-  const [spec] = await AppDataSource.query("SELECT id, max_value AS max FROM specs WHERE quantity_kind = 'resistance' AND min_value IS NOT NULL AND max_value IS NOT NULL ORDER BY id DESC LIMIT 1");
+  const [spec] = await AppDataSource.query(
+    "SELECT id, max_value AS max FROM specs WHERE quantity_kind = 'resistance' AND min_value IS NOT NULL AND max_value IS NOT NULL ORDER BY id DESC LIMIT 1",
+  );
   const newMax = Number((spec.max * 1.2).toFixed(2));
   const contributor = await e2eAccount('contributor', 'propose-tech');
   const editor = await e2eAccount('editor', 'review-lead');
@@ -20,12 +22,24 @@ it('a contributor proposes, an editor accepts, the contributor sees the decision
   await form.getByLabel('Maximum', { exact: true }).fill(String(newMax));
   await form.getByLabel('Source title', { exact: true }).fill('Invented Service Bulletin SB-31');
   await form.getByLabel('Page', { exact: true }).fill('2');
-  await form.getByLabel('Why should it change?', { exact: true }).fill('The bulletin widens the upper limit for later coils.');
+  await form
+    .getByLabel('Why should it change?', { exact: true })
+    .fill('The bulletin widens the upper limit for later coils.');
   await screenshot(tech, 'correction-form-phone');
   await form.getByTestId('proposal-submit').click();
   const mine = tech.getByTestId('my-proposals-screen');
-  await mine.getByText(/Waiting for an editor/).first().waitFor();
-  const id = Number((await mine.getByText(/^#\d+ · Waiting/).first().innerText()).match(/#(\d+)/)![1]);
+  await mine
+    .getByText(/Waiting for an editor/)
+    .first()
+    .waitFor();
+  const id = Number(
+    (
+      await mine
+        .getByText(/^#\d+ · Waiting/)
+        .first()
+        .innerText()
+    ).match(/#(\d+)/)![1],
+  );
   await screenshot(tech, 'my-proposals-pending-phone');
 
   const lead = await (await app.browser.newContext({ viewport: DESKTOP })).newPage();

@@ -45,6 +45,9 @@ it('the editor screens show a sign-in prompt when signed out and "Editors only" 
   await signInThroughApi(page, app.url, tech.email);
   expect(await page.getByTestId('home-import').count()).toBe(0);
   await page.goto(`${app.url}/editor/specs/new`);
-  await page.getByTestId('new-spec-screen').getByText(/^Editors only/).waitFor();
+  await page
+    .getByTestId('new-spec-screen')
+    .getByText(/^Editors only/)
+    .waitFor();
   expect(await page.getByTestId('spec-create-form').count()).toBe(0);
 });

@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import type { Page } from 'playwright-core';
-import { AppDataSource } from '../../server/db/data-source';
+import { AppDataSource } from '@/server/db/data-source';
 import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 import { csvRowOf, demoSpec, signedInEditor, until } from '../helpers/curation-e2e';
@@ -19,7 +19,13 @@ it('an editor uploads a CSV, reads the dry run (updated, created, rejected with 
   const file = toCsv([
     { ...(await csvRowOf(spec.id)), max: String(newMax) },
     validRow(make),
-    validRow(make, { component: 'pickup coil', parameter: 'pickup coil resistance', min: '500', nominal: '', max: '300' }),
+    validRow(make, {
+      component: 'pickup coil',
+      parameter: 'pickup coil resistance',
+      min: '500',
+      nominal: '',
+      max: '300',
+    }),
     validRow(make, { component: 'stator', parameter: 'stator winding resistance', unit: 'furlong' }),
   ]);
 
@@ -48,7 +54,10 @@ it('an editor uploads a CSV, reads the dry run (updated, created, rejected with 
 
   await screen.getByTestId('commit-button').click();
   await screen.getByTestId('commit-done').waitFor();
-  await until(page.getByTestId('commit-done'), new RegExp(`1 spec created and 1 spec updated[\\s\\S]*batch #${batchId}`));
+  await until(
+    page.getByTestId('commit-done'),
+    new RegExp(`1 spec created and 1 spec updated[\\s\\S]*batch #${batchId}`),
+  );
   expect(await screen.getByTestId('commit-button').count()).toBe(0);
   await screenshot(page, 'curation-import-committed-desktop');
 
@@ -60,7 +69,9 @@ it('an editor uploads a CSV, reads the dry run (updated, created, rejected with 
   await screenshot(page, 'curation-spec-card-desktop');
 
   // A batch commits once: the API refuses a second commit, whoever asks.
-  const [{ n }] = await AppDataSource.query('SELECT COUNT(*) AS n FROM spec_revisions WHERE origin_ref = ?', [`batch #${batchId}`]);
+  const [{ n }] = await AppDataSource.query('SELECT COUNT(*) AS n FROM spec_revisions WHERE origin_ref = ?', [
+    `batch #${batchId}`,
+  ]);
   expect(Number(n)).toBe(2);
 
   // The library exports in the same format, with the committed value, through a download that carries the token.
@@ -96,7 +107,10 @@ it('an editor edits a spec through the form; the card shows the new value and th
   const card = page.getByTestId('spec-screen');
   await until(card.getByTestId('spec-display'), String(newMax));
   const latest = card.getByTestId(`revision-${spec.version + 1}`);
-  await until(latest, new RegExp(`Edited[\\s\\S]*form-lead \\(editor\\)[\\s\\S]*SB-7[\\s\\S]*Maximum\\s*${spec.max} → ${newMax}`));
+  await until(
+    latest,
+    new RegExp(`Edited[\\s\\S]*form-lead \\(editor\\)[\\s\\S]*SB-7[\\s\\S]*Maximum\\s*${spec.max} → ${newMax}`),
+  );
 });
 
 it('two editors save the same spec: the second sees both values side by side, re-applies on the current version, and can revert', async () => {
@@ -138,6 +152,9 @@ it('two editors save the same spec: the second sees both values side by side, re
   await until(card.getByTestId(`revert-form-${spec.version + 1}`), new RegExp(`Maximum\\s*${mine} → ${theirs}`));
   await screenshot(second, 'curation-revert-desktop');
   await card.getByTestId('revert-confirm').click();
-  await until(card.getByTestId(`revision-${spec.version + 3}`), new RegExp(`Reverted \\(to version ${spec.version + 1}\\)`));
+  await until(
+    card.getByTestId(`revision-${spec.version + 3}`),
+    new RegExp(`Reverted \\(to version ${spec.version + 1}\\)`),
+  );
   await until(card.getByTestId('spec-display'), String(theirs));
 });

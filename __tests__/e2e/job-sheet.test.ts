@@ -1,13 +1,13 @@
 import fs from 'node:fs';
-import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
+import type { BrowserContext, Locator, Page } from 'playwright-core';
 import { DESKTOP, PHONE, SCREENSHOTS, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
-import { AppDataSource } from '../../server/db/data-source';
-import { signAccessToken } from '../../server/auth/tokens';
-import { hashPassword } from '../../server/modules/auth/passwords';
-import { User } from '../../server/modules/users/user.entity';
-import { emailKey } from '../../server/modules/users/user.mapper';
-import type { JobDetailDto } from '../../lib/contracts/jobs';
+import { AppDataSource } from '@/server/db/data-source';
+import { signAccessToken } from '@/server/auth/tokens';
+import { hashPassword } from '@/server/modules/auth/passwords';
+import { User } from '@/server/modules/users/user.entity';
+import { emailKey } from '@/server/modules/users/user.mapper';
+import type { JobDetailDto } from '@/lib/contracts/jobs';
 
 useTestDatabase();
 const app = useWebApp();
@@ -19,7 +19,14 @@ async function technician(): Promise<User> {
   const repo = AppDataSource.getRepository(User);
   const found = await repo.findOneBy({ emailKey: emailKey(EMAIL) });
   if (found) return found;
-  return repo.save({ email: EMAIL, emailKey: emailKey(EMAIL), displayName: 'Dana Wrench', passwordHash: await hashPassword(PASSWORD), role: 'contributor', emailVerifiedAt: new Date() });
+  return repo.save({
+    email: EMAIL,
+    emailKey: emailKey(EMAIL),
+    displayName: 'Dana Wrench',
+    passwordHash: await hashPassword(PASSWORD),
+    role: 'contributor',
+    emailVerifiedAt: new Date(),
+  });
 }
 
 type SpecRow = { id: number; componentId: number; modelId: number; parameter: string; min: number; max: number };
@@ -28,7 +35,9 @@ async function kestrelSpec(component: string, parameter: string): Promise<SpecRo
   const [row] = await AppDataSource.query(
     `SELECT s.id, s.component_id AS componentId, c.model_id AS modelId, s.parameter, s.min_value AS min, s.max_value AS max
        FROM specs s JOIN components c ON c.id = s.component_id JOIN vehicle_models vm ON vm.id = c.model_id JOIN makes mk ON mk.id = vm.make_id
-      WHERE mk.name = 'Kestrel Moto' AND vm.name = '900 Trail' AND vm.year_from = 2016 AND c.name = ? AND s.parameter = ?`, [component, parameter]);
+      WHERE mk.name = 'Kestrel Moto' AND vm.name = '900 Trail' AND vm.year_from = 2016 AND c.name = ? AND s.parameter = ?`,
+    [component, parameter],
+  );
   expect(row).toBeDefined();
   return row as SpecRow;
 }
@@ -90,7 +99,10 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
 
   // 1. Pass, mid-band: from the model sheet to the spec card, picking the job from the list.
   await page.getByTestId('job-open-model').click();
-  await page.getByTestId(`component-${primary.componentId}`).getByRole('link', { name: /^primary winding resistance:/i }).click();
+  await page
+    .getByTestId(`component-${primary.componentId}`)
+    .getByRole('link', { name: /^primary winding resistance:/i })
+    .click();
   await page.getByTestId('spec-screen').getByTestId('calculator').waitFor();
   const calc = page.getByTestId('spec-screen').getByTestId('calculator');
   await calc.getByLabel('Meter reading', { exact: true }).fill(String((primary.min + primary.max) / 2));
@@ -101,7 +113,10 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await calc.getByTestId('add-to-job').screenshot({ path: `${SCREENSHOTS}/job-add-to-job-phone.png` });
 
   // 2. Marginal, exactly on the upper limit without meter accuracy; 3. fail, four times the maximum.
-  for (const [spec, value, word] of [[pickup, pickup.max, 'MARGINAL'], [stator, stator.max * 4, 'FAIL']] as const) {
+  for (const [spec, value, word] of [
+    [pickup, pickup.max, 'MARGINAL'],
+    [stator, stator.max * 4, 'FAIL'],
+  ] as const) {
     await page.goto(`${app.url}/specs/${spec.id}?job=${jobId}`);
     await page.getByTestId('spec-screen').getByTestId('calculator').waitFor();
     const outcome = await takeReading(page, value, word);
@@ -122,7 +137,9 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await expect(queued.innerText()).resolves.toBe('Queued — will send when online');
   await activate(page.getByTestId('spec-screen').getByTestId('add-to-job-open'));
   await sheet.getByTestId('queue-waiting').waitFor();
-  await expect(sheet.getByTestId('queue-waiting').innerText()).resolves.toMatch(/1 reading waiting to be sent — it will go when the connection returns/);
+  await expect(sheet.getByTestId('queue-waiting').innerText()).resolves.toMatch(
+    /1 reading waiting to be sent — it will go when the connection returns/,
+  );
   await expect(sheet.getByTestId('pending-reading').innerText()).resolves.toMatch(/Waiting to be sent/);
   await expect(sheet.locator('[data-testid^="job-reading-"]').count()).resolves.toBe(3);
   await toTop(page);
@@ -135,8 +152,12 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await expect(sheet.locator('[data-testid^="job-reading-"]').count()).resolves.toBe(4);
   await expect(sheet.getByTestId('queue-waiting').count()).resolves.toBe(0);
   await expect(sheet.getByTestId('verdict-counts').innerText()).resolves.toMatch(/2 pass · 1 marginal · 0 fail/);
-  await expect(sheet.getByTestId(`job-reading-${failed.id}`).getByTestId('reading-retaken').innerText()).resolves.toBe('re-taken');
-  const res = await fetch(`${app.url}/api/jobs/${jobId}`, { headers: { Authorization: `Bearer ${signAccessToken(user)}` } });
+  await expect(sheet.getByTestId(`job-reading-${failed.id}`).getByTestId('reading-retaken').innerText()).resolves.toBe(
+    're-taken',
+  );
+  const res = await fetch(`${app.url}/api/jobs/${jobId}`, {
+    headers: { Authorization: `Bearer ${signAccessToken(user)}` },
+  });
   const job = (await res.json()) as JobDetailDto;
   expect(job.readings.map((r) => r.verdict)).toEqual(['pass', 'marginal', 'fail', 'pass']);
   expect(new Set(job.readings.map((r) => r.idempotencyKey)).size).toBe(4);
@@ -147,7 +168,10 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   // The CSV comes down with the session's token.
   const [download] = await Promise.all([page.waitForEvent('download'), sheet.getByTestId('job-csv').click()]);
   expect(download.suggestedFilename()).toBe(`job-${jobId}-readings.csv`);
-  const csv = fs.readFileSync((await download.path())!, 'utf8').trim().split(/\r\n/);
+  const csv = fs
+    .readFileSync((await download.path())!, 'utf8')
+    .trim()
+    .split(/\r\n/);
   expect(csv).toHaveLength(5);
 
   // The printable report: header, notes, counts, every reading with its source and working, the liability note.
@@ -162,7 +186,9 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   expect(text).toMatch(/Kestrel Moto Service Manual 900 series/);
   expect(text).toMatch(/do not replace the maker’s service procedures and\s+service manual, nor local codes/);
   await expect(report.locator('[data-testid^="report-reading-"]').count()).resolves.toBe(3);
-  await expect(report.getByTestId('report-superseded').innerText()).resolves.toMatch(/re-taken \(replaced by reading #\d+\)/);
+  await expect(report.getByTestId('report-superseded').innerText()).resolves.toMatch(
+    /re-taken \(replaced by reading #\d+\)/,
+  );
   await page.evaluate('window.print = () => { window.__printed = true; }');
   await report.getByTestId('report-print').click();
   await expect(page.evaluate('window.__printed')).resolves.toBe(true);
@@ -201,12 +227,16 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
   await hand.getByLabel('Meter reading', { exact: true }).fill('0.75');
   await expect(hand.getByTestId('verdict-word').innerText()).resolves.toBe('PASS');
   await hand.getByTestId('add-to-job-button').click();
-  await expect(hand.getByTestId('add-to-job-label').locator('..').innerText()).resolves.toMatch(/Say what you measured/);
+  await expect(hand.getByTestId('add-to-job-label').locator('..').innerText()).resolves.toMatch(
+    /Say what you measured/,
+  );
   await hand.getByLabel('What did you measure?', { exact: true }).fill('Plug gap, rear cylinder (new plug)');
   await hand.getByTestId('add-to-job-button').click();
   await expect(hand.getByTestId('add-to-job-outcome').innerText()).resolves.toBe(`Added to job #${jobId}`);
   await hand.getByTestId('add-to-job-open').click();
-  await expect(page.getByTestId('job-sheet').locator('[data-testid="reading-group"]').last().innerText()).resolves.toMatch(/^Other checks[\s\S]*Plug gap, rear cylinder \(new plug\)/);
+  await expect(
+    page.getByTestId('job-sheet').locator('[data-testid="reading-group"]').last().innerText(),
+  ).resolves.toMatch(/^Other checks[\s\S]*Plug gap, rear cylinder \(new plug\)/);
   await context.close();
 });
 

@@ -1,4 +1,4 @@
-import type { SpecDetailDto } from '../../lib/contracts/library';
+import type { SpecDetailDto } from '@/lib/contracts/library';
 import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
 

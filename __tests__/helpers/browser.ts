@@ -7,7 +7,7 @@ import path from 'node:path';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { chromium, type Browser, type Page } from 'playwright-core';
-import { createApp } from '../../server/app';
+import { createApp } from '@/server/app';
 
 export const ROOT = path.resolve(__dirname, '../..');
 export const SCREENSHOTS = path.join(ROOT, '__tests__', 'screenshots');
@@ -16,7 +16,8 @@ export const DESKTOP = { width: 1280, height: 800 };
 
 export async function startWebServer(): Promise<{ url: string; close: () => Promise<void> }> {
   const webDist = process.env.E2E_WEB_DIST ?? path.join(ROOT, 'dist');
-  if (!fs.existsSync(path.join(webDist, 'index.html'))) throw new Error('No web build in dist/: run `npm test` (it builds) or `npm run build:web`.');
+  if (!fs.existsSync(path.join(webDist, 'index.html')))
+    throw new Error('No web build in dist/: run `npm test` (it builds) or `npm run build:web`.');
   const server: Server = createApp({ webDist }).listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   const { port } = server.address() as AddressInfo;
@@ -26,8 +27,16 @@ export async function startWebServer(): Promise<{ url: string; close: () => Prom
 export function launchChromium(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-      '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--disable-dev-shm-usage',
+    ],
   });
 }
 
@@ -39,8 +48,13 @@ export async function screenshot(page: Page, name: string) {
   fs.mkdirSync(SCREENSHOTS, { recursive: true });
   const viewport = page.viewportSize()!;
   // Runs in the browser, where `document` exists (the server tsconfig has no DOM types).
-  const height: number = await page.evaluate('Math.max(...Array.from(document.querySelectorAll("*")).map((el) => el.scrollHeight))');
-  await page.setViewportSize({ width: viewport.width, height: Math.min(Math.max(height + 120, viewport.height), 6000) });
+  const height: number = await page.evaluate(
+    'Math.max(...Array.from(document.querySelectorAll("*")).map((el) => el.scrollHeight))',
+  );
+  await page.setViewportSize({
+    width: viewport.width,
+    height: Math.min(Math.max(height + 120, viewport.height), 6000),
+  });
   await page.screenshot({ path: path.join(SCREENSHOTS, `${name}.png`) });
   await page.setViewportSize(viewport);
 }
@@ -58,7 +72,11 @@ export function useWebApp(): { readonly url: string; readonly browser: Browser }
     await web?.close();
   });
   return {
-    get url() { return web!.url; },
-    get browser() { return browser!; },
+    get url() {
+      return web!.url;
+    },
+    get browser() {
+      return browser!;
+    },
   };
 }

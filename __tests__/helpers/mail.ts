@@ -1,6 +1,6 @@
 /** The local fake SMTP server for API tests, and reading links out of the messages it caught. */
-import { fakeSmtp } from '../../server/modules/mail/fake-smtp';
-import { deliverDue, resetTransport } from '../../server/modules/mail/mailer';
+import { fakeSmtp } from '@/server/modules/mail/fake-smtp';
+import { deliverDue, resetTransport } from '@/server/modules/mail/mailer';
 
 export function useFakeMail() {
   beforeAll(async () => {

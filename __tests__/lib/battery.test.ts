@@ -1,4 +1,4 @@
-import { batteryStateOfCharge, VerdictInputError } from '../../lib/verdict';
+import { batteryStateOfCharge, VerdictInputError } from '@/lib/verdict';
 
 describe('batteryStateOfCharge', () => {
   // Source: Battery Council International table for flooded batteries at 80 °F (26.7 °C),
@@ -32,13 +32,18 @@ describe('batteryStateOfCharge', () => {
     expect(soc.percent).toBeCloseTo(expected, 10);
     expect(soc.percent).toBeCloseTo(87.5, 10);
     expect(soc.interpolated).toBe(true);
-    expect(soc.note).toMatch(/between the 12\.45 V \(75 %\) and 12\.65 V \(100 %\) rows: interpolated linearly to 87\.5 %/);
+    expect(soc.note).toMatch(
+      /between the 12\.45 V \(75 %\) and 12\.65 V \(100 %\) rows: interpolated linearly to 87\.5 %/,
+    );
   });
 
   // [computed] between the quoted AGM rows 12.00 V (25 %) and 12.30 V (50 %).
   it('AGM: 12.15 V is interpolated to 37.5 %', () => {
     const expected = 25 + ((12.15 - 12.0) / (12.3 - 12.0)) * (50 - 25);
-    expect(batteryStateOfCharge(12.15, 'agm')).toMatchObject({ percent: expect.closeTo(expected, 10), interpolated: true });
+    expect(batteryStateOfCharge(12.15, 'agm')).toMatchObject({
+      percent: expect.closeTo(expected, 10),
+      interpolated: true,
+    });
   });
 
   it.each([

@@ -1,4 +1,4 @@
-import { cautionsFor } from '../../lib/safety/cautions';
+import { cautionsFor } from '@/lib/safety/cautions';
 
 describe('cautionsFor', () => {
   it.each([

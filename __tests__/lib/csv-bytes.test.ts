@@ -1,13 +1,17 @@
-import { SPEC_CSV_COLUMNS, checkCsvBytes, decodeCsv, validateSpecCsv } from '../../lib/csv';
+import { SPEC_CSV_COLUMNS, checkCsvBytes, decodeCsv, validateSpecCsv } from '@/lib/csv';
 
 const utf8 = (s: string) => new TextEncoder().encode(s);
-const ROW = 'Kestrel Moto,900 Trail,2016,2021,898 cc,ignition coil,primary winding resistance,2.9,3.2,3.5,Ω,20,copper,,,Kestrel Moto Service Manual,Rev. B,7-12,,';
+const ROW =
+  'Kestrel Moto,900 Trail,2016,2021,898 cc,ignition coil,primary winding resistance,2.9,3.2,3.5,Ω,20,copper,,,Kestrel Moto Service Manual,Rev. B,7-12,,';
 const CSV = `${SPEC_CSV_COLUMNS.join(',')}\r\n${ROW}\r\n`;
 
 function utf16le(s: string, bom: boolean): Uint8Array {
   const out = new Uint8Array(s.length * 2 + (bom ? 2 : 0));
   let i = 0;
-  if (bom) (out[i++] = 0xff), (out[i++] = 0xfe);
+  if (bom) {
+    out[i++] = 0xff;
+    out[i++] = 0xfe;
+  }
   for (const ch of s) {
     const code = ch.charCodeAt(0);
     out[i++] = code & 0xff;
@@ -30,7 +34,12 @@ describe('lib/csv checkCsvBytes', () => {
     ['UTF-16 LE without a BOM', utf16le(CSV, false), 1, /UTF-16/],
     ['an .xlsx workbook', new Uint8Array([0x50, 0x4b, 0x03, 0x04, 0x14, 0x00, 0x06, 0x00]), 1, /workbook/],
     ['binary data with a NUL byte on line 2', utf8(`${SPEC_CSV_COLUMNS.join(',')}\nab\u0000cd\n`), 2, /binary data/],
-    ['Windows-1252 (an é as 0xE9) on line 2', new Uint8Array([...utf8('make,model\n'), 0x43, 0x61, 0x66, 0xe9, 0x0a]), 2, /not valid UTF-8/],
+    [
+      'Windows-1252 (an é as 0xE9) on line 2',
+      new Uint8Array([...utf8('make,model\n'), 0x43, 0x61, 0x66, 0xe9, 0x0a]),
+      2,
+      /not valid UTF-8/,
+    ],
   ])('when the file is %s, reports a file-level problem on line %d', (_name, bytes, line, reason) => {
     expect(checkCsvBytes(bytes)).toEqual({ line, column: null, reason: expect.stringMatching(reason) });
   });

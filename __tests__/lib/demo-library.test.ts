@@ -1,6 +1,6 @@
 import { readFileSync } from 'fs';
 import { join } from 'path';
-import { checkCsvBytes, decodeCsv, validateSpecCsv } from '../../lib/csv';
+import { checkCsvBytes, decodeCsv, validateSpecCsv } from '@/lib/csv';
 
 const read = (name: string) => readFileSync(join(__dirname, '../../data', name));
 const demoBytes = read('demo-library.csv');
@@ -35,7 +35,9 @@ describe('data/demo-library.csv', () => {
   });
 
   it('has a Kestrel Moto 900 Trail primary winding spec for the search example', () => {
-    expect(rows).toContainEqual(expect.objectContaining({ make: 'Kestrel Moto', model: '900 Trail', parameter: 'Primary winding resistance' }));
+    expect(rows).toContainEqual(
+      expect.objectContaining({ make: 'Kestrel Moto', model: '900 Trail', parameter: 'Primary winding resistance' }),
+    );
   });
 
   it('exercises CSV quoting with cells that contain commas and double quotes', () => {
@@ -43,23 +45,36 @@ describe('data/demo-library.csv', () => {
     expect(demoText).toMatch(/""/);
   });
 
-  it.each(['electrode gap', 'rest voltage', 'charging voltage', 'fuse rating', 'pickup coil resistance', 'stator winding resistance', 'plug cap resistance', 'secondary winding resistance with plug cap'])(
-    'covers the parameter %s',
-    (parameter) => {
-      expect(rows.some((r) => r.parameter.toLowerCase() === parameter)).toBe(true);
-    },
-  );
+  it.each([
+    'electrode gap',
+    'rest voltage',
+    'charging voltage',
+    'fuse rating',
+    'pickup coil resistance',
+    'stator winding resistance',
+    'plug cap resistance',
+    'secondary winding resistance with plug cap',
+  ])('covers the parameter %s', (parameter) => {
+    expect(rows.some((r) => r.parameter.toLowerCase() === parameter)).toBe(true);
+  });
 
   // The demo data is invented: it must not repeat the check values that the engine's tests take from published sources.
-  it.each<[number, number, string]>([[3.57, 4.83, 'Ω'], [10.7, 14.5, 'kΩ'], [189, 231, 'Ω'], [0.7, 0.8, 'mm']])(
-    'does not use the published check limits %d–%d %s',
-    (min, max, unit) => {
-      expect(rows.filter((r) => r.unit === unit && r.min === min && r.max === max)).toEqual([]);
-    },
-  );
+  it.each<[number, number, string]>([
+    [3.57, 4.83, 'Ω'],
+    [10.7, 14.5, 'kΩ'],
+    [189, 231, 'Ω'],
+    [0.7, 0.8, 'mm'],
+  ])('does not use the published check limits %d–%d %s', (min, max, unit) => {
+    expect(rows.filter((r) => r.unit === unit && r.min === min && r.max === max)).toEqual([]);
+  });
 
   it('uses only the invented makes of the demo scenario (a new make must be added here on purpose)', () => {
-    expect([...new Set(rows.map((r) => r.make))].sort()).toEqual(['Corvane', 'Kestrel Moto', 'Marrowdown Engines', 'Quillback Powersports']);
+    expect([...new Set(rows.map((r) => r.make))].sort()).toEqual([
+      'Corvane',
+      'Kestrel Moto',
+      'Marrowdown Engines',
+      'Quillback Powersports',
+    ]);
   });
 });
 

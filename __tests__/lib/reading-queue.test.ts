@@ -1,31 +1,66 @@
-import { ApiError } from '../../lib/api/client';
-import { IDEMPOTENCY_KEY, ReadingBody, type ReadingDto } from '../../lib/contracts/jobs';
-import { ReadingQueueRunner, type QueueStorage } from '../../lib/offline/queue-runner';
-import { toReadingBody } from '../../lib/offline/reading-body';
+import { ApiError } from '@/lib/api/client';
+import { IDEMPOTENCY_KEY, ReadingBody, type ReadingDto } from '@/lib/contracts/jobs';
+import { ReadingQueueRunner, type QueueStorage } from '@/lib/offline/queue-runner';
+import { toReadingBody } from '@/lib/offline/reading-body';
 import {
-  EMPTY_QUEUE, STORAGE_KEY, classifyFailure, dismissRejected, enqueue, newIdempotencyKey, parseQueue, pendingFor,
-  rejectPending, waitingMessage, type QueuedReading,
-} from '../../lib/offline/reading-queue';
-import type { VerdictInput } from '../../lib/verdict';
+  EMPTY_QUEUE,
+  STORAGE_KEY,
+  classifyFailure,
+  dismissRejected,
+  enqueue,
+  newIdempotencyKey,
+  parseQueue,
+  pendingFor,
+  rejectPending,
+  waitingMessage,
+  type QueuedReading,
+} from '@/lib/offline/reading-queue';
+import type { VerdictInput } from '@/lib/verdict';
 
 const INPUT: VerdictInput = {
   spec: { min: 2.4, nominal: 2.8, max: 3.2, unit: 'Ω', refTempC: 20, material: 'copper' },
   reading: { value: 3.1, unit: 'Ω' },
   leadResistance: { value: 0.3, unit: 'Ω' },
 };
-const preview = { label: 'primary winding resistance', componentName: 'ignition coil', value: 3.1, unit: 'Ω', verdict: 'pass' as const };
+const preview = {
+  label: 'primary winding resistance',
+  componentName: 'ignition coil',
+  value: 3.1,
+  unit: 'Ω',
+  verdict: 'pass' as const,
+};
 
 function item(key: string, patch: Partial<QueuedReading> = {}): QueuedReading {
-  return { key, userId: 1, jobId: 7, body: toReadingBody(INPUT, { specId: 3 }), preview, queuedAt: '2026-01-01T10:00:00.000Z', attempts: 0, lastError: null, ...patch };
+  return {
+    key,
+    userId: 1,
+    jobId: 7,
+    body: toReadingBody(INPUT, { specId: 3 }),
+    preview,
+    queuedAt: '2026-01-01T10:00:00.000Z',
+    attempts: 0,
+    lastError: null,
+    ...patch,
+  };
 }
 
 describe('newIdempotencyKey', () => {
   it('uses crypto.randomUUID when the platform has it', () => {
-    expect(newIdempotencyKey({ randomUUID: () => '0b8e7c1e-2a4f-4f7e-9a0c-5d9b1e2f3a4b' })).toBe('0b8e7c1e-2a4f-4f7e-9a0c-5d9b1e2f3a4b');
+    expect(newIdempotencyKey({ randomUUID: () => '0b8e7c1e-2a4f-4f7e-9a0c-5d9b1e2f3a4b' })).toBe(
+      '0b8e7c1e-2a4f-4f7e-9a0c-5d9b1e2f3a4b',
+    );
   });
 
   it.each([
-    ['getRandomValues only', { getRandomValues: <T,>(a: T) => { (a as unknown as Uint8Array).fill(200); return a; } }],
+    [
+      'getRandomValues only',
+      {
+        getRandomValues: <T>(a: T) => {
+          (a as unknown as Uint8Array).fill(200);
+          return a;
+        },
+      },
+    ],
     ['no crypto at all', {}],
   ])('with %s, makes a key the API accepts', (_name, source) => {
     const key = newIdempotencyKey(source as Parameters<typeof newIdempotencyKey>[0]);
@@ -72,7 +107,10 @@ describe('queue state', () => {
   });
 
   it('pendingFor keeps to one account and one job', () => {
-    const s = [item('k-1-aaaaaa'), item('k-2-aaaaaa', { jobId: 8 }), item('k-3-aaaaaa', { userId: 2 })].reduce(enqueue, EMPTY_QUEUE);
+    const s = [item('k-1-aaaaaa'), item('k-2-aaaaaa', { jobId: 8 }), item('k-3-aaaaaa', { userId: 2 })].reduce(
+      enqueue,
+      EMPTY_QUEUE,
+    );
     expect(pendingFor(s, 1, 7).map((p) => p.key)).toEqual(['k-1-aaaaaa']);
   });
 
@@ -80,8 +118,11 @@ describe('queue state', () => {
     expect(parseQueue(text)).toEqual(EMPTY_QUEUE);
   });
 
-  it.each([[0, ''], [1, '1 reading waiting to be sent — it will go when the connection returns'],
-    [2, '2 readings waiting to be sent — they will go when the connection returns']])('waitingMessage(%d)', (n, text) => {
+  it.each([
+    [0, ''],
+    [1, '1 reading waiting to be sent — it will go when the connection returns'],
+    [2, '2 readings waiting to be sent — they will go when the connection returns'],
+  ])('waitingMessage(%d)', (n, text) => {
     expect(waitingMessage(n)).toBe(text);
   });
 });
@@ -89,15 +130,30 @@ describe('queue state', () => {
 describe('toReadingBody', () => {
   it('a library spec goes by id, with the corrections as typed', () => {
     const body = toReadingBody(INPUT, { specId: 3 }, { retakeOf: 12 });
-    expect(body).toEqual({ specId: 3, reading: { value: 3.1, unit: 'Ω' }, leadResistance: { value: 0.3, unit: 'Ω' }, retakeOf: 12 });
+    expect(body).toEqual({
+      specId: 3,
+      reading: { value: 3.1, unit: 'Ω' },
+      leadResistance: { value: 0.3, unit: 'Ω' },
+      retakeOf: 12,
+    });
     expect(ReadingBody.safeParse(body).success).toBe(true);
   });
 
   it('limits typed by hand go with the reading, with the label and without empty limits', () => {
-    const body = toReadingBody({ spec: { min: 0.7, max: 0.8, nominal: null, unit: 'mm', material: 'none' }, reading: { value: 0.03, unit: 'in' },
-      meter: { percent: 1, counts: 2, countValue: 0.01, unit: 'mm' } }, { label: ' Plug gap, cylinder 1 ' });
-    expect(body).toEqual({ spec: { min: 0.7, max: 0.8, unit: 'mm', material: 'none' }, label: 'Plug gap, cylinder 1',
-      reading: { value: 0.03, unit: 'in' }, meter: { percent: 1, counts: 2, countValue: 0.01, unit: 'mm' } });
+    const body = toReadingBody(
+      {
+        spec: { min: 0.7, max: 0.8, nominal: null, unit: 'mm', material: 'none' },
+        reading: { value: 0.03, unit: 'in' },
+        meter: { percent: 1, counts: 2, countValue: 0.01, unit: 'mm' },
+      },
+      { label: ' Plug gap, cylinder 1 ' },
+    );
+    expect(body).toEqual({
+      spec: { min: 0.7, max: 0.8, unit: 'mm', material: 'none' },
+      label: 'Plug gap, cylinder 1',
+      reading: { value: 0.03, unit: 'in' },
+      meter: { percent: 1, counts: 2, countValue: 0.01, unit: 'mm' },
+    });
     expect(ReadingBody.safeParse(body).success).toBe(true);
   });
 });
@@ -105,10 +161,15 @@ describe('toReadingBody', () => {
 describe('ReadingQueueRunner', () => {
   const memory = () => {
     const data = new Map<string, string>();
-    const storage: QueueStorage = { getItem: async (k) => data.get(k) ?? null, setItem: async (k, v) => { data.set(k, v); } };
+    const storage: QueueStorage = {
+      getItem: async (k) => data.get(k) ?? null,
+      setItem: async (k, v) => {
+        data.set(k, v);
+      },
+    };
     return { data, storage };
   };
-  const stored = (r: ReadingDto['id']) => ({ id: r } as ReadingDto);
+  const stored = (r: ReadingDto['id']) => ({ id: r }) as ReadingDto;
   let n = 0;
   const options = { newKey: () => `test-key-${++n}`, now: () => new Date('2026-02-03T04:05:06.000Z') };
   const reading = (jobId = 7, userId = 1) => ({ userId, jobId, body: toReadingBody(INPUT, { specId: 3 }), preview });
@@ -120,7 +181,12 @@ describe('ReadingQueueRunner', () => {
     const sent = jest.fn();
     runner.onSent(sent);
     await expect(runner.add(reading())).resolves.toEqual({ status: 'sent', reading: { id: 41 } });
-    expect(send.mock.calls[0]).toEqual([expect.objectContaining({ key: expect.stringMatching(IDEMPOTENCY_KEY), body: expect.objectContaining({ takenAt: '2026-02-03T04:05:06.000Z' }) })]);
+    expect(send.mock.calls[0]).toEqual([
+      expect.objectContaining({
+        key: expect.stringMatching(IDEMPOTENCY_KEY),
+        body: expect.objectContaining({ takenAt: '2026-02-03T04:05:06.000Z' }),
+      }),
+    ]);
     expect(sent).toHaveBeenCalledTimes(1);
     expect(parseQueue(data.get(STORAGE_KEY)!).pending).toHaveLength(0);
   });
@@ -140,7 +206,9 @@ describe('ReadingQueueRunner', () => {
 
   it('after a restart, a new runner on the same storage sends what was left', async () => {
     const { storage } = memory();
-    await new ReadingQueueRunner(storage, jest.fn().mockRejectedValue(new TypeError('offline')), options).add(reading());
+    await new ReadingQueueRunner(storage, jest.fn().mockRejectedValue(new TypeError('offline')), options).add(
+      reading(),
+    );
     const send = jest.fn(async () => stored(43));
     const later = new ReadingQueueRunner(storage, send, options);
     await later.flush(1);
@@ -150,7 +218,11 @@ describe('ReadingQueueRunner', () => {
 
   it('a 4xx the reading cannot recover from: out of the queue, kept as rejected with the message', async () => {
     const { storage } = memory();
-    const runner = new ReadingQueueRunner(storage, jest.fn().mockRejectedValue(new ApiError(409, 'conflict', 'This job is closed.')), options);
+    const runner = new ReadingQueueRunner(
+      storage,
+      jest.fn().mockRejectedValue(new ApiError(409, 'conflict', 'This job is closed.')),
+      options,
+    );
     await expect(runner.add(reading())).resolves.toEqual({ status: 'rejected', message: 'This job is closed.' });
     expect(runner.getSnapshot()).toMatchObject({ pending: [], rejected: [{ status: 409 }] });
   });
@@ -173,7 +245,9 @@ describe('ReadingQueueRunner', () => {
 
   it('two flushes at once send each reading once', async () => {
     const { storage } = memory();
-    await new ReadingQueueRunner(storage, jest.fn().mockRejectedValue(new TypeError('offline')), options).add(reading());
+    await new ReadingQueueRunner(storage, jest.fn().mockRejectedValue(new TypeError('offline')), options).add(
+      reading(),
+    );
     const send = jest.fn(async () => stored(44));
     const runner = new ReadingQueueRunner(storage, send, options);
     await Promise.all([runner.flush(1), runner.flush(1), runner.flush(1)]);

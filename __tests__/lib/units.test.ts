@@ -10,7 +10,7 @@ import {
   unitKind,
   unitsOfKind,
   type CanonicalUnit,
-} from '../../lib/units';
+} from '@/lib/units';
 
 // Source: NIST SP 811 (2008), Appendix B: 1 in = 0.0254 m exactly = 25.4 mm (exact by the 1959 definition).
 const MM_PER_INCH = 25.4;
@@ -43,9 +43,12 @@ describe('parseUnit', () => {
     expect(parseUnit(text)).toEqual({ unit, kind });
   });
 
-  it.each(['', 'mohm', 'mΩ', 'MV', 'v', 'Mm', 'ft', 'ohmz', '12 V'])('when given %j (unknown or wrong prefix case), returns null', (text) => {
-    expect(parseUnit(text)).toBeNull();
-  });
+  it.each(['', 'mohm', 'mΩ', 'MV', 'v', 'Mm', 'ft', 'ohmz', '12 V'])(
+    'when given %j (unknown or wrong prefix case), returns null',
+    (text) => {
+      expect(parseUnit(text)).toBeNull();
+    },
+  );
 });
 
 describe('unitKind and unitsOfKind', () => {
@@ -108,7 +111,11 @@ describe('convert', () => {
   it('round-trips any value between any two units of one kind within 1e-12 relative', () => {
     // Readings from 1e-12 to 1e9 in size (subnormal doubles are not readings), either sign, or zero.
     const magnitude = fc.double({ min: 1e-12, max: 1e9, noNaN: true });
-    const reading = fc.oneof(fc.constant(0), magnitude, magnitude.map((v) => -v));
+    const reading = fc.oneof(
+      fc.constant(0),
+      magnitude,
+      magnitude.map((v) => -v),
+    );
     const pair = fc
       .constantFrom('resistance', 'voltage', 'current', 'length' as const)
       .chain((kind) => fc.tuple(fc.constantFrom(...unitsOfKind(kind)), fc.constantFrom(...unitsOfKind(kind))));

@@ -1,4 +1,4 @@
-import { decideWithoutUncertainty, decideWithUncertainty, nearBands } from '../../lib/verdict';
+import { decideWithoutUncertainty, decideWithUncertainty, nearBands } from '@/lib/verdict';
 
 describe('decideWithUncertainty (U known)', () => {
   // Source: ILAC-G8:09/2019 §4.2.3 — non-binary rule with w = U at an upper limit TL: pass below TL − w;
@@ -25,7 +25,11 @@ describe('decideWithUncertainty (U known)', () => {
     [4.5, 'marginal', 'conditional-fail'],
     [4.25, 'fail', 'fail'],
   ])('at a lower limit 5 with U = 0.5, x = %d is %s (%s)', (x, verdict, zone) => {
-    expect(decideWithUncertainty(x, 0.5, { lower: 5 })).toMatchObject({ verdict, zone, side: verdict === 'pass' ? undefined : 'lower' });
+    expect(decideWithUncertainty(x, 0.5, { lower: 5 })).toMatchObject({
+      verdict,
+      zone,
+      side: verdict === 'pass' ? undefined : 'lower',
+    });
   });
 
   // Source: ISO 14253-1:2017 (from memory) — conformity proven only when y ± U lies wholly inside the tolerance.

@@ -1,5 +1,5 @@
-import { convert, formatRange } from '../../lib/units';
-import { evaluateReading, type VerdictInput } from '../../lib/verdict';
+import { convert, formatRange } from '@/lib/units';
+import { evaluateReading, type VerdictInput } from '@/lib/verdict';
 
 // Trade facts: common practice, no published source. Limits are typical service-manual values, used as examples.
 describe('evaluateReading on workshop readings', () => {
@@ -11,8 +11,16 @@ describe('evaluateReading on workshop readings', () => {
       leadResistance: { value: 3.9, unit: 'Ω' },
     });
     expect(result.value).toBeCloseTo(7.8 - 3.9, 12);
-    expect(result).toMatchObject({ verdict: 'pass', unit: 'Ω', expandedUncertainty: null, conformanceProbability: null });
-    expect(result.steps.find((s) => s.label.startsWith('Test-lead resistance subtracted'))).toMatchObject({ formula: 'R = 7.8 Ω − 3.9 Ω', unit: 'Ω' });
+    expect(result).toMatchObject({
+      verdict: 'pass',
+      unit: 'Ω',
+      expandedUncertainty: null,
+      conformanceProbability: null,
+    });
+    expect(result.steps.find((s) => s.label.startsWith('Test-lead resistance subtracted'))).toMatchObject({
+      formula: 'R = 7.8 Ω − 3.9 Ω',
+      unit: 'Ω',
+    });
     expect(result.reason).toBe('Inside 3.57–4.83 Ω. No meter accuracy was given, so the uncertainty is unknown.');
   });
 
@@ -62,7 +70,12 @@ describe('evaluateReading with a meter (U known)', () => {
   const spec = { min: 3.57, max: 4.83, unit: 'Ω' as const };
 
   it('combines the raw and lead readings in quadrature and reports the interval in the reason', () => {
-    const result = evaluateReading({ spec, reading: { value: 7.8, unit: 'Ω' }, leadResistance: { value: 3.9, unit: 'Ω' }, meter });
+    const result = evaluateReading({
+      spec,
+      reading: { value: 7.8, unit: 'Ω' },
+      leadResistance: { value: 3.9, unit: 'Ω' },
+      meter,
+    });
     const uRaw = (0.01 * 7.8 + 2 * 0.01) / Math.sqrt(3);
     const uLead = (0.01 * 3.9 + 2 * 0.01) / Math.sqrt(3);
     const U = 2 * Math.sqrt(uRaw ** 2 + uLead ** 2);
@@ -70,7 +83,9 @@ describe('evaluateReading with a meter (U known)', () => {
     expect(result.zones.interval?.[0]).toBeCloseTo(result.value - U, 12);
     expect(result.verdict).toBe('pass');
     const x = result.value;
-    expect(result.reason).toBe(`Inside 3.57–4.83 Ω with its uncertainty interval ${formatRange(x - U, null, x + U, 'Ω')}.`);
+    expect(result.reason).toBe(
+      `Inside 3.57–4.83 Ω with its uncertainty interval ${formatRange(x - U, null, x + U, 'Ω')}.`,
+    );
     expect(result.conformanceProbability).toBeGreaterThan(0.99);
   });
 
@@ -111,13 +126,24 @@ describe('evaluateReading with a meter (U known)', () => {
 
 describe('evaluateReading temperature and one-sided specs', () => {
   it('for a non-copper part, records the temperature without correcting', () => {
-    const result = evaluateReading({ spec: { min: 4, max: 6, unit: 'kΩ', material: 'none' }, reading: { value: 5, unit: 'kΩ' }, temperatureC: 60 });
+    const result = evaluateReading({
+      spec: { min: 4, max: 6, unit: 'kΩ', material: 'none' },
+      reading: { value: 5, unit: 'kΩ' },
+      temperatureC: 60,
+    });
     expect(result.value).toBe(5);
-    expect(result.steps.at(-2)).toMatchObject({ label: expect.stringContaining('no correction because the part is not a copper winding'), value: 60, unit: '°C' });
+    expect(result.steps.at(-2)).toMatchObject({
+      label: expect.stringContaining('no correction because the part is not a copper winding'),
+      value: 60,
+      unit: '°C',
+    });
   });
 
   it('for a copper part without a temperature, says the reading is taken as at the reference', () => {
-    const result = evaluateReading({ spec: { min: 4, max: 6, unit: 'Ω', material: 'copper', refTempC: 25 }, reading: { value: 5, unit: 'Ω' } });
+    const result = evaluateReading({
+      spec: { min: 4, max: 6, unit: 'Ω', material: 'copper', refTempC: 25 },
+      reading: { value: 5, unit: 'Ω' },
+    });
     expect(result.steps.some((s) => s.label.includes('taken as at 25 °C'))).toBe(true);
   });
 

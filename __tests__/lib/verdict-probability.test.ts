@@ -1,4 +1,4 @@
-import { conformanceProbability, erf, erfc, normalCdf } from '../../lib/verdict';
+import { conformanceProbability, erf, erfc, normalCdf } from '@/lib/verdict';
 
 describe('erf, erfc and normalCdf', () => {
   // Check values: Python 3 math.erf / math.erfc (the C library's libm), run while writing this test;

@@ -1,5 +1,5 @@
 import fc from 'fast-check';
-import { decideWithUncertainty, evaluateReading, type Verdict } from '../../lib/verdict';
+import { decideWithUncertainty, evaluateReading, type Verdict } from '@/lib/verdict';
 
 // Limits and readings on a 1e-3 grid of realistic sizes; U from 0 to 5.
 const grid = (min: number, max: number) => fc.integer({ min: min * 1000, max: max * 1000 }).map((n) => n / 1000);
@@ -38,16 +38,22 @@ describe('decision properties (fast-check)', () => {
 
   it('a reading equal to a limit is never pass when U > 0', () => {
     fc.assert(
-      fc.property(grid(0.001, 100), grid(0.001, 50), fc.boolean(), fc.integer({ min: 1, max: 20 }), (min, width, atMax, counts) => {
-        const max = min + width;
-        const result = evaluateReading({
-          spec: { min, max, unit: 'kΩ' },
-          reading: { value: atMax ? max : min, unit: 'kΩ' },
-          meter: { percent: 0.5, counts, countValue: 0.001, unit: 'kΩ' },
-        });
-        expect(result.expandedUncertainty).toBeGreaterThan(0);
-        expect(result.verdict).not.toBe('pass');
-      }),
+      fc.property(
+        grid(0.001, 100),
+        grid(0.001, 50),
+        fc.boolean(),
+        fc.integer({ min: 1, max: 20 }),
+        (min, width, atMax, counts) => {
+          const max = min + width;
+          const result = evaluateReading({
+            spec: { min, max, unit: 'kΩ' },
+            reading: { value: atMax ? max : min, unit: 'kΩ' },
+            meter: { percent: 0.5, counts, countValue: 0.001, unit: 'kΩ' },
+          });
+          expect(result.expandedUncertainty).toBeGreaterThan(0);
+          expect(result.verdict).not.toBe('pass');
+        },
+      ),
     );
   });
 
@@ -55,7 +61,10 @@ describe('decision properties (fast-check)', () => {
     fc.assert(
       fc.property(grid(0.001, 100), grid(0, 50), fc.boolean(), (min, width, atMax) => {
         const max = min + width;
-        const result = evaluateReading({ spec: { min, max, unit: 'V' }, reading: { value: atMax ? max : min, unit: 'V' } });
+        const result = evaluateReading({
+          spec: { min, max, unit: 'V' },
+          reading: { value: atMax ? max : min, unit: 'V' },
+        });
         expect(result.verdict).toBe('marginal');
       }),
     );

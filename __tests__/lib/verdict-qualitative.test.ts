@@ -1,4 +1,4 @@
-import { evaluateContinuity, evaluateDiode, VerdictInputError } from '../../lib/verdict';
+import { evaluateContinuity, evaluateDiode, VerdictInputError } from '@/lib/verdict';
 
 describe('evaluateDiode', () => {
   // Common practice, no published source: a good diode conducts one way only.
@@ -42,6 +42,8 @@ describe('evaluateContinuity', () => {
   });
 
   it('when continuity is not a boolean, throws VerdictInputError on continuity', () => {
-    expect(() => evaluateContinuity({ continuity: 'yes' as never })).toThrow(expect.objectContaining({ field: 'continuity' }));
+    expect(() => evaluateContinuity({ continuity: 'yes' as never })).toThrow(
+      expect.objectContaining({ field: 'continuity' }),
+    );
   });
 });

@@ -5,7 +5,7 @@ import {
   referToTemperature,
   VerdictInputError,
   type VerdictInput,
-} from '../../lib/verdict';
+} from '@/lib/verdict';
 
 describe('meterHalfWidth, rectangularStd and U', () => {
   // Source: Kwantlen Polytechnic University physics tutorial "Digital Multimeter Uncertainties":
@@ -28,7 +28,11 @@ describe('meterHalfWidth, rectangularStd and U', () => {
   });
 
   it('through evaluateReading, a 32.00 V reading reports U = 0.958401 V', () => {
-    const result = evaluateReading({ spec: { min: 28, max: 36, unit: 'V' }, reading: { value: 32.0, unit: 'V' }, meter });
+    const result = evaluateReading({
+      spec: { min: 28, max: 36, unit: 'V' },
+      reading: { value: 32.0, unit: 'V' },
+      meter,
+    });
     expect(Math.abs((result.expandedUncertainty as number) - 0.958401)).toBeLessThan(5e-7);
     expect(result.verdict).toBe('pass');
   });

@@ -4,9 +4,9 @@
  * exist, fails here.
  */
 import request from 'supertest';
-import { apiRouters, createApp } from '../../server/app';
-import { ROUTE_RULES } from '../../server/auth/route-rules';
-import { ROLES, roleAtLeast, type AccessRule, type Role } from '../../server/auth/roles';
+import { apiRouters, createApp } from '@/server/app';
+import { ROUTE_RULES } from '@/server/auth/route-rules';
+import { ROLES, roleAtLeast, type AccessRule, type Role } from '@/server/auth/roles';
 import { useTestDatabase } from '../helpers/test-db';
 import { authHeader } from '../helpers/auth';
 
@@ -18,10 +18,16 @@ type Layer = { route?: { path: string | string[]; methods: Record<string, boolea
 /** 'METHOD /api/prefix/path' for every route the routers declare. */
 function mountedRoutes(): string[] {
   return apiRouters().flatMap(([prefix, router]) =>
-    ((router as unknown as { stack: Layer[] }).stack)
+    (router as unknown as { stack: Layer[] }).stack
       .filter((l) => l.route)
-      .flatMap((l) => [l.route!.path].flat().flatMap((path) =>
-        Object.keys(l.route!.methods).filter((m) => m !== '_all').map((m) => `${m.toUpperCase()} /api${prefix}${path === '/' ? '' : path}`))));
+      .flatMap((l) =>
+        [l.route!.path].flat().flatMap((path) =>
+          Object.keys(l.route!.methods)
+            .filter((m) => m !== '_all')
+            .map((m) => `${m.toUpperCase()} /api${prefix}${path === '/' ? '' : path}`),
+        ),
+      ),
+  );
 }
 
 function expectedFor(rule: AccessRule, who: Role | 'anonymous'): 'allowed' | 401 | 403 {
@@ -40,7 +46,8 @@ describe('route rules', () => {
 });
 
 const CASES = Object.entries(ROUTE_RULES).flatMap(([key, rule]) =>
-  (['anonymous', ...ROLES] as const).map((who) => [key, who, rule, expectedFor(rule, who)] as const));
+  (['anonymous', ...ROLES] as const).map((who) => [key, who, rule, expectedFor(rule, who)] as const),
+);
 
 describe.each(CASES)('%s as %s', (key, who, _rule, expected) => {
   it(`is ${expected === 'allowed' ? 'allowed past the access check' : `refused with ${expected}`}`, async () => {

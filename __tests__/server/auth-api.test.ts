@@ -1,10 +1,10 @@
 import request from 'supertest';
 import jwt from 'jsonwebtoken';
-import { createApp } from '../../server/app';
-import { AppDataSource } from '../../server/db/data-source';
-import { config } from '../../server/config';
-import { EmailToken } from '../../server/modules/auth/email-token.entity';
-import { sha256Hex } from '../../server/auth/tokens';
+import { createApp } from '@/server/app';
+import { AppDataSource } from '@/server/db/data-source';
+import { config } from '@/server/config';
+import { EmailToken } from '@/server/modules/auth/email-token.entity';
+import { sha256Hex } from '@/server/auth/tokens';
 import { useTestDatabase } from '../helpers/test-db';
 import { latestMailTo, tokenFromLink, useFakeMail } from '../helpers/mail';
 
@@ -32,17 +32,28 @@ async function signIn(email: string, password = PASSWORD) {
 describe('sign up, verify, sign in', () => {
   it('a new account gets a verification link, and can sign in only once verified', async () => {
     const email = newEmail();
-    await request(app).post('/api/auth/sign-up').send({ email, displayName: 'Rowan Tester', password: PASSWORD }).expect(202);
+    await request(app)
+      .post('/api/auth/sign-up')
+      .send({ email, displayName: 'Rowan Tester', password: PASSWORD })
+      .expect(202);
     expect((await signIn(email)).res.body.code).toBe('email_not_verified');
     const mail = await latestMailTo(email);
     expect(mail.subject).toMatch(/confirm/i);
-    await request(app).post('/api/auth/verify').send({ token: tokenFromLink(mail.text, 'verify') }).expect(200);
+    await request(app)
+      .post('/api/auth/verify')
+      .send({ token: tokenFromLink(mail.text, 'verify') })
+      .expect(200);
     const { res, cookie } = await signIn(email.toUpperCase());
     expect(res.status).toBe(200);
     expect(res.body.user).toMatchObject({ email, role: 'contributor', emailVerified: true });
     expect(cookie).toMatch(/^sb_refresh=/);
-    expect([res.headers['set-cookie']].flat().join(';')).toMatch(/HttpOnly.*SameSite=Strict|SameSite=Strict.*HttpOnly/i);
-    const me = await request(app).get('/api/auth/me').set('Authorization', `Bearer ${res.body.accessToken}`).expect(200);
+    expect([res.headers['set-cookie']].flat().join(';')).toMatch(
+      /HttpOnly.*SameSite=Strict|SameSite=Strict.*HttpOnly/i,
+    );
+    const me = await request(app)
+      .get('/api/auth/me')
+      .set('Authorization', `Bearer ${res.body.accessToken}`)
+      .expect(200);
     expect(me.body.email).toBe(email);
   });
 
@@ -56,9 +67,13 @@ describe('sign up, verify, sign in', () => {
 
   it('signing up again with the same address reveals nothing and creates no second account', async () => {
     const email = await signUpAndVerify();
-    const res = await request(app).post('/api/auth/sign-up').send({ email: email.toUpperCase(), displayName: 'Someone Else', password: PASSWORD });
+    const res = await request(app)
+      .post('/api/auth/sign-up')
+      .send({ email: email.toUpperCase(), displayName: 'Someone Else', password: PASSWORD });
     expect(res.status).toBe(202);
-    const [row] = await AppDataSource.query('SELECT COUNT(*) AS n FROM users WHERE email_key = ?', [email.toLowerCase()]);
+    const [row] = await AppDataSource.query('SELECT COUNT(*) AS n FROM users WHERE email_key = ?', [
+      email.toLowerCase(),
+    ]);
     expect(Number(row.n)).toBe(1);
   });
 
@@ -76,7 +91,10 @@ describe('sign up, verify, sign in', () => {
 
   it('a verification link works once', async () => {
     const email = newEmail();
-    await request(app).post('/api/auth/sign-up').send({ email, displayName: 'Rowan Tester', password: PASSWORD }).expect(202);
+    await request(app)
+      .post('/api/auth/sign-up')
+      .send({ email, displayName: 'Rowan Tester', password: PASSWORD })
+      .expect(202);
     const token = tokenFromLink((await latestMailTo(email)).text, 'verify');
     await request(app).post('/api/auth/verify').send({ token }).expect(200);
     const again = await request(app).post('/api/auth/verify').send({ token });
@@ -98,10 +116,46 @@ describe('bearer tokens', () => {
   const call = (token: string) => request(app).get('/api/auth/me').set('Authorization', `Bearer ${token}`);
 
   it.each([
-    ['alg none', () => jwt.sign({ role: 'admin' }, '', { algorithm: 'none', subject: '1', issuer: 'specbench', audience: 'specbench-app' })],
-    ['another key', () => jwt.sign({ role: 'admin' }, 'some-other-secret-that-is-long-enough', { algorithm: 'HS256', subject: '1', issuer: 'specbench', audience: 'specbench-app' })],
-    ['expired', () => jwt.sign({ role: 'admin', exp: Math.floor(Date.now() / 1000) - 60 }, config.jwtSecret, { algorithm: 'HS256', subject: '1', issuer: 'specbench', audience: 'specbench-app' })],
-    ['another audience', () => jwt.sign({ role: 'admin' }, config.jwtSecret, { algorithm: 'HS256', subject: '1', issuer: 'specbench', audience: 'other-app' })],
+    [
+      'alg none',
+      () =>
+        jwt.sign({ role: 'admin' }, '', {
+          algorithm: 'none',
+          subject: '1',
+          issuer: 'specbench',
+          audience: 'specbench-app',
+        }),
+    ],
+    [
+      'another key',
+      () =>
+        jwt.sign({ role: 'admin' }, 'some-other-secret-that-is-long-enough', {
+          algorithm: 'HS256',
+          subject: '1',
+          issuer: 'specbench',
+          audience: 'specbench-app',
+        }),
+    ],
+    [
+      'expired',
+      () =>
+        jwt.sign({ role: 'admin', exp: Math.floor(Date.now() / 1000) - 60 }, config.jwtSecret, {
+          algorithm: 'HS256',
+          subject: '1',
+          issuer: 'specbench',
+          audience: 'specbench-app',
+        }),
+    ],
+    [
+      'another audience',
+      () =>
+        jwt.sign({ role: 'admin' }, config.jwtSecret, {
+          algorithm: 'HS256',
+          subject: '1',
+          issuer: 'specbench',
+          audience: 'other-app',
+        }),
+    ],
     ['garbage', () => 'not.a.jwt'],
   ])('a token with %s is refused with 401', async (_name, make) => {
     const res = await call(make());
@@ -111,9 +165,15 @@ describe('bearer tokens', () => {
 });
 
 describe('refresh tokens', () => {
-  const cookieOf = (res: request.Response) => [res.headers['set-cookie']].flat().find((c) => c?.startsWith('sb_refresh='))!.split(';')[0];
-  const ageReplacement = (cookie: string) => AppDataSource.query(
-    'UPDATE refresh_tokens SET replaced_at = NOW(3) - INTERVAL 1 MINUTE WHERE token_hash = ?', [sha256Hex(cookie.slice('sb_refresh='.length))]);
+  const cookieOf = (res: request.Response) =>
+    [res.headers['set-cookie']]
+      .flat()
+      .find((c) => c?.startsWith('sb_refresh='))!
+      .split(';')[0];
+  const ageReplacement = (cookie: string) =>
+    AppDataSource.query('UPDATE refresh_tokens SET replaced_at = NOW(3) - INTERVAL 1 MINUTE WHERE token_hash = ?', [
+      sha256Hex(cookie.slice('sb_refresh='.length)),
+    ]);
 
   it('rotate on every refresh; reusing an old one closes the whole family', async () => {
     const { cookie: first } = await signIn(await signUpAndVerify());
@@ -145,7 +205,10 @@ describe('refresh tokens', () => {
 
   it('a cross-site request to refresh is refused', async () => {
     const { cookie } = await signIn(await signUpAndVerify());
-    const res = await request(app).post('/api/auth/refresh').set('Cookie', cookie).set('Origin', 'https://evil.example');
+    const res = await request(app)
+      .post('/api/auth/refresh')
+      .set('Cookie', cookie)
+      .set('Origin', 'https://evil.example');
     expect(res.status).toBe(403);
   });
 });
@@ -168,7 +231,10 @@ describe('forgot and reset password', () => {
     const email = await signUpAndVerify();
     await request(app).post('/api/auth/forgot').send({ email }).expect(202);
     const token = tokenFromLink((await latestMailTo(email)).text, 'reset');
-    const row = await AppDataSource.getRepository(EmailToken).findOneByOrFail({ purpose: 'reset', tokenHash: sha256Hex(token) });
+    const row = await AppDataSource.getRepository(EmailToken).findOneByOrFail({
+      purpose: 'reset',
+      tokenHash: sha256Hex(token),
+    });
     expect(row.expiresAt.getTime() - row.createdAt.getTime()).toBeLessThanOrEqual(30 * 60_000 + 1000);
     await AppDataSource.getRepository(EmailToken).update(row.id, { expiresAt: new Date(Date.now() - 1000) });
     const res = await request(app).post('/api/auth/reset').send({ token, password: 'new-stator-phrase-42' });

@@ -1,6 +1,6 @@
 import request from 'supertest';
-import { createApp } from '../../server/app';
-import { SPEC_CSV_COLUMNS } from '../../lib/csv';
+import { createApp } from '@/server/app';
+import { SPEC_CSV_COLUMNS } from '@/lib/csv';
 import { useTestDatabase } from '../helpers/test-db';
 import { authHeader } from '../helpers/auth';
 import { toCsv, uniqueMake, validRow } from '../fixtures/csv/rows';
@@ -8,12 +8,29 @@ import { toCsv, uniqueMake, validRow } from '../fixtures/csv/rows';
 useTestDatabase();
 const app = createApp({ webDist: null });
 let editor: { Authorization: string };
-beforeAll(async () => { editor = await authHeader('editor'); });
+beforeAll(async () => {
+  editor = await authHeader('editor');
+});
 
-const upload = (text: string) => request(app).post('/api/imports').set(editor)
-  .attach('file', Buffer.from(text, 'utf8'), { filename: 'specs.csv', contentType: 'text/csv' });
-const exportCsv = (query: Record<string, string | number> = {}) => request(app).get('/api/exports/specs.csv').query(query).set(editor)
-  .buffer(true).parse((res, done) => { let text = ''; res.setEncoding('utf8'); res.on('data', (c: string) => { text += c; }); res.on('end', () => done(null, text)); });
+const upload = (text: string) =>
+  request(app)
+    .post('/api/imports')
+    .set(editor)
+    .attach('file', Buffer.from(text, 'utf8'), { filename: 'specs.csv', contentType: 'text/csv' });
+const exportCsv = (query: Record<string, string | number> = {}) =>
+  request(app)
+    .get('/api/exports/specs.csv')
+    .query(query)
+    .set(editor)
+    .buffer(true)
+    .parse((res, done) => {
+      let text = '';
+      res.setEncoding('utf8');
+      res.on('data', (c: string) => {
+        text += c;
+      });
+      res.on('end', () => done(null, text));
+    });
 
 /** Imports and commits; returns the created spec ids by line. */
 async function importNow(text: string): Promise<number[]> {
@@ -47,8 +64,23 @@ describe('GET /api/exports/specs.csv', () => {
 
   it('when exported and imported again, every row is unchanged (one make, one model, and the whole library)', async () => {
     const make = uniqueMake();
-    await importNow(toCsv([validRow(make, FORMULAS), validRow(make, { component: 'spark plug', parameter: 'electrode gap', min: '0.7', nominal: '', max: '0.8', unit: 'mm', material: '', ref_temp_c: '', source_url: 'https://manuals.example/quillon' })]));
-    for (const query of [{ make }, {}] as Array<Record<string, string>>) {
+    await importNow(
+      toCsv([
+        validRow(make, FORMULAS),
+        validRow(make, {
+          component: 'spark plug',
+          parameter: 'electrode gap',
+          min: '0.7',
+          nominal: '',
+          max: '0.8',
+          unit: 'mm',
+          material: '',
+          ref_temp_c: '',
+          source_url: 'https://manuals.example/quillon',
+        }),
+      ]),
+    );
+    for (const query of [{ make }, {}] as Record<string, string>[]) {
       const exported: string = (await exportCsv(query).expect(200)).body;
       const again = (await upload(exported).expect(201)).body;
       expect(again.counts).toMatchObject({ created: 0, updated: 0, rejected: 0 });
@@ -61,7 +93,12 @@ describe('GET /api/exports/specs.csv', () => {
     const [specId] = await importNow(toCsv([validRow(make, FORMULAS)]));
     const spec = (await request(app).get(`/api/specs/${specId}`).expect(200)).body;
     // Stored and shown exactly as typed, never evaluated.
-    expect(spec).toMatchObject({ testPoints: FORMULAS.test_points, conditions: FORMULAS.conditions, notes: FORMULAS.notes, sourcePage: FORMULAS.source_page });
+    expect(spec).toMatchObject({
+      testPoints: FORMULAS.test_points,
+      conditions: FORMULAS.conditions,
+      notes: FORMULAS.notes,
+      sourcePage: FORMULAS.source_page,
+    });
     const text: string = (await exportCsv({ make }).expect(200)).body;
     // Source: OWASP CSV Injection; CWE-1236 — a cell starting with = + - @ is prefixed with ' and quoted.
     expect(text).toContain(`"'=HYPERLINK(""http://attacker.example"",""click"")"`);
@@ -94,6 +131,12 @@ describe('GET /api/exports/specs.csv', () => {
 
   it('is for editors: 401 without a session, 403 for a contributor', async () => {
     expect((await request(app).get('/api/exports/specs.csv')).status).toBe(401);
-    expect((await request(app).get('/api/exports/specs.csv').set(await authHeader('contributor'))).status).toBe(403);
+    expect(
+      (
+        await request(app)
+          .get('/api/exports/specs.csv')
+          .set(await authHeader('contributor'))
+      ).status,
+    ).toBe(403);
   });
 });

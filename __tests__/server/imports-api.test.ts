@@ -1,7 +1,7 @@
 import request from 'supertest';
-import { createApp } from '../../server/app';
-import { AppDataSource } from '../../server/db/data-source';
-import { COLUMN_REFERENCE } from '../../lib/csv';
+import { createApp } from '@/server/app';
+import { AppDataSource } from '@/server/db/data-source';
+import { COLUMN_REFERENCE } from '@/lib/csv';
 import { useTestDatabase } from '../helpers/test-db';
 import { expectProblem } from '../helpers/problems';
 import { authHeader } from '../helpers/auth';
@@ -11,15 +11,20 @@ import { toCsv, uniqueMake, validFile, validRow } from '../fixtures/csv/rows';
 useTestDatabase();
 const app = createApp({ webDist: null });
 let editor: { Authorization: string };
-beforeAll(async () => { editor = await authHeader('editor'); });
-
+beforeAll(async () => {
+  editor = await authHeader('editor');
+});
 
 const upload = (bytes: Buffer | string, fileName = 'specs.csv', contentType = 'text/csv') =>
-  request(app).post('/api/imports').set(editor).attach('file', Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes, 'utf8'), { filename: fileName, contentType });
+  request(app)
+    .post('/api/imports')
+    .set(editor)
+    .attach('file', Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes, 'utf8'), { filename: fileName, contentType });
 const commit = (id: number, body: object = {}) => request(app).post(`/api/imports/${id}/commit`).set(editor).send(body);
 
 async function tableCounts() {
-  const [row] = await AppDataSource.query(`SELECT (SELECT COUNT(*) FROM specs) AS specs, (SELECT COUNT(*) FROM spec_revisions) AS revisions,
+  const [row] =
+    await AppDataSource.query(`SELECT (SELECT COUNT(*) FROM specs) AS specs, (SELECT COUNT(*) FROM spec_revisions) AS revisions,
     (SELECT COUNT(*) FROM makes) AS makes, (SELECT COUNT(*) FROM sources) AS sources, (SELECT COUNT(*) FROM import_batch_rows) AS staged`);
   return Object.fromEntries(Object.entries(row).map(([k, v]) => [k, Number(v)]));
 }
@@ -30,9 +35,18 @@ describe('POST /api/imports (preview)', () => {
     const before = await tableCounts();
     const res = await upload(validFile(make, 3)).expect(201);
     expect(res.headers.location).toBe(`/api/imports/${res.body.id}`);
-    expect(res.body).toMatchObject({ status: 'previewed', fileName: 'specs.csv', counts: { created: 3, updated: 0, unchanged: 0, rejected: 0 } });
+    expect(res.body).toMatchObject({
+      status: 'previewed',
+      fileName: 'specs.csv',
+      counts: { created: 3, updated: 0, unchanged: 0, rejected: 0 },
+    });
     expect(res.body.created.map((r: { line: number }) => r.line)).toEqual([2, 3, 4]);
-    expect(res.body.created[0]).toMatchObject({ make, component: 'ignition coil 1', display: expect.stringMatching(/Ω/), specId: null });
+    expect(res.body.created[0]).toMatchObject({
+      make,
+      component: 'ignition coil 1',
+      display: expect.stringMatching(/Ω/),
+      specId: null,
+    });
     const after = await tableCounts();
     expect({ ...after, staged: 0 }).toEqual({ ...before, staged: 0 });
   });
@@ -40,25 +54,50 @@ describe('POST /api/imports (preview)', () => {
   it('when a row differs from the library, lists it as updated with each field before → after', async () => {
     const make = uniqueMake();
     await commit((await upload(validFile(make, 2)).expect(201)).body.id).expect(200);
-    const changed = toCsv([validRow(make, { component: 'ignition coil 1', max: '3.4', notes: 'Re-measured' }), validRow(make, { component: 'ignition coil 2' })]);
+    const changed = toCsv([
+      validRow(make, { component: 'ignition coil 1', max: '3.4', notes: 'Re-measured' }),
+      validRow(make, { component: 'ignition coil 2' }),
+    ]);
     const res = await upload(changed).expect(201);
     expect(res.body.counts).toMatchObject({ created: 0, updated: 1, unchanged: 1 });
-    expect(res.body.updated[0].changes).toEqual([{ field: 'max', before: 3.2, after: 3.4 }, { field: 'notes', before: null, after: 'Re-measured' }]);
+    expect(res.body.updated[0].changes).toEqual([
+      { field: 'max', before: 3.2, after: 3.4 },
+      { field: 'notes', before: null, after: 'Re-measured' },
+    ]);
     expect(res.body.unchanged[0]).toMatchObject({ line: 3, specId: expect.any(Number) });
   });
 
   it('accepts a BOM, LF line endings and quoted newlines, with true line numbers', async () => {
     const make = uniqueMake();
-    const text = '\uFEFF' + toCsv([validRow(make, { notes: 'first line\nsecond line' }), validRow(make, { component: 'stator', parameter: 'stator winding resistance', min: '0.2', nominal: '', max: '9.5', unit: 'V' })], { eol: '\n' });
+    const text =
+      '\uFEFF' +
+      toCsv(
+        [
+          validRow(make, { notes: 'first line\nsecond line' }),
+          validRow(make, {
+            component: 'stator',
+            parameter: 'stator winding resistance',
+            min: '0.2',
+            nominal: '',
+            max: '9.5',
+            unit: 'V',
+          }),
+        ],
+        { eol: '\n' },
+      );
     const res = await upload(text).expect(201);
     expect(res.body.counts).toMatchObject({ created: 1, rejected: 1 });
-    expect(res.body.rejected).toEqual([{ line: 4, column: 'unit', reason: expect.stringMatching(/needs a resistance unit/) }]);
+    expect(res.body.rejected).toEqual([
+      { line: 4, column: 'unit', reason: expect.stringMatching(/needs a resistance unit/) },
+    ]);
   });
 
   it('when a value is valid but implausible, accepts the row with a warning', async () => {
     const res = await upload(toCsv([validRow(uniqueMake(), { min: '', nominal: '45', max: '' })])).expect(201);
     expect(res.body.counts).toMatchObject({ created: 1, warnings: 1 });
-    expect(res.body.created[0].warnings).toEqual([{ line: 2, column: 'nominal', reason: expect.stringMatching(/unusual for an ignition primary winding/) }]);
+    expect(res.body.created[0].warnings).toEqual([
+      { line: 2, column: 'nominal', reason: expect.stringMatching(/unusual for an ignition primary winding/) },
+    ]);
   });
 
   it('pages each group with offset and limit, keeping the totals', async () => {
@@ -76,22 +115,29 @@ describe('POST /api/imports — the bad-input corpus', () => {
     expect(corpus.length).toBeGreaterThanOrEqual(30);
   });
 
-  it.each(corpus.map((c) => [c.name, c] as const))('%s: answers with a located error and writes nothing', async (_name, c) => {
-    const before = await tableCounts();
-    const res = await upload(c.bytes, c.fileName);
-    if (c.status === 422) {
-      expectProblem(res, 422, 'unprocessable');
-      expect(res.body.errors).toEqual(expect.arrayContaining([{ path: c.path, message: expect.stringMatching(c.message) }]));
-      const [batch] = await AppDataSource.query('SELECT status FROM import_batches WHERE id = ?', [res.body.batchId]);
-      expect(batch.status).toBe('failed');
-      expect(await tableCounts()).toEqual(before);
-    } else {
-      expect(res.status).toBe(201);
-      expect(res.body.rejected).toEqual(expect.arrayContaining([{ line: c.line, column: c.column, reason: expect.stringMatching(c.reason) }]));
-      expect(res.body.rejected.every((p: { line: number }) => p.line === c.line)).toBe(true);
-      expect((await tableCounts()).specs).toBe(before.specs);
-    }
-  });
+  it.each(corpus.map((c) => [c.name, c] as const))(
+    '%s: answers with a located error and writes nothing',
+    async (_name, c) => {
+      const before = await tableCounts();
+      const res = await upload(c.bytes, c.fileName);
+      if (c.status === 422) {
+        expectProblem(res, 422, 'unprocessable');
+        expect(res.body.errors).toEqual(
+          expect.arrayContaining([{ path: c.path, message: expect.stringMatching(c.message) }]),
+        );
+        const [batch] = await AppDataSource.query('SELECT status FROM import_batches WHERE id = ?', [res.body.batchId]);
+        expect(batch.status).toBe('failed');
+        expect(await tableCounts()).toEqual(before);
+      } else {
+        expect(res.status).toBe(201);
+        expect(res.body.rejected).toEqual(
+          expect.arrayContaining([{ line: c.line, column: c.column, reason: expect.stringMatching(c.reason) }]),
+        );
+        expect(res.body.rejected.every((p: { line: number }) => p.line === c.line)).toBe(true);
+        expect((await tableCounts()).specs).toBe(before.specs);
+      }
+    },
+  );
 
   it('when a file is over 10 MB, responds 413 problem details and keeps no batch', async () => {
     const [{ n }] = await AppDataSource.query('SELECT COUNT(*) AS n FROM import_batches');
@@ -126,7 +172,13 @@ describe('POST /api/imports — the bad-input corpus', () => {
 
   it('when not signed in, responds 401; a contributor gets 403', async () => {
     expectProblem(await request(app).post('/api/imports').attach('file', Buffer.from('x'), 'a.csv'), 401);
-    expectProblem(await request(app).post('/api/imports').set(await authHeader('contributor')).attach('file', Buffer.from('x'), 'a.csv'), 403);
+    expectProblem(
+      await request(app)
+        .post('/api/imports')
+        .set(await authHeader('contributor'))
+        .attach('file', Buffer.from('x'), 'a.csv'),
+      403,
+    );
   });
 });
 

@@ -1,13 +1,12 @@
 import request from 'supertest';
-import { createApp } from '../../server/app';
-import { AppDataSource } from '../../server/db/data-source';
+import { createApp } from '@/server/app';
+import { AppDataSource } from '@/server/db/data-source';
 import { useTestDatabase } from '../helpers/test-db';
 import { expectProblem } from '../helpers/problems';
-import { loadDemoLibrary } from '../../server/db/seeds/demo-library';
+import { loadDemoLibrary } from '@/server/db/seeds/demo-library';
 
 useTestDatabase();
 const app = createApp({ webDist: null });
-
 
 async function firstModelId(): Promise<number> {
   const res = await request(app).get('/api/models').expect(200);
@@ -46,7 +45,9 @@ describe('GET /api/models/:id', () => {
     expect(res.body.components.length).toBeGreaterThan(0);
     const spec = res.body.components[0].specs[0];
     expect(spec).toMatchObject({ id: expect.any(Number), parameter: expect.any(String), display: expect.any(String) });
-    expect(res.body.specCount).toBe(res.body.components.reduce((n: number, c: { specs: unknown[] }) => n + c.specs.length, 0));
+    expect(res.body.specCount).toBe(
+      res.body.components.reduce((n: number, c: { specs: unknown[] }) => n + c.specs.length, 0),
+    );
   });
 
   it('when the id is unknown, responds 404 problem details', async () => {
@@ -134,15 +135,23 @@ describe('unknown routes and bodies', () => {
 
 describe('demo library loader', () => {
   it('loading it again keeps an editor’s change to a demo spec', async () => {
-    const [spec] = await AppDataSource.query("SELECT id, max_value AS max, version FROM specs WHERE max_value IS NOT NULL ORDER BY id DESC LIMIT 1");
-    await AppDataSource.query('UPDATE specs SET max_value = ?, version = version + 1 WHERE id = ?', [spec.max + 1, spec.id]);
+    const [spec] = await AppDataSource.query(
+      'SELECT id, max_value AS max, version FROM specs WHERE max_value IS NOT NULL ORDER BY id DESC LIMIT 1',
+    );
+    await AppDataSource.query('UPDATE specs SET max_value = ?, version = version + 1 WHERE id = ?', [
+      spec.max + 1,
+      spec.id,
+    ]);
     try {
       const [summary] = await loadDemoLibrary();
       expect(summary.counts.updated).toBe(0);
       const [after] = await AppDataSource.query('SELECT max_value AS max FROM specs WHERE id = ?', [spec.id]);
       expect(after.max).toBeCloseTo(spec.max + 1, 9);
     } finally {
-      await AppDataSource.query('UPDATE specs SET max_value = ?, version = version - 1 WHERE id = ?', [spec.max, spec.id]);
+      await AppDataSource.query('UPDATE specs SET max_value = ?, version = version - 1 WHERE id = ?', [
+        spec.max,
+        spec.id,
+      ]);
     }
   });
 

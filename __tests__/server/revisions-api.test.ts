@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { createApp } from '../../server/app';
+import { createApp } from '@/server/app';
 import { useTestDatabase } from '../helpers/test-db';
 import { expectProblem } from '../helpers/problems';
 import { authHeader } from '../helpers/auth';
@@ -8,8 +8,9 @@ import { toCsv, uniqueMake, validRow } from '../fixtures/csv/rows';
 useTestDatabase();
 const app = createApp({ webDist: null });
 let editor: { Authorization: string };
-beforeAll(async () => { editor = await authHeader('editor'); });
-
+beforeAll(async () => {
+  editor = await authHeader('editor');
+});
 
 const patch = (id: number, body: object) => request(app).patch(`/api/specs/${id}`).set(editor).send(body);
 const revert = (id: number, body: object) => request(app).post(`/api/specs/${id}/revert`).set(editor).send(body);
@@ -18,12 +19,32 @@ const history = async (id: number) => (await request(app).get(`/api/specs/${id}/
 /** A spec imported from CSV (revision 1), then edited twice (revisions 2 and 3). */
 async function specWithHistory(): Promise<number> {
   const make = uniqueMake();
-  const text = toCsv([validRow(make, { component: 'stator', parameter: 'stator winding resistance', min: '0.2', nominal: '0.3', max: '0.4', material: 'copper' })]);
-  const batch = (await request(app).post('/api/imports').set(editor).attach('file', Buffer.from(text), { filename: 'stator.csv', contentType: 'text/csv' }).expect(201)).body;
+  const text = toCsv([
+    validRow(make, {
+      component: 'stator',
+      parameter: 'stator winding resistance',
+      min: '0.2',
+      nominal: '0.3',
+      max: '0.4',
+      material: 'copper',
+    }),
+  ]);
+  const batch = (
+    await request(app)
+      .post('/api/imports')
+      .set(editor)
+      .attach('file', Buffer.from(text), { filename: 'stator.csv', contentType: 'text/csv' })
+      .expect(201)
+  ).body;
   await request(app).post(`/api/imports/${batch.id}/commit`).set(editor).expect(200);
   const id = (await request(app).get(`/api/imports/${batch.id}`).set(editor).expect(200)).body.created[0].specId;
   await patch(id, { version: 1, reason: 'Bulletin 7 raises the maximum', max: 0.5 }).expect(200);
-  await patch(id, { version: 2, reason: 'Measured between yellow leads', testPoints: 'yellow to yellow', nominal: null }).expect(200);
+  await patch(id, {
+    version: 2,
+    reason: 'Measured between yellow leads',
+    testPoints: 'yellow to yellow',
+    nominal: null,
+  }).expect(200);
   return id;
 }
 
@@ -34,14 +55,27 @@ describe('GET /api/specs/:id/revisions', () => {
     expect(res.body).toMatchObject({ specId: id, version: 3 });
     const [third, second, first] = res.body.revisions;
     expect(res.body.revisions.map((r: { version: number }) => r.version)).toEqual([3, 2, 1]);
-    expect(third).toMatchObject({ origin: 'edit', reason: 'Measured between yellow leads', authorName: 'Test editor-tester' });
+    expect(third).toMatchObject({
+      origin: 'edit',
+      reason: 'Measured between yellow leads',
+      authorName: 'Test editor-tester',
+    });
     expect(third.changes).toEqual([
       { field: 'nominal', before: 0.3, after: null },
       { field: 'testPoints', before: 'black/yellow (+) to ground', after: 'yellow to yellow' },
     ]);
     expect(second.changes).toEqual([{ field: 'max', before: 0.4, after: 0.5 }]);
-    expect(first).toMatchObject({ origin: 'import', originRef: expect.stringMatching(/^batch #\d+$/), changedFields: ['created'] });
-    expect(first.changes).toEqual(expect.arrayContaining([{ field: 'min', before: null, after: 0.2 }, { field: 'sourceTitle', before: null, after: 'Invented Workshop Manual' }]));
+    expect(first).toMatchObject({
+      origin: 'import',
+      originRef: expect.stringMatching(/^batch #\d+$/),
+      changedFields: ['created'],
+    });
+    expect(first.changes).toEqual(
+      expect.arrayContaining([
+        { field: 'min', before: null, after: 0.2 },
+        { field: 'sourceTitle', before: null, after: 'Invented Workshop Manual' },
+      ]),
+    );
   });
 
   it('is public: readable without signing in', async () => {
@@ -49,7 +83,11 @@ describe('GET /api/specs/:id/revisions', () => {
     expect((await request(app).get(`/api/specs/${id}/revisions`)).status).toBe(200);
   });
 
-  it.each([['999999', 404], ['abc', 400], ['0', 400]])('for spec id %s responds %d', async (id, status) => {
+  it.each([
+    ['999999', 404],
+    ['abc', 400],
+    ['0', 400],
+  ])('for spec id %s responds %d', async (id, status) => {
     expectProblem(await request(app).get(`/api/specs/${id}/revisions`), status);
   });
 });
@@ -59,9 +97,22 @@ describe('POST /api/specs/:id/revert', () => {
     const id = await specWithHistory();
     const first = (await history(id)).revisions[2];
     const res = await revert(id, { revisionId: first.id, version: 3, reason: 'Bulletin 7 was withdrawn' }).expect(200);
-    expect(res.body).toMatchObject({ id, version: 4, min: 0.2, nominal: 0.3, max: 0.4, testPoints: 'black/yellow (+) to ground' });
+    expect(res.body).toMatchObject({
+      id,
+      version: 4,
+      min: 0.2,
+      nominal: 0.3,
+      max: 0.4,
+      testPoints: 'black/yellow (+) to ground',
+    });
     const latest = (await history(id)).revisions[0];
-    expect(latest).toMatchObject({ version: 4, origin: 'revert', originRef: `revision #${first.id}`, reason: 'Bulletin 7 was withdrawn', changedFields: ['nominal', 'max', 'testPoints'] });
+    expect(latest).toMatchObject({
+      version: 4,
+      origin: 'revert',
+      originRef: `revision #${first.id}`,
+      reason: 'Bulletin 7 was withdrawn',
+      changedFields: ['nominal', 'max', 'testPoints'],
+    });
     expect(latest.changes).toEqual([
       { field: 'nominal', before: null, after: 0.3 },
       { field: 'max', before: 0.5, after: 0.4 },
@@ -99,11 +150,24 @@ describe('POST /api/specs/:id/revert', () => {
   });
 
   it('when the body is not JSON, responds 415', async () => {
-    expectProblem(await request(app).post('/api/specs/1/revert').set(editor).type('form').send({ revisionId: '1' }), 415, 'unsupported_media_type');
+    expectProblem(
+      await request(app).post('/api/specs/1/revert').set(editor).type('form').send({ revisionId: '1' }),
+      415,
+      'unsupported_media_type',
+    );
   });
 
   it('when not signed in, responds 401; a contributor gets 403', async () => {
-    expectProblem(await request(app).post('/api/specs/1/revert').send({ revisionId: 1, version: 1, reason: 'Put it back' }), 401);
-    expectProblem(await request(app).post('/api/specs/1/revert').set(await authHeader('contributor')).send({ revisionId: 1, version: 1, reason: 'Put it back' }), 403);
+    expectProblem(
+      await request(app).post('/api/specs/1/revert').send({ revisionId: 1, version: 1, reason: 'Put it back' }),
+      401,
+    );
+    expectProblem(
+      await request(app)
+        .post('/api/specs/1/revert')
+        .set(await authHeader('contributor'))
+        .send({ revisionId: 1, version: 1, reason: 'Put it back' }),
+      403,
+    );
   });
 });

@@ -3,9 +3,9 @@
  * let someone on the network take over an account.
  */
 import request from 'supertest';
-import { createApp } from '../../server/app';
-import { DEFAULT_DEMO_PASSWORD, loadConfig } from '../../server/config';
-import { isDirectLoopbackPeer } from '../../server/modules/mail/dev-mailbox.router';
+import { createApp } from '@/server/app';
+import { DEFAULT_DEMO_PASSWORD, loadConfig } from '@/server/config';
+import { isDirectLoopbackPeer } from '@/server/modules/mail/dev-mailbox.router';
 import { useTestDatabase } from '../helpers/test-db';
 import { expectProblem } from '../helpers/problems';
 
@@ -45,7 +45,12 @@ describe('the development mailbox', () => {
 });
 
 describe('configuration', () => {
-  const prod = { NODE_ENV: 'production', JWT_SECRET: 'x'.repeat(40), SMTP_URL: 'smtp://mail.shop.example:587', DEMO_PASSWORD: 'a-long-operator-secret' };
+  const prod = {
+    NODE_ENV: 'production',
+    JWT_SECRET: 'x'.repeat(40),
+    SMTP_URL: 'smtp://mail.shop.example:587',
+    DEMO_PASSWORD: 'a-long-operator-secret',
+  };
 
   it('listens on loopback unless HOST is set', () => {
     expect(loadConfig({ NODE_ENV: 'test' }).HOST).toBe('127.0.0.1');

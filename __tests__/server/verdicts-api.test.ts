@@ -1,57 +1,83 @@
 import request from 'supertest';
-import { createApp } from '../../server/app';
-import { AppDataSource } from '../../server/db/data-source';
-import { evaluateReading } from '../../lib/verdict';
+import { createApp } from '@/server/app';
+import { AppDataSource } from '@/server/db/data-source';
+import { evaluateReading } from '@/lib/verdict';
 import { useTestDatabase } from '../helpers/test-db';
 
 useTestDatabase();
 const app = createApp({ webDist: null });
-const post = (body: unknown) => request(app).post('/api/verdicts').send(body as object);
+const post = (body: unknown) =>
+  request(app)
+    .post('/api/verdicts')
+    .send(body as object);
 
 describe('POST /api/verdicts', () => {
   it('a primary winding read 7.8 Ω through leads that read 3.9 Ω is 3.9 Ω, inside 3.57–4.83 Ω → pass', async () => {
     // common practice, no published source (trade fact stated in the issue)
-    const res = await post({ spec: { min: 3.57, max: 4.83, unit: 'ohm' }, reading: { value: 7.8, unit: 'Ω' }, leadResistance: { value: 3.9, unit: 'Ω' } }).expect(200);
+    const res = await post({
+      spec: { min: 3.57, max: 4.83, unit: 'ohm' },
+      reading: { value: 7.8, unit: 'Ω' },
+      leadResistance: { value: 3.9, unit: 'Ω' },
+    }).expect(200);
     expect(res.body.verdict).toBe('pass');
     expect(res.body.value).toBeCloseTo(3.9, 10);
     expect(res.body.unit).toBe('Ω');
     expect(res.body.expandedUncertainty).toBeNull();
     expect(res.body.conformanceProbability).toBeNull();
     expect(res.body.steps.length).toBeGreaterThanOrEqual(2);
-    for (const step of res.body.steps) expect(step).toMatchObject({ label: expect.any(String), value: expect.any(Number), unit: expect.any(String) });
+    for (const step of res.body.steps)
+      expect(step).toMatchObject({ label: expect.any(String), value: expect.any(Number), unit: expect.any(String) });
   });
 
   it('a secondary winding read 22.8 kΩ through a 10 kΩ resistor cap is 12.8 kΩ, inside 10.7–14.5 kΩ → pass', async () => {
     // common practice, no published source (trade fact stated in the issue)
-    const res = await post({ spec: { min: 10.7, max: 14.5, unit: 'kohm' }, reading: { value: 22.8, unit: 'kΩ' }, seriesResistance: { value: 10, unit: 'kohm' } }).expect(200);
+    const res = await post({
+      spec: { min: 10.7, max: 14.5, unit: 'kohm' },
+      reading: { value: 22.8, unit: 'kΩ' },
+      seriesResistance: { value: 10, unit: 'kohm' },
+    }).expect(200);
     expect(res.body).toMatchObject({ verdict: 'pass', unit: 'kΩ' });
     expect(res.body.value).toBeCloseTo(12.8, 10);
   });
 
   it('an electrode gap of 0.030 in is 0.762 mm, inside 0.7–0.8 mm → pass', async () => {
     // Source: NIST SP 811 (2008) Appendix B, 1 in = 25.4 mm exactly; limits: common practice, no published source
-    const res = await post({ spec: { min: 0.7, max: 0.8, unit: 'mm' }, reading: { value: 0.030, unit: 'in' } }).expect(200);
+    const res = await post({ spec: { min: 0.7, max: 0.8, unit: 'mm' }, reading: { value: 0.03, unit: 'in' } }).expect(
+      200,
+    );
     expect(res.body.verdict).toBe('pass');
-    expect(res.body.value).toBeCloseTo(0.030 * 25.4, 12);
+    expect(res.body.value).toBeCloseTo(0.03 * 25.4, 12);
   });
 
   it('with meter accuracy, answers U (k = 2) and p_c exactly as the shared engine does', async () => {
     // Source: Kwantlen Polytechnic University, Digital Multimeter Uncertainties: ±(2.5 % + 3 dgt) on 32.00 V, 0.01 V digit → a = 0.83 V
-    const body = { spec: { min: 30, max: 34, unit: 'V' }, reading: { value: 32, unit: 'V' }, meter: { percent: 2.5, counts: 3, countValue: 0.01, unit: 'V' } };
+    const body = {
+      spec: { min: 30, max: 34, unit: 'V' },
+      reading: { value: 32, unit: 'V' },
+      meter: { percent: 2.5, counts: 3, countValue: 0.01, unit: 'V' },
+    };
     const res = await post(body).expect(200);
     // Source: JCGM 100:2008 §4.3.7 (u = a/√3, from memory, high confidence) and NIST TN 1297 §6.2 (U = 2u)
     expect(res.body.expandedUncertainty).toBeCloseTo((2 * 0.83) / Math.sqrt(3), 9);
-    const engine = evaluateReading({ spec: { min: 30, max: 34, unit: 'V' }, reading: { value: 32, unit: 'V' }, meter: { percent: 2.5, counts: 3, countValue: 0.01, unit: 'V' } });
+    const engine = evaluateReading({
+      spec: { min: 30, max: 34, unit: 'V' },
+      reading: { value: 32, unit: 'V' },
+      meter: { percent: 2.5, counts: 3, countValue: 0.01, unit: 'V' },
+    });
     expect(res.body.verdict).toBe(engine.verdict);
     expect(res.body.conformanceProbability).toBeCloseTo(engine.conformanceProbability!, 12);
   });
 
   it('judges against a library spec given by id and says which version it used', async () => {
-    const [spec] = await AppDataSource.query("SELECT id, min_value, max_value, unit, version FROM specs WHERE quantity_kind = 'resistance' AND min_value IS NOT NULL AND max_value IS NOT NULL LIMIT 1");
+    const [spec] = await AppDataSource.query(
+      "SELECT id, min_value, max_value, unit, version FROM specs WHERE quantity_kind = 'resistance' AND min_value IS NOT NULL AND max_value IS NOT NULL LIMIT 1",
+    );
     const mid = (spec.min_value + spec.max_value) / 2;
     const res = await post({ specId: spec.id, reading: { value: mid, unit: spec.unit } }).expect(200);
     expect(res.body).toMatchObject({ verdict: 'pass', unit: spec.unit, specVersion: spec.version });
-    const outside = await post({ specId: spec.id, reading: { value: spec.max_value * 3, unit: spec.unit } }).expect(200);
+    const outside = await post({ specId: spec.id, reading: { value: spec.max_value * 3, unit: spec.unit } }).expect(
+      200,
+    );
     expect(outside.body.verdict).toBe('fail');
   });
 
@@ -62,11 +88,43 @@ describe('POST /api/verdicts', () => {
   });
 
   it.each([
-    ['a unit of another quantity', { spec: { min: 0.7, max: 0.8, unit: 'mm' }, reading: { value: 3, unit: 'Ω' } }, 'reading.unit'],
-    ['an unknown unit', { spec: { min: 1, max: 2, unit: 'Ω' }, reading: { value: 1.5, unit: 'furlong' } }, 'reading.unit'],
-    ['a negative reading after the leads are subtracted', { spec: { min: 1, max: 2, unit: 'Ω' }, reading: { value: 0.5, unit: 'Ω' }, leadResistance: { value: 1.2, unit: 'Ω' } }, 'reading'],
-    ['a temperature below −40 °C', { spec: { min: 1, max: 2, unit: 'Ω', material: 'copper' }, reading: { value: 1.5, unit: 'Ω' }, temperatureC: -41 }, 'temperatureC'],
-    ['a temperature above 200 °C', { spec: { min: 1, max: 2, unit: 'Ω', material: 'copper' }, reading: { value: 1.5, unit: 'Ω' }, temperatureC: 201 }, 'temperatureC'],
+    [
+      'a unit of another quantity',
+      { spec: { min: 0.7, max: 0.8, unit: 'mm' }, reading: { value: 3, unit: 'Ω' } },
+      'reading.unit',
+    ],
+    [
+      'an unknown unit',
+      { spec: { min: 1, max: 2, unit: 'Ω' }, reading: { value: 1.5, unit: 'furlong' } },
+      'reading.unit',
+    ],
+    [
+      'a negative reading after the leads are subtracted',
+      {
+        spec: { min: 1, max: 2, unit: 'Ω' },
+        reading: { value: 0.5, unit: 'Ω' },
+        leadResistance: { value: 1.2, unit: 'Ω' },
+      },
+      'reading',
+    ],
+    [
+      'a temperature below −40 °C',
+      {
+        spec: { min: 1, max: 2, unit: 'Ω', material: 'copper' },
+        reading: { value: 1.5, unit: 'Ω' },
+        temperatureC: -41,
+      },
+      'temperatureC',
+    ],
+    [
+      'a temperature above 200 °C',
+      {
+        spec: { min: 1, max: 2, unit: 'Ω', material: 'copper' },
+        reading: { value: 1.5, unit: 'Ω' },
+        temperatureC: 201,
+      },
+      'temperatureC',
+    ],
     ['min greater than max', { spec: { min: 3, max: 2, unit: 'Ω' }, reading: { value: 2.5, unit: 'Ω' } }, 'spec.min'],
   ])('when given %s, responds 422 naming the field', async (_name, body, field) => {
     const res = await post(body);
@@ -76,7 +134,9 @@ describe('POST /api/verdicts', () => {
   });
 
   it('when a number is not finite (1e999 in JSON), responds 422 naming the field', async () => {
-    const res = await request(app).post('/api/verdicts').set('Content-Type', 'application/json')
+    const res = await request(app)
+      .post('/api/verdicts')
+      .set('Content-Type', 'application/json')
       .send('{"spec":{"min":1,"max":2,"unit":"ohm"},"reading":{"value":1e999,"unit":"ohm"}}');
     expect(res.status).toBe(422);
     expect(res.body.errors[0].path).toMatch(/^reading/);

@@ -1,5 +1,5 @@
 import { Stack } from 'expo-router';
-import { useHeaderOptions } from '../../lib/theme/use-header-options';
+import { useHeaderOptions } from '@/lib/theme/use-header-options';
 
 /**
  * The sign-in pages. The group keeps their URLs short (/sign-in, /verify …); the root

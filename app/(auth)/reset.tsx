@@ -1,12 +1,12 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { FormAlert } from '../../components/account/form-alert';
-import { FormPanel } from '../../components/account/form-panel';
-import { formFailure } from '../../components/account/form-state';
-import { ResetPasswordForm } from '../../components/account/reset-password-form';
-import { Button } from '../../components/ui/button';
-import { Screen } from '../../components/ui/screen';
-import { ApiError } from '../../lib/api/client';
-import { useResetPasswordMutation } from '../../lib/hooks/use-auth';
+import { FormAlert } from '@/components/account/form-alert';
+import { FormPanel } from '@/components/account/form-panel';
+import { formFailure } from '@/components/account/form-state';
+import { ResetPasswordForm } from '@/components/account/reset-password-form';
+import { Button } from '@/components/ui/button';
+import { Screen } from '@/components/ui/screen';
+import { ApiError } from '@/lib/api/client';
+import { useResetPasswordMutation } from '@/lib/hooks/use-auth';
 
 const LINK_CODES = new Set(['invalid_token', 'token_used', 'token_expired']);
 
@@ -15,7 +15,14 @@ export default function ResetScreen() {
   const { token } = useLocalSearchParams<{ token?: string }>();
   const router = useRouter();
   const reset = useResetPasswordMutation();
-  const newLink = <Button label="Ask for a new link" variant="secondary" onPress={() => router.replace('/forgot')} testID="reset-new-link" />;
+  const newLink = (
+    <Button
+      label="Ask for a new link"
+      variant="secondary"
+      onPress={() => router.replace('/forgot')}
+      testID="reset-new-link"
+    />
+  );
 
   if (!token) {
     return (
@@ -31,7 +38,10 @@ export default function ResetScreen() {
     return (
       <Screen testID="reset-screen">
         <FormPanel title="Password changed" testID="reset-done">
-          <FormAlert tone="success" message="Your new password is set, and every device that was signed in has been signed out." />
+          <FormAlert
+            tone="success"
+            message="Your new password is set, and every device that was signed in has been signed out."
+          />
           <Button label="Sign in" onPress={() => router.replace('/sign-in')} />
         </FormPanel>
       </Screen>

@@ -1,14 +1,14 @@
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
-import { FormPanel } from '../../components/account/form-panel';
-import { formFailure } from '../../components/account/form-state';
-import { SignInForm } from '../../components/account/sign-in-form';
-import { Button } from '../../components/ui/button';
-import { Screen } from '../../components/ui/screen';
-import { Text } from '../../components/ui/text';
-import { useSignInMutation } from '../../lib/hooks/use-auth';
-import { useSession } from '../../lib/session/session-provider';
-import { Spacing } from '../../lib/theme';
+import { FormPanel } from '@/components/account/form-panel';
+import { formFailure } from '@/components/account/form-state';
+import { SignInForm } from '@/components/account/sign-in-form';
+import { Button } from '@/components/ui/button';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { useSignInMutation } from '@/lib/hooks/use-auth';
+import { useSession } from '@/lib/session/session-provider';
+import { Spacing } from '@/lib/theme';
 
 export default function SignInScreen() {
   const router = useRouter();
@@ -28,7 +28,10 @@ export default function SignInScreen() {
   }
   return (
     <Screen testID="sign-in-screen">
-      <FormPanel title="Sign in" intro="Looking up specs needs no account; signing in lets you propose corrections and curate.">
+      <FormPanel
+        title="Sign in"
+        intro="Looking up specs needs no account; signing in lets you propose corrections and curate."
+      >
         <SignInForm
           pending={signIn.isPending}
           failure={formFailure(signIn.error)}
@@ -36,8 +39,18 @@ export default function SignInScreen() {
         />
         <View style={styles.links}>
           <Text color="textMuted">New here?</Text>
-          <Button label="Create an account" variant="secondary" onPress={() => router.push('/sign-up')} testID="to-sign-up" />
-          <Button label="Forgot your password?" variant="quiet" onPress={() => router.push('/forgot')} testID="to-forgot" />
+          <Button
+            label="Create an account"
+            variant="secondary"
+            onPress={() => router.push('/sign-up')}
+            testID="to-sign-up"
+          />
+          <Button
+            label="Forgot your password?"
+            variant="quiet"
+            onPress={() => router.push('/forgot')}
+            testID="to-forgot"
+          />
         </View>
       </FormPanel>
     </Screen>

@@ -1,14 +1,14 @@
 import { useEffect, useRef } from 'react';
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { FormAlert } from '../../components/account/form-alert';
-import { FormPanel } from '../../components/account/form-panel';
-import { formFailure } from '../../components/account/form-state';
-import { Button } from '../../components/ui/button';
-import { Screen } from '../../components/ui/screen';
-import { Text } from '../../components/ui/text';
-import { LoadingState } from '../../components/ui/states';
-import { ApiError } from '../../lib/api/client';
-import { useVerifyEmailMutation } from '../../lib/hooks/use-auth';
+import { FormAlert } from '@/components/account/form-alert';
+import { FormPanel } from '@/components/account/form-panel';
+import { formFailure } from '@/components/account/form-state';
+import { Button } from '@/components/ui/button';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { LoadingState } from '@/components/ui/states';
+import { ApiError } from '@/lib/api/client';
+import { useVerifyEmailMutation } from '@/lib/hooks/use-auth';
 
 /** Opened from the link in the verification e-mail: confirms the address once, on arrival. */
 export default function VerifyScreen() {
@@ -28,7 +28,12 @@ export default function VerifyScreen() {
   const newLink = (variant: 'primary' | 'secondary' = 'primary') => (
     <>
       <Text color="textMuted">A password-reset link confirms the address too: ask for one and choose a password.</Text>
-      <Button label="Send me a new link" variant={variant} onPress={() => router.replace('/forgot')} testID="verify-new-link" />
+      <Button
+        label="Send me a new link"
+        variant={variant}
+        onPress={() => router.replace('/forgot')}
+        testID="verify-new-link"
+      />
     </>
   );
 
@@ -46,7 +51,10 @@ export default function VerifyScreen() {
     return (
       <Screen testID="verify-screen">
         <FormPanel title="Address confirmed" testID="verify-done">
-          <FormAlert tone="success" message={`Thank you, ${verify.data.user.displayName}: ${verify.data.user.email} is confirmed. You can sign in now.`} />
+          <FormAlert
+            tone="success"
+            message={`Thank you, ${verify.data.user.displayName}: ${verify.data.user.email} is confirmed. You can sign in now.`}
+          />
           <Button label="Sign in" onPress={toSignIn} testID="verify-sign-in" />
         </FormPanel>
       </Screen>
@@ -67,5 +75,9 @@ export default function VerifyScreen() {
       </Screen>
     );
   }
-  return <Screen testID="verify-screen"><LoadingState label="Confirming your address" /></Screen>;
+  return (
+    <Screen testID="verify-screen">
+      <LoadingState label="Confirming your address" />
+    </Screen>
+  );
 }

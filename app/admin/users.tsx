@@ -1,36 +1,47 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
-import { AuditList } from '../../components/account/audit-list';
-import { FormAlert } from '../../components/account/form-alert';
-import { FormPanel } from '../../components/account/form-panel';
-import { formFailure } from '../../components/account/form-state';
-import { UserRow } from '../../components/account/user-row';
-import { Button } from '../../components/ui/button';
-import { Card } from '../../components/ui/card';
-import { Screen } from '../../components/ui/screen';
-import { Text } from '../../components/ui/text';
-import { TextField } from '../../components/ui/text-field';
-import { EmptyState, ErrorState, LoadingState } from '../../components/ui/states';
-import { describeError } from '../../lib/api/describe-error';
-import type { UserDto } from '../../lib/contracts/auth';
-import { useUpdateUserMutation, useUserAuditQuery, useUsersQuery } from '../../lib/hooks/use-auth';
-import { useDebouncedValue } from '../../lib/hooks/use-debounced-value';
-import { useSession } from '../../lib/session/session-provider';
-import { Spacing } from '../../lib/theme';
-import { useIsWide } from '../../lib/theme/use-theme';
+import { AuditList } from '@/components/account/audit-list';
+import { FormAlert } from '@/components/account/form-alert';
+import { FormPanel } from '@/components/account/form-panel';
+import { formFailure } from '@/components/account/form-state';
+import { UserRow } from '@/components/account/user-row';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
+import { describeError } from '@/lib/api/describe-error';
+import type { UserDto } from '@/lib/contracts/auth';
+import { useUpdateUserMutation, useUserAuditQuery, useUsersQuery } from '@/lib/hooks/use-auth';
+import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import { useSession } from '@/lib/session/session-provider';
+import { Spacing } from '@/lib/theme';
+import { useIsWide } from '@/lib/theme/use-theme';
 
 export default function UsersScreen() {
   const router = useRouter();
   const session = useSession();
-  if (session.status === 'restoring') return <Screen><LoadingState label="Checking your account" /></Screen>;
+  if (session.status === 'restoring')
+    return (
+      <Screen>
+        <LoadingState label="Checking your account" />
+      </Screen>
+    );
   if (!session.can('admin')) {
     return (
       <Screen testID="users-screen">
-        <FormPanel title="Admins only" testID="admins-only" intro="Managing accounts and roles is for administrators. Ask an admin if you need another role.">
-          {session.user
-            ? <Button label="Back to the library" onPress={() => router.replace('/')} />
-            : <Button label="Sign in" onPress={() => router.push('/sign-in')} />}
+        <FormPanel
+          title="Admins only"
+          testID="admins-only"
+          intro="Managing accounts and roles is for administrators. Ask an admin if you need another role."
+        >
+          {session.user ? (
+            <Button label="Back to the library" onPress={() => router.replace('/')} />
+          ) : (
+            <Button label="Sign in" onPress={() => router.push('/sign-in')} />
+          )}
         </FormPanel>
       </Screen>
     );
@@ -50,12 +61,19 @@ function UserAdmin({ selfId }: { selfId: number }) {
   const list = () => {
     if (users.isPending) return <LoadingState label="Loading users" />;
     if (users.error) return <ErrorState message={describeError(users.error)} onRetry={users.refetch} />;
-    if (users.data.length === 0) return <EmptyState message={text.trim() ? `No account matches “${text.trim()}”.` : 'No accounts yet.'} />;
+    if (users.data.length === 0)
+      return <EmptyState message={text.trim() ? `No account matches “${text.trim()}”.` : 'No accounts yet.'} />;
     return users.data.map((u) => (
       <View key={u.id} style={styles.item}>
-        <UserRow user={u} isSelf={u.id === selfId} busy={busyId === u.id} selected={selected?.id === u.id}
-          onRole={(role) => update.mutate({ id: u.id, role })} onDisabled={(disabled) => update.mutate({ id: u.id, disabled })}
-          onSelect={() => toggle(u)} />
+        <UserRow
+          user={u}
+          isSelf={u.id === selfId}
+          busy={busyId === u.id}
+          selected={selected?.id === u.id}
+          onRole={(role) => update.mutate({ id: u.id, role })}
+          onDisabled={(disabled) => update.mutate({ id: u.id, disabled })}
+          onSelect={() => toggle(u)}
+        />
         {!wide && selected?.id === u.id ? <AuditSection user={u} /> : null}
       </View>
     ));
@@ -65,14 +83,38 @@ function UserAdmin({ selfId }: { selfId: number }) {
     <Screen testID="users-screen">
       <View style={styles.intro}>
         <Text variant="title">Users and roles</Text>
-        <Text color="textMuted">Contributors propose corrections, editors curate the library, admins also manage accounts. Every change is recorded.</Text>
+        <Text color="textMuted">
+          Contributors propose corrections, editors curate the library, admins also manage accounts. Every change is
+          recorded.
+        </Text>
       </View>
-      <TextField label="Search users" placeholder="Name or e-mail address" value={text} onChangeText={setText}
-        autoCapitalize="none" autoCorrect={false} inputMode="search" testID="users-search" style={styles.search} />
-      {update.error ? <FormAlert tone="error" message={formFailure(update.error)!.message} testID="users-error" /> : null}
+      <TextField
+        label="Search users"
+        placeholder="Name or e-mail address"
+        value={text}
+        onChangeText={setText}
+        autoCapitalize="none"
+        autoCorrect={false}
+        inputMode="search"
+        testID="users-search"
+        style={styles.search}
+      />
+      {update.error ? (
+        <FormAlert tone="error" message={formFailure(update.error)!.message} testID="users-error" />
+      ) : null}
       <View style={[styles.columns, wide && styles.columnsWide]}>
-        <View style={styles.main} testID="users-list">{list()}</View>
-        {wide ? <View style={styles.side}>{selected ? <AuditSection user={selected} /> : <EmptyState message="Choose “Show history” on an account to see its changes." />}</View> : null}
+        <View style={styles.main} testID="users-list">
+          {list()}
+        </View>
+        {wide ? (
+          <View style={styles.side}>
+            {selected ? (
+              <AuditSection user={selected} />
+            ) : (
+              <EmptyState message="Choose “Show history” on an account to see its changes." />
+            )}
+          </View>
+        ) : null}
       </View>
     </Screen>
   );

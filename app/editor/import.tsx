@@ -1,22 +1,21 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
-import { CommitPanel } from '../../components/curation/commit-panel';
-import { EditorGate } from '../../components/curation/editor-gate';
-import { ImportCounts } from '../../components/curation/import-counts';
-import { ImportPreview } from '../../components/curation/import-preview';
-import { LibraryFiles } from '../../components/curation/library-files';
-import { RecentImports } from '../../components/curation/recent-imports';
-import { UploadPanel } from '../../components/curation/upload-panel';
-import { MainAndSide } from '../../components/ui/main-and-side';
-import { Screen } from '../../components/ui/screen';
-import { Text } from '../../components/ui/text';
-import { ErrorState, LoadingState } from '../../components/ui/states';
-import { describeError } from '../../lib/api/describe-error';
-import type { UploadFile } from '../../lib/api/upload';
-import { useCommitImportMutation, useImportQuery, useUploadImportMutation } from '../../lib/hooks/use-curation';
-import { Spacing } from '../../lib/theme';
-import { useIsWide } from '../../lib/theme/use-theme';
+import { CommitPanel } from '@/components/curation/commit-panel';
+import { EditorGate } from '@/components/curation/editor-gate';
+import { ImportCounts } from '@/components/curation/import-counts';
+import { ImportPreview } from '@/components/curation/import-preview';
+import { LibraryFiles } from '@/components/curation/library-files';
+import { RecentImports } from '@/components/curation/recent-imports';
+import { UploadPanel } from '@/components/curation/upload-panel';
+import { MainAndSide } from '@/components/ui/main-and-side';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { ErrorState, LoadingState } from '@/components/ui/states';
+import { describeError } from '@/lib/api/describe-error';
+import type { UploadFile } from '@/lib/api/upload';
+import { useCommitImportMutation, useImportQuery, useUploadImportMutation } from '@/lib/hooks/use-curation';
+import { useIsWide } from '@/lib/theme/use-theme';
 
 /** Upload a CSV, read the dry run, commit once. The batch id sits in the address, so a reload keeps the preview. */
 export default function ImportScreen() {
@@ -30,7 +29,12 @@ export default function ImportScreen() {
   const preview = useImportQuery(batchId, offset);
   const commit = useCommitImportMutation(batchId ?? 0);
 
-  const open = (id: number) => { setOffset(0); commit.reset(); upload.reset(); router.setParams({ batch: String(id) }); };
+  const open = (id: number) => {
+    setOffset(0);
+    commit.reset();
+    upload.reset();
+    router.setParams({ batch: String(id) });
+  };
   const pick = (file: UploadFile) => {
     setFileName(file.name);
     upload.mutate(file, { onSuccess: (p) => open(p.id) });
@@ -45,11 +49,21 @@ export default function ImportScreen() {
     return (
       <>
         <View style={styles.title}>
-          <Text variant="heading">Import #{p.id}: {p.fileName}</Text>
-          <Text variant="small" color="textMuted">Uploaded by {p.uploaderName} · {new Date(p.createdAt).toLocaleString()}</Text>
+          <Text variant="heading">
+            Import #{p.id}: {p.fileName}
+          </Text>
+          <Text variant="small" color="textMuted">
+            Uploaded by {p.uploaderName} · {new Date(p.createdAt).toLocaleString()}
+          </Text>
         </View>
         <ImportCounts counts={p.counts} />
-        <CommitPanel preview={p} committing={commit.isPending} error={commit.error} onCommit={() => commit.mutate()} onOpenSpec={openSpec} />
+        <CommitPanel
+          preview={p}
+          committing={commit.isPending}
+          error={commit.error}
+          onCommit={() => commit.mutate()}
+          onOpenSpec={openSpec}
+        />
         <ImportPreview preview={p} onOpenSpec={openSpec} onPage={setOffset} />
       </>
     );
@@ -61,18 +75,24 @@ export default function ImportScreen() {
       <EditorGate reason="to import specs">
         <Text variant="title">Import specs from CSV</Text>
         <MainAndSide
-          main={(
+          main={
             <>
-              <UploadPanel uploading={upload.isPending} progress={upload.progress} fileName={fileName} error={upload.error} onPick={pick} />
+              <UploadPanel
+                uploading={upload.isPending}
+                progress={upload.progress}
+                fileName={fileName}
+                error={upload.error}
+                onPick={pick}
+              />
               {batchView()}
             </>
-          )}
-          side={(
+          }
+          side={
             <>
               <RecentImports selectedId={batchId} onOpen={open} />
               <LibraryFiles wide={wide} />
             </>
-          )}
+          }
         />
       </EditorGate>
     </Screen>

@@ -1,21 +1,21 @@
 import { StyleSheet, View } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
-import { JobActions } from '../../components/jobs/job-actions';
-import { JobNotes } from '../../components/jobs/job-notes';
-import { JobSummary } from '../../components/jobs/job-summary';
-import { QueueNotice } from '../../components/jobs/queue-notice';
-import { ReadingGroups } from '../../components/jobs/reading-groups';
-import { SignInPrompt } from '../../components/jobs/sign-in-prompt';
-import { Screen } from '../../components/ui/screen';
-import { EmptyState, ErrorState, LoadingState } from '../../components/ui/states';
-import { ApiError } from '../../lib/api/client';
-import { describeError } from '../../lib/api/describe-error';
-import type { ReadingDto } from '../../lib/contracts/jobs';
-import { useDownloadCsvMutation, useJobQuery, useUpdateJobMutation } from '../../lib/hooks/use-jobs';
-import { useReadingQueue } from '../../lib/hooks/use-reading-queue';
-import { useSession } from '../../lib/session/session-provider';
-import { Spacing } from '../../lib/theme';
-import { useIsWide } from '../../lib/theme/use-theme';
+import { JobActions } from '@/components/jobs/job-actions';
+import { JobNotes } from '@/components/jobs/job-notes';
+import { JobSummary } from '@/components/jobs/job-summary';
+import { QueueNotice } from '@/components/jobs/queue-notice';
+import { ReadingGroups } from '@/components/jobs/reading-groups';
+import { SignInPrompt } from '@/components/jobs/sign-in-prompt';
+import { Screen } from '@/components/ui/screen';
+import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
+import { ApiError } from '@/lib/api/client';
+import { describeError } from '@/lib/api/describe-error';
+import type { ReadingDto } from '@/lib/contracts/jobs';
+import { useDownloadCsvMutation, useJobQuery, useUpdateJobMutation } from '@/lib/hooks/use-jobs';
+import { useReadingQueue } from '@/lib/hooks/use-reading-queue';
+import { useSession } from '@/lib/session/session-provider';
+import { Spacing } from '@/lib/theme';
+import { useIsWide } from '@/lib/theme/use-theme';
 
 const jobError = (err: unknown) =>
   err instanceof ApiError && err.status === 404 ? 'There is no job with this number among yours.' : describeError(err);
@@ -32,25 +32,58 @@ export default function JobSheetScreen() {
   const csv = useDownloadCsvMutation();
   const queue = useReadingQueue();
 
-  if (session.status === 'restoring') return <Screen><LoadingState label="Checking your session" /></Screen>;
-  if (session.status !== 'signed-in') return <Screen testID="job-sheet"><SignInPrompt /></Screen>;
-  if (!(id > 0)) return <Screen><ErrorState message="This address does not name a job." /></Screen>;
-  if (job.isPending) return <Screen><LoadingState label="Loading the job sheet" /></Screen>;
-  if (job.error) return <Screen><ErrorState message={jobError(job.error)} onRetry={job.refetch} /></Screen>;
+  if (session.status === 'restoring')
+    return (
+      <Screen>
+        <LoadingState label="Checking your session" />
+      </Screen>
+    );
+  if (session.status !== 'signed-in')
+    return (
+      <Screen testID="job-sheet">
+        <SignInPrompt />
+      </Screen>
+    );
+  if (!(id > 0))
+    return (
+      <Screen>
+        <ErrorState message="This address does not name a job." />
+      </Screen>
+    );
+  if (job.isPending)
+    return (
+      <Screen>
+        <LoadingState label="Loading the job sheet" />
+      </Screen>
+    );
+  if (job.error)
+    return (
+      <Screen>
+        <ErrorState message={jobError(job.error)} onRetry={job.refetch} />
+      </Screen>
+    );
 
   const j = job.data;
   const pending = queue.pendingFor(id);
   const open = j.status === 'open';
   const retake = (r: ReadingDto) =>
-    router.push(r.specId !== null ? `/specs/${r.specId}?job=${id}&retake=${r.id}` : `/calculator?job=${id}&retake=${r.id}`);
+    router.push(
+      r.specId !== null ? `/specs/${r.specId}?job=${id}&retake=${r.id}` : `/calculator?job=${id}&retake=${r.id}`,
+    );
   const side = (
     <>
-      <JobNotes notes={j.notes} pending={notes.isPending} error={notes.error ? describeError(notes.error) : null}
-        onSave={(text) => notes.mutate({ id, notes: text })} />
+      <JobNotes
+        notes={j.notes}
+        pending={notes.isPending}
+        error={notes.error ? describeError(notes.error) : null}
+        onSave={(text) => notes.mutate({ id, notes: text })}
+      />
       <JobActions
         open={open}
         onReport={() => router.push(`/jobs/${id}/report`)}
-        onCsv={() => csv.mutate(id)} csvPending={csv.isPending} csvError={csv.error ? describeError(csv.error) : null}
+        onCsv={() => csv.mutate(id)}
+        csvPending={csv.isPending}
+        csvError={csv.error ? describeError(csv.error) : null}
         onModelSheet={j.modelId !== null ? () => router.push(`/models/${j.modelId}`) : undefined}
         onCalculator={() => router.push(`/calculator?job=${id}`)}
       />
@@ -63,9 +96,11 @@ export default function JobSheetScreen() {
       <QueueNotice pending={pending} rejected={queue.rejectedFor(id)} onDismiss={queue.dismiss} />
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={styles.main}>
-          {j.readings.length + pending.length === 0
-            ? <EmptyState message="No readings yet. Check a reading on a spec card or in the calculator, then choose “Add to job”." />
-            : <ReadingGroups readings={j.readings} pending={pending} onRetake={open ? retake : undefined} />}
+          {j.readings.length + pending.length === 0 ? (
+            <EmptyState message="No readings yet. Check a reading on a spec card or in the calculator, then choose “Add to job”." />
+          ) : (
+            <ReadingGroups readings={j.readings} pending={pending} onRetake={open ? retake : undefined} />
+          )}
         </View>
         <View style={[styles.side, wide && styles.sideWide]}>{side}</View>
       </View>

@@ -1,25 +1,29 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
-import { formFailure } from '../../components/account/form-state';
-import { JobList } from '../../components/jobs/job-list';
-import { NewJobForm } from '../../components/jobs/new-job-form';
-import { SignInPrompt } from '../../components/jobs/sign-in-prompt';
-import { Button } from '../../components/ui/button';
-import { ChoiceRow } from '../../components/ui/choice-row';
-import { Screen } from '../../components/ui/screen';
-import { EmptyState, ErrorState, LoadingState } from '../../components/ui/states';
-import { Text } from '../../components/ui/text';
-import { TextField } from '../../components/ui/text-field';
-import { describeError } from '../../lib/api/describe-error';
-import { useDebouncedValue } from '../../lib/hooks/use-debounced-value';
-import { useCreateJobMutation, useJobsQuery } from '../../lib/hooks/use-jobs';
-import { useModelsQuery } from '../../lib/hooks/use-library';
-import { useSession } from '../../lib/session/session-provider';
-import { Spacing } from '../../lib/theme';
+import { formFailure } from '@/components/account/form-state';
+import { JobList } from '@/components/jobs/job-list';
+import { NewJobForm } from '@/components/jobs/new-job-form';
+import { SignInPrompt } from '@/components/jobs/sign-in-prompt';
+import { Button } from '@/components/ui/button';
+import { ChoiceRow } from '@/components/ui/choice-row';
+import { Screen } from '@/components/ui/screen';
+import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
+import { Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import { describeError } from '@/lib/api/describe-error';
+import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
+import { useCreateJobMutation, useJobsQuery } from '@/lib/hooks/use-jobs';
+import { useModelsQuery } from '@/lib/hooks/use-library';
+import { useSession } from '@/lib/session/session-provider';
+import { Spacing } from '@/lib/theme';
 
 type StatusFilter = 'all' | 'open' | 'closed';
-const FILTERS: Array<{ value: StatusFilter; label: string }> = [{ value: 'all', label: 'All' }, { value: 'open', label: 'Open' }, { value: 'closed', label: 'Closed' }];
+const FILTERS: { value: StatusFilter; label: string }[] = [
+  { value: 'all', label: 'All' },
+  { value: 'open', label: 'Open' },
+  { value: 'closed', label: 'Closed' },
+];
 
 export default function JobsScreen() {
   const router = useRouter();
@@ -30,17 +34,37 @@ export default function JobsScreen() {
   const q = useDebouncedValue(text, 250);
   const open = (id: number) => router.push(`/jobs/${id}`);
 
-  if (session.status === 'restoring') return <Screen><LoadingState label="Checking your session" /></Screen>;
-  if (session.status !== 'signed-in') return <Screen testID="jobs-screen"><SignInPrompt /></Screen>;
+  if (session.status === 'restoring')
+    return (
+      <Screen>
+        <LoadingState label="Checking your session" />
+      </Screen>
+    );
+  if (session.status !== 'signed-in')
+    return (
+      <Screen testID="jobs-screen">
+        <SignInPrompt />
+      </Screen>
+    );
   return (
     <Screen testID="jobs-screen">
       <View style={styles.head}>
-        <Text variant="title" style={styles.grow}>My jobs</Text>
+        <Text variant="title" style={styles.grow}>
+          My jobs
+        </Text>
         {creating ? null : <Button label="New job" onPress={() => setCreating(true)} testID="new-job" />}
       </View>
       {creating ? <NewJobPanel onCancel={() => setCreating(false)} onCreated={open} /> : null}
-      <TextField label="Search my jobs" placeholder="Machine, VIN, customer, notes" value={text} onChangeText={setText}
-        autoCapitalize="none" autoCorrect={false} inputMode="search" testID="jobs-search" />
+      <TextField
+        label="Search my jobs"
+        placeholder="Machine, VIN, customer, notes"
+        value={text}
+        onChangeText={setText}
+        autoCapitalize="none"
+        autoCorrect={false}
+        inputMode="search"
+        testID="jobs-search"
+      />
       <ChoiceRow label="Show" options={FILTERS} value={status} onChange={setStatus} />
       <JobsArea q={q} status={status} onOpen={open} />
     </Screen>
@@ -52,7 +76,15 @@ function JobsArea({ q, status, onOpen }: { q: string; status: StatusFilter; onOp
   if (jobs.isPending) return <LoadingState label="Loading your jobs" />;
   if (jobs.error) return <ErrorState message={describeError(jobs.error)} onRetry={jobs.refetch} />;
   if (jobs.data.length === 0) {
-    return <EmptyState message={q.trim() || status !== 'all' ? 'No job matches. Clear the search or show all jobs.' : 'No jobs yet. Start one with “New job”, or add a reading from any calculator.'} />;
+    return (
+      <EmptyState
+        message={
+          q.trim() || status !== 'all'
+            ? 'No job matches. Clear the search or show all jobs.'
+            : 'No jobs yet. Start one with “New job”, or add a reading from any calculator.'
+        }
+      />
+    );
   }
   return <JobList jobs={jobs.data} onOpen={onOpen} />;
 }

@@ -1,22 +1,22 @@
 import { Pressable } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
-import { BatteryCharge } from '../../components/calculator/battery-charge';
-import { Calculator } from '../../components/calculator/calculator';
-import { Citation } from '../../components/library/citation';
-import { ProposeLinks } from '../../components/corrections/propose-links';
-import { modelTitle } from '../../lib/format/model-title';
-import { RevisionHistory } from '../../components/curation/revision-history';
-import { EditSpecButton } from '../../components/curation/edit-spec-button';
-import { SafetyNotes } from '../../components/library/safety-notes';
-import { SpecValues } from '../../components/library/spec-values';
-import { Screen } from '../../components/ui/screen';
-import { TwoColumns } from '../../components/ui/two-columns';
-import { Text } from '../../components/ui/text';
-import { ErrorState, LoadingState } from '../../components/ui/states';
-import { describeError } from '../../lib/api/describe-error';
-import { useSpecQuery } from '../../lib/hooks/use-library';
-import type { CanonicalUnit } from '../../lib/units';
-import { useIsWide } from '../../lib/theme/use-theme';
+import { BatteryCharge } from '@/components/calculator/battery-charge';
+import { Calculator } from '@/components/calculator/calculator';
+import { Citation } from '@/components/library/citation';
+import { ProposeLinks } from '@/components/corrections/propose-links';
+import { modelTitle } from '@/lib/format/model-title';
+import { RevisionHistory } from '@/components/curation/revision-history';
+import { EditSpecButton } from '@/components/curation/edit-spec-button';
+import { SafetyNotes } from '@/components/library/safety-notes';
+import { SpecValues } from '@/components/library/spec-values';
+import { Screen } from '@/components/ui/screen';
+import { TwoColumns } from '@/components/ui/two-columns';
+import { Text } from '@/components/ui/text';
+import { ErrorState, LoadingState } from '@/components/ui/states';
+import { describeError } from '@/lib/api/describe-error';
+import { useSpecQuery } from '@/lib/hooks/use-library';
+import type { CanonicalUnit } from '@/lib/units';
+import { useIsWide } from '@/lib/theme/use-theme';
 
 export default function SpecCardScreen() {
   const { specId } = useLocalSearchParams<{ specId: string }>();
@@ -24,15 +24,32 @@ export default function SpecCardScreen() {
   const wide = useIsWide();
   const spec = useSpecQuery(Number(specId));
 
-  if (spec.isPending) return <Screen><LoadingState label="Loading the spec" /></Screen>;
-  if (spec.error) return <Screen><ErrorState message={describeError(spec.error)} onRetry={spec.refetch} /></Screen>;
+  if (spec.isPending)
+    return (
+      <Screen>
+        <LoadingState label="Loading the spec" />
+      </Screen>
+    );
+  if (spec.error)
+    return (
+      <Screen>
+        <ErrorState message={describeError(spec.error)} onRetry={spec.refetch} />
+      </Screen>
+    );
   const s = spec.data;
   const check = (
     <>
       <SafetyNotes component={s.component.name} parameter={s.parameter} />
       <Calculator
         kind={s.quantityKind}
-        spec={{ min: s.min, nominal: s.nominal, max: s.max, unit: s.unit as CanonicalUnit, refTempC: s.refTempC, material: s.material }}
+        spec={{
+          min: s.min,
+          nominal: s.nominal,
+          max: s.max,
+          unit: s.unit as CanonicalUnit,
+          refTempC: s.refTempC,
+          material: s.material,
+        }}
       />
       {/rest voltage|open-circuit voltage/i.test(s.parameter) ? <BatteryCharge /> : null}
     </>
@@ -47,12 +64,24 @@ export default function SpecCardScreen() {
   return (
     <Screen testID="spec-screen">
       <Stack.Screen options={{ title: s.parameter }} />
-      <Pressable accessibilityRole="link" accessibilityLabel={`Open model sheet ${modelTitle(s.model)}`} onPress={() => router.push(`/models/${s.model.id}`)}>
+      <Pressable
+        accessibilityRole="link"
+        accessibilityLabel={`Open model sheet ${modelTitle(s.model)}`}
+        onPress={() => router.push(`/models/${s.model.id}`)}
+      >
         <Text color="primary">{modelTitle(s.model)}</Text>
       </Pressable>
       <EditSpecButton specId={s.id} />
       {/* On a phone the calculator comes right after the values; on a wide screen it has the right column. */}
-      <TwoColumns first={<><SpecValues spec={s} />{wide ? reference : check}</>} second={wide ? check : reference} />
+      <TwoColumns
+        first={
+          <>
+            <SpecValues spec={s} />
+            {wide ? reference : check}
+          </>
+        }
+        second={wide ? check : reference}
+      />
     </Screen>
   );
 }

@@ -1,8 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import type { RoleValue, UserDto } from '../../lib/contracts/auth';
-import { Spacing } from '../../lib/theme';
+import type { RoleValue, UserDto } from '@/lib/contracts/auth';
+import { Spacing } from '@/lib/theme';
 
 export const ROLE_LABELS: Record<RoleValue, string> = { contributor: 'Contributor', editor: 'Editor', admin: 'Admin' };
 const ROLE_MEANS: Record<RoleValue, string> = {
@@ -17,12 +17,18 @@ export type AccountSummaryProps = { user: UserDto };
 export function AccountSummary({ user }: AccountSummaryProps) {
   return (
     <Card testID="account-summary">
-      <Text variant="label" color="textMuted">Signed in as</Text>
+      <Text variant="label" color="textMuted">
+        Signed in as
+      </Text>
       <Text variant="title">{user.displayName}</Text>
       <Text>{user.email}</Text>
       <View style={styles.role}>
-        <Text variant="label" color="textMuted">Role</Text>
-        <Text variant="heading" testID="account-role">{ROLE_LABELS[user.role]}</Text>
+        <Text variant="label" color="textMuted">
+          Role
+        </Text>
+        <Text variant="heading" testID="account-role">
+          {ROLE_LABELS[user.role]}
+        </Text>
         <Text color="textMuted">{ROLE_MEANS[user.role]}</Text>
       </View>
     </Card>

@@ -1,8 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import { Text } from '../ui/text';
-import type { UserAuditDto } from '../../lib/contracts/auth';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { UserAuditDto } from '@/lib/contracts/auth';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 
 export type AuditListProps = { entries: UserAuditDto[] };
 
@@ -22,7 +22,9 @@ export function AuditList({ entries }: AuditListProps) {
       {entries.map((e) => (
         <View key={e.id} style={[styles.item, { borderColor: t.border }]} testID={`audit-${e.id}`}>
           <Text>{describeAudit(e)}</Text>
-          <Text variant="small" color="textMuted">{new Date(e.createdAt).toLocaleString()} · by {e.actorName}</Text>
+          <Text variant="small" color="textMuted">
+            {new Date(e.createdAt).toLocaleString()} · by {e.actorName}
+          </Text>
         </View>
       ))}
     </View>

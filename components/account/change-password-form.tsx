@@ -1,8 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import { Button } from '../ui/button';
 import { TextField } from '../ui/text-field';
-import { ChangePasswordBody } from '../../lib/contracts/auth';
-import { Spacing } from '../../lib/theme';
+import { ChangePasswordBody } from '@/lib/contracts/auth';
+import { Spacing } from '@/lib/theme';
 import { FormAlert } from './form-alert';
 import { useFormState, type FormFailure } from './form-state';
 
@@ -28,15 +28,43 @@ export function ChangePasswordForm({ onSubmit, pending = false, failure, done }:
   };
   return (
     <View style={styles.form} testID="change-password-form">
-      <TextField label="Current password" {...form.field('currentPassword')} error={error('currentPassword')}
-        secureTextEntry autoComplete="current-password" autoCapitalize="none" testID="current-password" />
-      <TextField label="New password" {...form.field('newPassword')} error={error('newPassword')}
-        hint="At least 12 characters. Other devices are signed out." secureTextEntry autoComplete="new-password" autoCapitalize="none" testID="new-password" />
-      <TextField label="New password again" {...form.field('confirm')} error={form.errors.confirm}
-        secureTextEntry autoComplete="new-password" autoCapitalize="none" onSubmitEditing={submit} testID="confirm-password" />
+      <TextField
+        label="Current password"
+        {...form.field('currentPassword')}
+        error={error('currentPassword')}
+        secureTextEntry
+        autoComplete="current-password"
+        autoCapitalize="none"
+        testID="current-password"
+      />
+      <TextField
+        label="New password"
+        {...form.field('newPassword')}
+        error={error('newPassword')}
+        hint="At least 12 characters. Other devices are signed out."
+        secureTextEntry
+        autoComplete="new-password"
+        autoCapitalize="none"
+        testID="new-password"
+      />
+      <TextField
+        label="New password again"
+        {...form.field('confirm')}
+        error={form.errors.confirm}
+        secureTextEntry
+        autoComplete="new-password"
+        autoCapitalize="none"
+        onSubmitEditing={submit}
+        testID="confirm-password"
+      />
       {failure ? <FormAlert tone="error" message={failure.message} /> : null}
       {done && !failure ? <FormAlert tone="success" message={done} testID="password-changed" /> : null}
-      <Button label={pending ? 'Changing…' : 'Change password'} onPress={submit} disabled={pending} testID="change-password-submit" />
+      <Button
+        label={pending ? 'Changing…' : 'Change password'}
+        onPress={submit}
+        disabled={pending}
+        testID="change-password-submit"
+      />
     </View>
   );
 }

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import { Radius, Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { Radius, Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from '../ui/text';
 
 export type FormAlertProps = { tone: 'error' | 'success'; message: string; testID?: string };
@@ -8,11 +8,16 @@ export type FormAlertProps = { tone: 'error' | 'success'; message: string; testI
 /** One sentence about the whole form: why it failed, or that it worked. Announced to screen readers. */
 export function FormAlert({ tone, message, testID }: FormAlertProps) {
   const t = useTheme();
-  const colors = tone === 'error'
-    ? { bg: t.failSurface, border: t.fail, fg: 'fail' as const }
-    : { bg: t.passSurface, border: t.pass, fg: 'text' as const };
+  const colors =
+    tone === 'error'
+      ? { bg: t.failSurface, border: t.fail, fg: 'fail' as const }
+      : { bg: t.passSurface, border: t.pass, fg: 'text' as const };
   return (
-    <View accessibilityRole="alert" testID={testID} style={[styles.box, { backgroundColor: colors.bg, borderColor: colors.border }]}>
+    <View
+      accessibilityRole="alert"
+      testID={testID}
+      style={[styles.box, { backgroundColor: colors.bg, borderColor: colors.border }]}
+    >
       <Text color={colors.fg}>{message}</Text>
     </View>
   );

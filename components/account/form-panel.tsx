@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import { Spacing } from '../../lib/theme';
+import { Spacing } from '@/lib/theme';
 
 export type FormPanelProps = { title: string; intro?: string; children: ReactNode; testID?: string };
 
@@ -11,7 +11,9 @@ export function FormPanel({ title, intro, children, testID }: FormPanelProps) {
   return (
     <Card style={styles.panel} testID={testID}>
       <View style={styles.head}>
-        <Text variant="heading" accessibilityRole="header">{title}</Text>
+        <Text variant="heading" accessibilityRole="header">
+          {title}
+        </Text>
         {intro ? <Text color="textMuted">{intro}</Text> : null}
       </View>
       {children}

@@ -5,8 +5,8 @@
  */
 import { useState } from 'react';
 import type { z } from 'zod';
-import { ApiError } from '../../lib/api/client';
-import { describeError } from '../../lib/api/describe-error';
+import { ApiError } from '@/lib/api/client';
+import { describeError } from '@/lib/api/describe-error';
 
 export type FieldErrors = Partial<Record<string, string>>;
 export type FormFailure = { message: string; fields: FieldErrors };
@@ -22,7 +22,14 @@ export function zodFieldErrors(error: z.ZodError): FieldErrors {
 }
 
 // Account answers whose problem detail is written for the person at the form.
-const SPOKEN_CODES = new Set(['invalid_credentials', 'email_not_verified', 'account_disabled', 'invalid_token', 'token_used', 'token_expired']);
+const SPOKEN_CODES = new Set([
+  'invalid_credentials',
+  'email_not_verified',
+  'account_disabled',
+  'invalid_token',
+  'token_used',
+  'token_expired',
+]);
 
 /**
  * A failed account request as the form shows it. `rename` maps server field paths to

@@ -1,12 +1,16 @@
 import { StyleSheet, View } from 'react-native';
 import { Button } from '../ui/button';
 import { TextField } from '../ui/text-field';
-import { ResetBody } from '../../lib/contracts/auth';
-import { Spacing } from '../../lib/theme';
+import { ResetBody } from '@/lib/contracts/auth';
+import { Spacing } from '@/lib/theme';
 import { FormAlert } from './form-alert';
 import { useFormState, type FormFailure } from './form-state';
 
-export type ResetPasswordFormProps = { onSubmit: (password: string) => void; pending?: boolean; failure?: FormFailure | null };
+export type ResetPasswordFormProps = {
+  onSubmit: (password: string) => void;
+  pending?: boolean;
+  failure?: FormFailure | null;
+};
 
 const NewPasswordOnly = ResetBody.pick({ password: true });
 
@@ -20,12 +24,33 @@ export function ResetPasswordForm({ onSubmit, pending = false, failure }: ResetP
   };
   return (
     <View style={styles.form} testID="reset-form">
-      <TextField label="New password" {...form.field('password')} error={form.errors.password ?? failure?.fields.password}
-        hint="At least 12 characters." secureTextEntry autoComplete="new-password" autoCapitalize="none" testID="reset-password" />
-      <TextField label="New password again" {...form.field('confirm')} error={form.errors.confirm}
-        secureTextEntry autoComplete="new-password" autoCapitalize="none" onSubmitEditing={submit} testID="reset-confirm" />
+      <TextField
+        label="New password"
+        {...form.field('password')}
+        error={form.errors.password ?? failure?.fields.password}
+        hint="At least 12 characters."
+        secureTextEntry
+        autoComplete="new-password"
+        autoCapitalize="none"
+        testID="reset-password"
+      />
+      <TextField
+        label="New password again"
+        {...form.field('confirm')}
+        error={form.errors.confirm}
+        secureTextEntry
+        autoComplete="new-password"
+        autoCapitalize="none"
+        onSubmitEditing={submit}
+        testID="reset-confirm"
+      />
       {failure ? <FormAlert tone="error" message={failure.message} testID="reset-error" /> : null}
-      <Button label={pending ? 'Saving…' : 'Set the new password'} onPress={submit} disabled={pending} testID="reset-submit" />
+      <Button
+        label={pending ? 'Saving…' : 'Set the new password'}
+        onPress={submit}
+        disabled={pending}
+        testID="reset-submit"
+      />
     </View>
   );
 }

@@ -1,12 +1,16 @@
 import { StyleSheet, View } from 'react-native';
 import { Button } from '../ui/button';
 import { TextField } from '../ui/text-field';
-import { SignInBody } from '../../lib/contracts/auth';
-import { Spacing } from '../../lib/theme';
+import { SignInBody } from '@/lib/contracts/auth';
+import { Spacing } from '@/lib/theme';
 import { FormAlert } from './form-alert';
 import { useFormState, type FormFailure } from './form-state';
 
-export type SignInFormProps = { onSubmit: (values: SignInBody) => void; pending?: boolean; failure?: FormFailure | null };
+export type SignInFormProps = {
+  onSubmit: (values: SignInBody) => void;
+  pending?: boolean;
+  failure?: FormFailure | null;
+};
 
 export function SignInForm({ onSubmit, pending = false, failure }: SignInFormProps) {
   const form = useFormState({ email: '', password: '' });
@@ -17,10 +21,27 @@ export function SignInForm({ onSubmit, pending = false, failure }: SignInFormPro
   };
   return (
     <View style={styles.form} testID="sign-in-form">
-      <TextField label="E-mail address" {...form.field('email')} error={error('email')} testID="sign-in-email"
-        inputMode="email" keyboardType="email-address" autoComplete="email" autoCapitalize="none" autoCorrect={false} />
-      <TextField label="Password" {...form.field('password')} error={error('password')} testID="sign-in-password"
-        secureTextEntry autoComplete="current-password" autoCapitalize="none" onSubmitEditing={submit} />
+      <TextField
+        label="E-mail address"
+        {...form.field('email')}
+        error={error('email')}
+        testID="sign-in-email"
+        inputMode="email"
+        keyboardType="email-address"
+        autoComplete="email"
+        autoCapitalize="none"
+        autoCorrect={false}
+      />
+      <TextField
+        label="Password"
+        {...form.field('password')}
+        error={error('password')}
+        testID="sign-in-password"
+        secureTextEntry
+        autoComplete="current-password"
+        autoCapitalize="none"
+        onSubmitEditing={submit}
+      />
       {failure ? <FormAlert tone="error" message={failure.message} testID="sign-in-error" /> : null}
       <Button label={pending ? 'Signing in…' : 'Sign in'} onPress={submit} disabled={pending} testID="sign-in-submit" />
     </View>

@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import Svg, { Circle, Line, Rect, Text as SvgText } from 'react-native-svg';
-import { bandOf, scale } from '../../lib/calculator/band';
-import { formatNumber } from '../../lib/units';
-import type { VerdictResult } from '../../lib/verdict';
-import { Fonts } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { bandOf, scale } from '@/lib/calculator/band';
+import { formatNumber } from '@/lib/units';
+import type { VerdictResult } from '@/lib/verdict';
+import { Fonts } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from '../ui/text';
 
 const HEIGHT = 96;
@@ -27,29 +27,68 @@ export function BandPicture({ result }: { result: VerdictResult }) {
   const crowded = band.lower !== undefined && band.upper !== undefined && hi - lo < 90;
   const label = `Tolerance band: ${band.lower !== undefined ? `lower limit ${formatNumber(band.lower)}` : 'no lower limit'}, ${band.upper !== undefined ? `upper limit ${formatNumber(band.upper)}` : 'no upper limit'}, reading ${formatNumber(band.value)} ${result.unit}: ${result.verdict}`;
   return (
-    <View testID="band-picture" accessibilityRole="image" accessibilityLabel={label} onLayout={(e) => setWidth(e.nativeEvent.layout.width)} style={styles.wrap}>
+    <View
+      testID="band-picture"
+      accessibilityRole="image"
+      accessibilityLabel={label}
+      onLayout={(e) => setWidth(e.nativeEvent.layout.width)}
+      style={styles.wrap}
+    >
       {width > 0 && (
         <Svg width={width} height={HEIGHT}>
           <Rect x={0} y={AXIS_Y - 10} width={width} height={20} fill={t.failSurface} />
           <Rect x={lo} y={AXIS_Y - 10} width={Math.max(0, hi - lo)} height={20} fill={t.passSurface} />
           {band.marginal.map(([a, b]) => (
-            <Rect key={`${a}-${b}`} x={x(a)} y={AXIS_Y - 10} width={Math.max(1, x(b) - x(a))} height={20} fill={t.marginalSurface} stroke={t.marginal} strokeWidth={0.5} />
+            <Rect
+              key={`${a}-${b}`}
+              x={x(a)}
+              y={AXIS_Y - 10}
+              width={Math.max(1, x(b) - x(a))}
+              height={20}
+              fill={t.marginalSurface}
+              stroke={t.marginal}
+              strokeWidth={0.5}
+            />
           ))}
-          {[band.lower, band.upper].map((limit, i) => limit === undefined ? null : (
-            <LimitMark key={i} at={x(limit)} text={`${i === 0 ? 'min' : 'max'} ${formatNumber(limit)}`} color={t.text} width={width}
-              side={crowded ? (i === 0 ? 'left' : 'right') : 'centre'} />
-          ))}
+          {[band.lower, band.upper].map((limit, i) =>
+            limit === undefined ? null : (
+              <LimitMark
+                key={i}
+                at={x(limit)}
+                text={`${i === 0 ? 'min' : 'max'} ${formatNumber(limit)}`}
+                color={t.text}
+                width={width}
+                side={crowded ? (i === 0 ? 'left' : 'right') : 'centre'}
+              />
+            ),
+          )}
           {band.interval && (
-            <Line x1={x(band.interval[0])} x2={x(band.interval[1])} y1={AXIS_Y} y2={AXIS_Y} stroke={verdictColor} strokeWidth={4} strokeLinecap="round" />
+            <Line
+              x1={x(band.interval[0])}
+              x2={x(band.interval[1])}
+              y1={AXIS_Y}
+              y2={AXIS_Y}
+              stroke={verdictColor}
+              strokeWidth={4}
+              strokeLinecap="round"
+            />
           )}
           <Circle cx={x(band.value)} cy={AXIS_Y} r={7} fill={verdictColor} stroke={t.surface} strokeWidth={2} />
-          <SvgText x={clamp(x(band.value), 30, width - 30)} y={AXIS_Y + 30} fontSize={13} fontFamily={Fonts.semibold} fill={verdictColor} textAnchor="middle">
+          <SvgText
+            x={clamp(x(band.value), 30, width - 30)}
+            y={AXIS_Y + 30}
+            fontSize={13}
+            fontFamily={Fonts.semibold}
+            fill={verdictColor}
+            textAnchor="middle"
+          >
             {`${formatNumber(band.value)} ${result.unit} · ${result.verdict.toUpperCase()}`}
           </SvgText>
         </Svg>
       )}
       <Text variant="small" color="textMuted">
-        Green: inside the limits · amber: marginal zone{result.expandedUncertainty !== null ? ' (limit ± U)' : ' (near-limit band)'} · red: outside
+        Green: inside the limits · amber: marginal zone
+        {result.expandedUncertainty !== null ? ' (limit ± U)' : ' (near-limit band)'} · red: outside
         {band.interval ? ' · bar: reading ± U (k = 2)' : ''}
       </Text>
     </View>
@@ -58,13 +97,32 @@ export function BandPicture({ result }: { result: VerdictResult }) {
 
 type Side = 'left' | 'centre' | 'right';
 
-function LimitMark({ at, text, color, width, side }: { at: number; text: string; color: string; width: number; side: Side }) {
+function LimitMark({
+  at,
+  text,
+  color,
+  width,
+  side,
+}: {
+  at: number;
+  text: string;
+  color: string;
+  width: number;
+  side: Side;
+}) {
   const anchor = side === 'left' ? 'end' : side === 'right' ? 'start' : 'middle';
-  const x = side === 'left' ? Math.max(at - 3, 70) : side === 'right' ? Math.min(at + 3, width - 70) : clamp(at, 28, width - 28);
+  const x =
+    side === 'left'
+      ? Math.max(at - 3, 70)
+      : side === 'right'
+        ? Math.min(at + 3, width - 70)
+        : clamp(at, 28, width - 28);
   return (
     <>
       <Line x1={at} x2={at} y1={AXIS_Y - 16} y2={AXIS_Y + 16} stroke={color} strokeWidth={2} />
-      <SvgText x={x} y={AXIS_Y - 22} fontSize={12} fontFamily={Fonts.regular} fill={color} textAnchor={anchor}>{text}</SvgText>
+      <SvgText x={x} y={AXIS_Y - 22} fontSize={12} fontFamily={Fonts.regular} fill={color} textAnchor={anchor}>
+        {text}
+      </SvgText>
     </>
   );
 }

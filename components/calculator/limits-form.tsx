@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import { unitsOfKind, type CanonicalUnit, type QuantityKind } from '../../lib/units';
-import { Spacing } from '../../lib/theme';
+import { unitsOfKind, type CanonicalUnit, type QuantityKind } from '@/lib/units';
+import { Spacing } from '@/lib/theme';
 import { Card } from '../ui/card';
 import { ChoiceRow } from '../ui/choice-row';
 import { Text } from '../ui/text';
@@ -10,32 +10,63 @@ import { UnitPicker } from './unit-picker';
 export type TypedLimits = { min: string; nominal: string; max: string; refTempC: string };
 
 export type LimitsFormProps = {
-  kind: QuantityKind; limits: TypedLimits; onChangeLimits: (l: TypedLimits) => void;
-  unit: CanonicalUnit; onChangeUnit: (u: CanonicalUnit) => void; copper: boolean; onChangeCopper: (c: boolean) => void;
+  kind: QuantityKind;
+  limits: TypedLimits;
+  onChangeLimits: (l: TypedLimits) => void;
+  unit: CanonicalUnit;
+  onChangeUnit: (u: CanonicalUnit) => void;
+  copper: boolean;
+  onChangeCopper: (c: boolean) => void;
 };
 
 const LABELS = { min: 'Minimum', nominal: 'Nominal', max: 'Maximum' } as const;
 
 /** Spec limits typed from the technician's own manual, for the standalone calculator. */
-export function LimitsForm({ kind, limits, onChangeLimits, unit, onChangeUnit, copper, onChangeCopper }: LimitsFormProps) {
+export function LimitsForm({
+  kind,
+  limits,
+  onChangeLimits,
+  unit,
+  onChangeUnit,
+  copper,
+  onChangeCopper,
+}: LimitsFormProps) {
   return (
     <Card testID="limits-form">
       <Text variant="heading">Spec limits</Text>
       <View style={styles.row}>
         {(['min', 'nominal', 'max'] as const).map((k) => (
           <View key={k} style={styles.cell}>
-            <TextField label={LABELS[k]} value={limits[k]} inputMode="decimal" keyboardType="decimal-pad"
-              onChangeText={(v) => onChangeLimits({ ...limits, [k]: v })} testID={`limit-${k}`} />
+            <TextField
+              label={LABELS[k]}
+              value={limits[k]}
+              inputMode="decimal"
+              keyboardType="decimal-pad"
+              onChangeText={(v) => onChangeLimits({ ...limits, [k]: v })}
+              testID={`limit-${k}`}
+            />
           </View>
         ))}
       </View>
       <UnitPicker label="Spec unit" units={unitsOfKind(kind)} value={unit} onChange={onChangeUnit} />
       {kind === 'resistance' ? (
         <>
-          <ChoiceRow label="Winding" options={[{ value: true, label: 'Copper winding' }, { value: false, label: 'Not a winding' }]} value={copper} onChange={onChangeCopper} />
+          <ChoiceRow
+            label="Winding"
+            options={[
+              { value: true, label: 'Copper winding' },
+              { value: false, label: 'Not a winding' },
+            ]}
+            value={copper}
+            onChange={onChangeCopper}
+          />
           {copper ? (
-            <TextField label="Reference temperature °C (default 20)" value={limits.refTempC} inputMode="decimal"
-              onChangeText={(v) => onChangeLimits({ ...limits, refTempC: v })} />
+            <TextField
+              label="Reference temperature °C (default 20)"
+              value={limits.refTempC}
+              inputMode="decimal"
+              onChangeText={(v) => onChangeLimits({ ...limits, refTempC: v })}
+            />
           ) : null}
         </>
       ) : null}

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import type { CanonicalUnit } from '../../lib/units';
-import { Spacing } from '../../lib/theme';
+import type { CanonicalUnit } from '@/lib/units';
+import { Spacing } from '@/lib/theme';
 import { TextField } from '../ui/text-field';
 import { UnitPicker } from './unit-picker';
 
@@ -17,14 +17,35 @@ export type QuantityFieldProps = {
 };
 
 /** A number typed on the decimal keypad with its unit picker beside it. */
-export function QuantityField({ label, value, onChangeText, unit, units, onChangeUnit, error, hint, testID }: QuantityFieldProps) {
+export function QuantityField({
+  label,
+  value,
+  onChangeText,
+  unit,
+  units,
+  onChangeUnit,
+  error,
+  hint,
+  testID,
+}: QuantityFieldProps) {
   return (
     <View style={styles.row}>
       <View style={styles.input}>
-        <TextField label={label} value={value} onChangeText={onChangeText} inputMode="decimal" keyboardType="decimal-pad" error={error} hint={hint} testID={testID} />
+        <TextField
+          label={label}
+          value={value}
+          onChangeText={onChangeText}
+          inputMode="decimal"
+          keyboardType="decimal-pad"
+          error={error}
+          hint={hint}
+          testID={testID}
+        />
       </View>
       {unit && units && onChangeUnit ? (
-        <View style={styles.unit}><UnitPicker label={`${label} unit`} units={units} value={unit} onChange={onChangeUnit} /></View>
+        <View style={styles.unit}>
+          <UnitPicker label={`${label} unit`} units={units} value={unit} onChange={onChangeUnit} />
+        </View>
       ) : null}
     </View>
   );

@@ -1,18 +1,25 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { CorrectionDto } from '../../lib/contracts/corrections';
-import { formatRange, parseUnit } from '../../lib/units';
-import { Spacing } from '../../lib/theme';
+import type { CorrectionDto } from '@/lib/contracts/corrections';
+import { formatRange, parseUnit } from '@/lib/units';
+import { Spacing } from '@/lib/theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 
-const STATUS = { pending: 'Waiting for an editor', accepted: 'Accepted', rejected: 'Not accepted', withdrawn: 'Withdrawn' } as const;
+const STATUS = {
+  pending: 'Waiting for an editor',
+  accepted: 'Accepted',
+  rejected: 'Not accepted',
+  withdrawn: 'Withdrawn',
+} as const;
 const COLOR = { pending: 'marginal', accepted: 'pass', rejected: 'fail', withdrawn: 'textMuted' } as const;
 const KIND = { change: 'Change', new_spec: 'Missing spec', new_component: 'Missing component' } as const;
 
 export function proposedRange(c: CorrectionDto): string {
   const unit = parseUnit(c.proposed.unit)?.unit;
-  return unit ? formatRange(c.proposed.min, c.proposed.nominal, c.proposed.max, unit) : `${c.proposed.min ?? ''}–${c.proposed.max ?? ''} ${c.proposed.unit}`;
+  return unit
+    ? formatRange(c.proposed.min, c.proposed.nominal, c.proposed.max, unit)
+    : `${c.proposed.min ?? ''}–${c.proposed.max ?? ''} ${c.proposed.unit}`;
 }
 
 /** One proposal: what, where, proposed values, status and the editor's note. Text is shown as text, never HTML. */
@@ -20,18 +27,37 @@ export function CorrectionCard({ c, children }: { c: CorrectionDto; children?: R
   return (
     <Card testID={`correction-${c.id}`}>
       <View style={styles.top}>
-        <Text variant="label" color={COLOR[c.status]}>#{c.id} · {STATUS[c.status]}</Text>
-        <Text variant="small" color="textMuted">{KIND[c.kind]} · {new Date(c.createdAt).toLocaleDateString()}</Text>
+        <Text variant="label" color={COLOR[c.status]}>
+          #{c.id} · {STATUS[c.status]}
+        </Text>
+        <Text variant="small" color="textMuted">
+          {KIND[c.kind]} · {new Date(c.createdAt).toLocaleDateString()}
+        </Text>
       </View>
-      <Text variant="small" color="textMuted">{c.modelTitle}</Text>
-      <Text variant="heading">{c.componentName} — {c.parameter}</Text>
-      <Text>Proposed: <Text variant="label">{proposedRange(c)}</Text></Text>
-      <Text variant="small" color="textMuted">Source: {c.citation.title}{c.citation.edition ? `, ${c.citation.edition}` : ''}, p. {c.citation.page}</Text>
+      <Text variant="small" color="textMuted">
+        {c.modelTitle}
+      </Text>
+      <Text variant="heading">
+        {c.componentName} — {c.parameter}
+      </Text>
+      <Text>
+        Proposed: <Text variant="label">{proposedRange(c)}</Text>
+      </Text>
+      <Text variant="small" color="textMuted">
+        Source: {c.citation.title}
+        {c.citation.edition ? `, ${c.citation.edition}` : ''}, p. {c.citation.page}
+      </Text>
       <Text variant="small">“{c.rationale}”</Text>
-      {c.decisionNote ? <Text variant="small" testID={`decision-${c.id}`}>Note from {c.reviewerName}: {c.decisionNote}</Text> : null}
+      {c.decisionNote ? (
+        <Text variant="small" testID={`decision-${c.id}`}>
+          Note from {c.reviewerName}: {c.decisionNote}
+        </Text>
+      ) : null}
       {children}
     </Card>
   );
 }
 
-const styles = StyleSheet.create({ top: { flexDirection: 'row', justifyContent: 'space-between', flexWrap: 'wrap', gap: Spacing.sm } });
+const styles = StyleSheet.create({
+  top: { flexDirection: 'row', justifyContent: 'space-between', flexWrap: 'wrap', gap: Spacing.sm },
+});

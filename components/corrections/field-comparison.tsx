@@ -1,32 +1,66 @@
 import { StyleSheet, View } from 'react-native';
-import type { CorrectionReviewDto } from '../../lib/contracts/corrections';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { CorrectionReviewDto } from '@/lib/contracts/corrections';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from '../ui/text';
 
 const LABEL: Record<string, string> = {
-  min: 'Minimum', nominal: 'Nominal', max: 'Maximum', unit: 'Unit', refTempC: 'Reference °C', material: 'Winding',
-  testPoints: 'Test points', conditions: 'Conditions', source: 'Source',
+  min: 'Minimum',
+  nominal: 'Nominal',
+  max: 'Maximum',
+  unit: 'Unit',
+  refTempC: 'Reference °C',
+  material: 'Winding',
+  testPoints: 'Test points',
+  conditions: 'Conditions',
+  source: 'Source',
 };
 const show = (v: unknown) => (v === null || v === undefined || v === '' ? '—' : String(v));
 
 /** Field by field: the values when proposed (if they changed since), now, and as proposed. */
 export function FieldComparison({ review }: { review: CorrectionReviewDto }) {
   const t = useTheme();
-  const columns = review.stale ? ['When proposed', 'Now', 'Proposed'] : review.kind === 'change' ? ['Now', 'Proposed'] : ['Proposed'];
+  const columns = review.stale
+    ? ['When proposed', 'Now', 'Proposed']
+    : review.kind === 'change'
+      ? ['Now', 'Proposed']
+      : ['Proposed'];
   return (
     <View testID="field-comparison" accessibilityRole="summary">
       <View style={[styles.row, { borderBottomColor: t.border }]}>
-        <Text variant="label" style={styles.name}>Field</Text>
-        {columns.map((c) => <Text key={c} variant="label" style={styles.cell}>{c}</Text>)}
+        <Text variant="label" style={styles.name}>
+          Field
+        </Text>
+        {columns.map((c) => (
+          <Text key={c} variant="label" style={styles.cell}>
+            {c}
+          </Text>
+        ))}
       </View>
       {review.fields.map((f) => {
         const changed = show(f.current) !== show(f.proposed);
-        const cells = review.stale ? [f.proposedAgainst, f.current, f.proposed] : review.kind === 'change' ? [f.current, f.proposed] : [f.proposed];
+        const cells = review.stale
+          ? [f.proposedAgainst, f.current, f.proposed]
+          : review.kind === 'change'
+            ? [f.current, f.proposed]
+            : [f.proposed];
         return (
-          <View key={f.field} style={[styles.row, { borderBottomColor: t.border, backgroundColor: changed ? t.marginalSurface : 'transparent' }]}>
-            <Text variant="small" style={styles.name}>{LABEL[f.field] ?? f.field}{changed ? ' (changes)' : ''}</Text>
-            {cells.map((v, i) => <Text key={i} variant="small" style={styles.cell} selectable>{show(v)}</Text>)}
+          <View
+            key={f.field}
+            style={[
+              styles.row,
+              { borderBottomColor: t.border, backgroundColor: changed ? t.marginalSurface : 'transparent' },
+            ]}
+          >
+            <Text variant="small" style={styles.name}>
+              {LABEL[f.field] ?? f.field}
+              {changed ? ' (changes)' : ''}
+            </Text>
+            {cells.map((v, i) => (
+              <Text key={i} variant="small" style={styles.cell} selectable>
+                {show(v)}
+              </Text>
+            ))}
           </View>
         );
       })}
@@ -35,7 +69,12 @@ export function FieldComparison({ review }: { review: CorrectionReviewDto }) {
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', gap: Spacing.sm, paddingVertical: Spacing.xs, borderBottomWidth: StyleSheet.hairlineWidth },
+  row: {
+    flexDirection: 'row',
+    gap: Spacing.sm,
+    paddingVertical: Spacing.xs,
+    borderBottomWidth: StyleSheet.hairlineWidth,
+  },
   name: { width: 110 },
   cell: { flex: 1, minWidth: 0 },
 });

@@ -9,7 +9,9 @@ export function SignInPrompt({ reason }: { reason: string }) {
   return (
     <View style={{ gap: 12, alignItems: 'flex-start' }} testID="sign-in-prompt">
       <Text variant="heading">Sign in {reason}</Text>
-      <Text color="textMuted">Any technician can create an account; new accounts may propose corrections and keep job sheets.</Text>
+      <Text color="textMuted">
+        Any technician can create an account; new accounts may propose corrections and keep job sheets.
+      </Text>
       <Button label="Sign in" onPress={() => router.push('/sign-in')} />
     </View>
   );

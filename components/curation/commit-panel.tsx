@@ -1,8 +1,8 @@
 import { ActivityIndicator, Pressable, StyleSheet, View } from 'react-native';
-import { describeError } from '../../lib/api/describe-error';
-import type { ImportPreviewDto } from '../../lib/contracts/imports';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { describeError } from '@/lib/api/describe-error';
+import type { ImportPreviewDto } from '@/lib/contracts/imports';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
@@ -26,16 +26,27 @@ export function CommitPanel({ preview: p, committing, error, onCommit, onOpenSpe
     const written = [...p.created, ...p.updated].filter((r) => r.specId !== null);
     return (
       <Card testID="commit-done" style={{ backgroundColor: t.passSurface, borderColor: t.pass }}>
-        <Text variant="heading" color="pass">Committed</Text>
+        <Text variant="heading" color="pass">
+          Committed
+        </Text>
         <Text>
           {plural(created, 'spec')} created and {plural(updated, 'spec')} updated
-          {p.committedByName ? ` by ${p.committedByName}` : ''}{p.committedAt ? ` on ${new Date(p.committedAt).toLocaleString()}` : ''}.
-          Each changed spec has a new revision (batch #{p.id}).
+          {p.committedByName ? ` by ${p.committedByName}` : ''}
+          {p.committedAt ? ` on ${new Date(p.committedAt).toLocaleString()}` : ''}. Each changed spec has a new revision
+          (batch #{p.id}).
         </Text>
         {written.map((r) => (
-          <Pressable key={r.line} accessibilityRole="link" accessibilityLabel={`Open ${r.component} — ${r.parameter}`} onPress={() => onOpenSpec(r.specId!)}
-            style={styles.link} testID={`committed-spec-${r.specId}`}>
-            <Text color="primary">{r.make} {r.model} · {r.component} — {r.parameter}: {r.display}</Text>
+          <Pressable
+            key={r.line}
+            accessibilityRole="link"
+            accessibilityLabel={`Open ${r.component} — ${r.parameter}`}
+            onPress={() => onOpenSpec(r.specId!)}
+            style={styles.link}
+            testID={`committed-spec-${r.specId}`}
+          >
+            <Text color="primary">
+              {r.make} {r.model} · {r.component} — {r.parameter}: {r.display}
+            </Text>
           </Pressable>
         ))}
       </Card>
@@ -46,13 +57,23 @@ export function CommitPanel({ preview: p, committing, error, onCommit, onOpenSpe
     <Card testID="commit-panel">
       <Text variant="heading">Commit</Text>
       <Text color="textMuted">
-        {nothing ? 'Nothing to commit: every row is unchanged or rejected.'
+        {nothing
+          ? 'Nothing to commit: every row is unchanged or rejected.'
           : `Writes ${plural(created, 'new spec')} and ${plural(updated, 'update')} in one step, each with a revision.`}
         {rejected ? ` The ${plural(rejected, 'rejected row')} ${rejected === 1 ? 'is' : 'are'} skipped.` : ''}
       </Text>
-      {error ? <Text color="fail" accessibilityRole="alert">{describeError(error)}</Text> : null}
+      {error ? (
+        <Text color="fail" accessibilityRole="alert">
+          {describeError(error)}
+        </Text>
+      ) : null}
       <View style={styles.row}>
-        <Button label={committing ? 'Committing…' : 'Commit'} disabled={nothing || committing} onPress={onCommit} testID="commit-button" />
+        <Button
+          label={committing ? 'Committing…' : 'Commit'}
+          disabled={nothing || committing}
+          onPress={onCommit}
+          testID="commit-button"
+        />
         {committing ? <ActivityIndicator color={t.primary} accessibilityLabel="Committing" /> : null}
       </View>
     </Card>

@@ -1,5 +1,5 @@
 import { useRouter } from 'expo-router';
-import { useSession } from '../../lib/session/session-provider';
+import { useSession } from '@/lib/session/session-provider';
 import { Button } from '../ui/button';
 
 /** The editors' entry points, placed in the home screen's button row; nothing for other roles. */
@@ -9,8 +9,18 @@ export function EditorActions() {
   if (!can('editor')) return null;
   return (
     <>
-      <Button label="Import CSV" variant="secondary" onPress={() => router.push('/editor/import')} testID="home-import" />
-      <Button label="New spec" variant="secondary" onPress={() => router.push('/editor/specs/new')} testID="home-new-spec" />
+      <Button
+        label="Import CSV"
+        variant="secondary"
+        onPress={() => router.push('/editor/import')}
+        testID="home-import"
+      />
+      <Button
+        label="New spec"
+        variant="secondary"
+        onPress={() => router.push('/editor/specs/new')}
+        testID="home-new-spec"
+      />
     </>
   );
 }

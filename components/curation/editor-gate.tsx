@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { useSession } from '../../lib/session/session-provider';
+import { useSession } from '@/lib/session/session-provider';
 import { SignInPrompt } from '../corrections/sign-in-prompt';
 import { EmptyState, LoadingState } from '../ui/states';
 
@@ -13,6 +13,9 @@ export function EditorGate({ reason, children }: EditorGateProps) {
   const { status, can } = useSession();
   if (status === 'restoring') return <LoadingState label="Checking your account" />;
   if (status === 'signed-out') return <SignInPrompt reason={reason} />;
-  if (!can('editor')) return <EmptyState message="Editors only: your account can read specs and propose corrections, but not change the library." />;
+  if (!can('editor'))
+    return (
+      <EmptyState message="Editors only: your account can read specs and propose corrections, but not change the library." />
+    );
   return <>{children}</>;
 }

@@ -1,5 +1,5 @@
 import { StyleSheet } from 'react-native';
-import { Spacing } from '../../lib/theme';
+import { Spacing } from '@/lib/theme';
 import { useController, type Control, type Path } from 'react-hook-form';
 import type { TextFieldProps } from '../ui/text-field';
 import { ChoiceRow } from '../ui/choice-row';
@@ -8,11 +8,14 @@ import { TextField } from '../ui/text-field';
 import type { SpecFormValues } from './spec-form-values';
 
 /** Any resolver output: the fields only read and write the typed text. */
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
+
 export type SpecControl = Control<SpecFormValues, any, any>;
 /** The shared schema names a few fields as the API does (yearFrom); the form says them in words. */
 const WORDS: Record<string, string> = { yearFrom: 'Year from', yearTo: 'Year to', refTempC: 'Reference temperature' };
-const plain = (message: string | undefined) => message?.replace(/^(yearFrom|yearTo|refTempC)\b/, (w) => WORDS[w]).replace(/\b(yearFrom|yearTo)\b/g, (w) => WORDS[w].toLowerCase());
+const plain = (message: string | undefined) =>
+  message
+    ?.replace(/^(yearFrom|yearTo|refTempC)\b/, (w) => WORDS[w])
+    .replace(/\b(yearFrom|yearTo)\b/g, (w) => WORDS[w].toLowerCase());
 
 type ChoiceName = 'material' | 'status' | 'unit';
 type TextName = Exclude<Path<SpecFormValues>, 'source' | 'material' | 'status'>;
@@ -23,12 +26,24 @@ export type FormFieldProps = Omit<TextFieldProps, 'value' | 'onChangeText'> & { 
 export function FormField({ control, name, style, ...rest }: FormFieldProps) {
   const { field, fieldState } = useController({ control, name });
   return (
-    <TextField value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={plain(fieldState.error?.message)}
-      testID={`spec-form-${name}`} style={[rest.multiline && styles.multiline, style]} {...rest} />
+    <TextField
+      value={field.value}
+      onChangeText={field.onChange}
+      onBlur={field.onBlur}
+      error={plain(fieldState.error?.message)}
+      testID={`spec-form-${name}`}
+      style={[rest.multiline && styles.multiline, style]}
+      {...rest}
+    />
   );
 }
 
-export type FormChoiceProps = { control: SpecControl; name: ChoiceName; label: string; options: Array<{ value: string; label: string }> };
+export type FormChoiceProps = {
+  control: SpecControl;
+  name: ChoiceName;
+  label: string;
+  options: { value: string; label: string }[];
+};
 
 /** A ChoiceRow bound to one form value (unit, material, status). */
 export function FormChoice({ control, name, label, options }: FormChoiceProps) {
@@ -36,7 +51,11 @@ export function FormChoice({ control, name, label, options }: FormChoiceProps) {
   return (
     <>
       <ChoiceRow label={label} options={options} value={field.value} onChange={field.onChange} />
-      {fieldState.error ? <Text variant="small" color="fail" accessibilityRole="alert">{fieldState.error.message}</Text> : null}
+      {fieldState.error ? (
+        <Text variant="small" color="fail" accessibilityRole="alert">
+          {fieldState.error.message}
+        </Text>
+      ) : null}
     </>
   );
 }

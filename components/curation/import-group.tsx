@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { Spacing } from '../../lib/theme';
+import { Spacing } from '@/lib/theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 
@@ -12,14 +12,26 @@ export function ImportGroup({ title, total, note, testID, children }: ImportGrou
     <Card testID={testID}>
       <View style={styles.head}>
         <Text variant="heading">{title}</Text>
-        <Text variant="label" color="textMuted">{total} {total === 1 ? 'row' : 'rows'}</Text>
+        <Text variant="label" color="textMuted">
+          {total} {total === 1 ? 'row' : 'rows'}
+        </Text>
       </View>
-      {note ? <Text variant="small" color="textMuted">{note}</Text> : null}
+      {note ? (
+        <Text variant="small" color="textMuted">
+          {note}
+        </Text>
+      ) : null}
       {children}
     </Card>
   );
 }
 
 const styles = StyleSheet.create({
-  head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'baseline', gap: Spacing.sm, flexWrap: 'wrap' },
+  head: {
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    alignItems: 'baseline',
+    gap: Spacing.sm,
+    flexWrap: 'wrap',
+  },
 });

@@ -1,27 +1,48 @@
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
-import type { ImportProblemDto, ImportRowDto } from '../../lib/contracts/imports';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { ImportProblemDto, ImportRowDto } from '@/lib/contracts/imports';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from '../ui/text';
 
 const years = (r: ImportRowDto) => `${r.yearFrom}–${r.yearTo ?? ''}`;
 
 /** One accepted row: its line, where it belongs, the parameter and the limits; a link once it has a spec. */
-export function ImportRow({ row, onOpenSpec, children }: { row: ImportRowDto; onOpenSpec?: (id: number) => void; children?: ReactNode }) {
+export function ImportRow({
+  row,
+  onOpenSpec,
+  children,
+}: {
+  row: ImportRowDto;
+  onOpenSpec?: (id: number) => void;
+  children?: ReactNode;
+}) {
   const t = useTheme();
   const title = `${row.make} ${row.model} (${years(row)}${row.variant ? `, ${row.variant}` : ''})`;
   return (
     <View style={[styles.row, { borderTopColor: t.border }]} testID={`import-line-${row.line}`}>
       <View style={styles.head}>
-        <Text variant="label" style={styles.line}>Line {row.line}</Text>
+        <Text variant="label" style={styles.line}>
+          Line {row.line}
+        </Text>
         <View style={styles.body}>
-          <Text variant="small" color="textMuted">{title} · {row.component}</Text>
-          <Text variant="small">{row.parameter}: <Text variant="label">{row.display}</Text></Text>
+          <Text variant="small" color="textMuted">
+            {title} · {row.component}
+          </Text>
+          <Text variant="small">
+            {row.parameter}: <Text variant="label">{row.display}</Text>
+          </Text>
         </View>
         {row.specId && onOpenSpec ? (
-          <Pressable accessibilityRole="link" accessibilityLabel={`Open the spec from line ${row.line}`} onPress={() => onOpenSpec(row.specId!)} style={styles.link}>
-            <Text variant="label" color="primary">Open</Text>
+          <Pressable
+            accessibilityRole="link"
+            accessibilityLabel={`Open the spec from line ${row.line}`}
+            onPress={() => onOpenSpec(row.specId!)}
+            style={styles.link}
+          >
+            <Text variant="label" color="primary">
+              Open
+            </Text>
           </Pressable>
         ) : null}
       </View>
@@ -35,9 +56,15 @@ export function ProblemRow({ problem }: { problem: ImportProblemDto }) {
   const t = useTheme();
   return (
     <View style={[styles.row, styles.head, { borderTopColor: t.border }]}>
-      <Text variant="label" style={styles.line}>Line {problem.line}</Text>
+      <Text variant="label" style={styles.line}>
+        Line {problem.line}
+      </Text>
       <View style={styles.body}>
-        {problem.column ? <Text variant="small" color="textMuted">Column {problem.column}</Text> : null}
+        {problem.column ? (
+          <Text variant="small" color="textMuted">
+            Column {problem.column}
+          </Text>
+        ) : null}
         <Text variant="small">{problem.reason}</Text>
       </View>
     </View>

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { describeError } from '../../lib/api/describe-error';
-import { useDownloadTemplateMutation, useExportMutation } from '../../lib/hooks/use-curation';
-import { Spacing } from '../../lib/theme';
+import { describeError } from '@/lib/api/describe-error';
+import { useDownloadTemplateMutation, useExportMutation } from '@/lib/hooks/use-curation';
+import { Spacing } from '@/lib/theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
@@ -18,18 +18,46 @@ export function LibraryFiles({ wide }: { wide: boolean }) {
     <>
       <Card testID="library-export">
         <Text variant="heading">Export the library</Text>
-        <TextField label="Only this make (optional)" value={make} onChangeText={setMake} placeholder="All makes" testID="export-make" />
+        <TextField
+          label="Only this make (optional)"
+          value={make}
+          onChangeText={setMake}
+          placeholder="All makes"
+          testID="export-make"
+        />
         <View style={styles.row}>
-          <Button label={exporter.isPending ? 'Exporting…' : 'Export the library as CSV'} variant="secondary" disabled={exporter.isPending}
-            onPress={() => exporter.mutate(make.trim() || undefined)} testID="export-csv" />
+          <Button
+            label={exporter.isPending ? 'Exporting…' : 'Export the library as CSV'}
+            variant="secondary"
+            disabled={exporter.isPending}
+            onPress={() => exporter.mutate(make.trim() || undefined)}
+            testID="export-csv"
+          />
         </View>
-        {exporter.error ? <Text color="fail" accessibilityRole="alert">{describeError(exporter.error)}</Text> : null}
+        {exporter.error ? (
+          <Text color="fail" accessibilityRole="alert">
+            {describeError(exporter.error)}
+          </Text>
+        ) : null}
       </Card>
       <Card testID="csv-template">
         <Text variant="heading">The file format</Text>
-        <Text color="textMuted">UTF-8 CSV with a header row. A row matches a spec by make, model, years, variant, component and parameter.</Text>
-        <Button label="Download the template" variant="secondary" style={styles.button} onPress={() => template.mutate()} disabled={template.isPending} testID="download-template" />
-        {template.error ? <Text color="fail" accessibilityRole="alert">{describeError(template.error)}</Text> : null}
+        <Text color="textMuted">
+          UTF-8 CSV with a header row. A row matches a spec by make, model, years, variant, component and parameter.
+        </Text>
+        <Button
+          label="Download the template"
+          variant="secondary"
+          style={styles.button}
+          onPress={() => template.mutate()}
+          disabled={template.isPending}
+          testID="download-template"
+        />
+        {template.error ? (
+          <Text color="fail" accessibilityRole="alert">
+            {describeError(template.error)}
+          </Text>
+        ) : null}
         <ColumnReference initiallyOpen={wide} />
       </Card>
     </>

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import { Radius } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { Radius } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 
 export type ProgressBarProps = { label: string; fraction: number; testID?: string };
 
@@ -9,8 +9,13 @@ export function ProgressBar({ label, fraction, testID }: ProgressBarProps) {
   const t = useTheme();
   const percent = Math.round(Math.min(1, Math.max(0, fraction)) * 100);
   return (
-    <View accessibilityRole="progressbar" accessibilityLabel={label} accessibilityValue={{ min: 0, max: 100, now: percent }}
-      style={[styles.track, { backgroundColor: t.surfaceMuted, borderColor: t.border }]} testID={testID}>
+    <View
+      accessibilityRole="progressbar"
+      accessibilityLabel={label}
+      accessibilityValue={{ min: 0, max: 100, now: percent }}
+      style={[styles.track, { backgroundColor: t.surfaceMuted, borderColor: t.border }]}
+      testID={testID}
+    >
       <View style={[styles.fill, { width: `${percent}%`, backgroundColor: t.primary }]} />
     </View>
   );

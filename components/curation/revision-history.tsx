@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet } from 'react-native';
-import { describeError } from '../../lib/api/describe-error';
-import { useRevertMutation, useRevisionsQuery } from '../../lib/hooks/use-curation';
-import { useSession } from '../../lib/session/session-provider';
+import { describeError } from '@/lib/api/describe-error';
+import { useRevertMutation, useRevisionsQuery } from '@/lib/hooks/use-curation';
+import { useSession } from '@/lib/session/session-provider';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
@@ -19,11 +19,24 @@ export function RevisionHistory({ specId }: RevisionHistoryProps) {
   const revert = useRevertMutation(specId);
   const { can } = useSession();
   const [open, setOpen] = useState<number | null>(null);
-  if (history.isPending) return <Card><LoadingState label="Loading the history" /></Card>;
-  if (history.error) return <Card><ErrorState message={describeError(history.error)} onRetry={history.refetch} /></Card>;
+  if (history.isPending)
+    return (
+      <Card>
+        <LoadingState label="Loading the history" />
+      </Card>
+    );
+  if (history.error)
+    return (
+      <Card>
+        <ErrorState message={describeError(history.error)} onRetry={history.refetch} />
+      </Card>
+    );
   const { revisions, version } = history.data;
   const now = (revisions[0]?.snapshot ?? {}) as Snapshot;
-  const toggle = (id: number | null) => { revert.reset(); setOpen(id); };
+  const toggle = (id: number | null) => {
+    revert.reset();
+    setOpen(id);
+  };
   return (
     <Card testID="revision-list">
       <Text variant="heading">History</Text>
@@ -31,12 +44,26 @@ export function RevisionHistory({ specId }: RevisionHistoryProps) {
       {revisions.map((r, i) => (
         <RevisionItem key={r.id} revision={r} origin={originText(r, revisions)} current={i === 0}>
           {can('editor') && i > 0 && open !== r.id ? (
-            <Button label="Revert to this revision" variant="quiet" style={styles.action} onPress={() => toggle(r.id)} testID={`revert-${r.version}`} />
+            <Button
+              label="Revert to this revision"
+              variant="quiet"
+              style={styles.action}
+              onPress={() => toggle(r.id)}
+              testID={`revert-${r.version}`}
+            />
           ) : null}
           {open === r.id ? (
-            <RevertForm revision={r} now={now} version={version} busy={revert.isPending} error={revert.error}
+            <RevertForm
+              revision={r}
+              now={now}
+              version={version}
+              busy={revert.isPending}
+              error={revert.error}
               onCancel={() => toggle(null)}
-              onSubmit={(reason, base) => revert.mutate({ revisionId: r.id, version: base, reason }, { onSuccess: () => setOpen(null) })} />
+              onSubmit={(reason, base) =>
+                revert.mutate({ revisionId: r.id, version: base, reason }, { onSuccess: () => setOpen(null) })
+              }
+            />
           ) : null}
         </RevisionItem>
       ))}

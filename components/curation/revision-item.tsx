@@ -1,8 +1,8 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { RevisionDiffDto } from '../../lib/contracts/curation';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { RevisionDiffDto } from '@/lib/contracts/curation';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from '../ui/text';
 import { FieldChanges } from './field-changes';
 
@@ -24,10 +24,19 @@ export function RevisionItem({ revision: r, origin, current, children }: Revisio
   const created = r.changedFields[0] === 'created';
   return (
     <View style={[styles.row, { borderTopColor: t.border }]} testID={`revision-${r.version}`}>
-      <Text variant="label">Version {r.version}{current ? ' (current)' : ''} · {origin}</Text>
-      <Text variant="small" color="textMuted">{new Date(r.createdAt).toLocaleString()} · {r.authorName}</Text>
+      <Text variant="label">
+        Version {r.version}
+        {current ? ' (current)' : ''} · {origin}
+      </Text>
+      <Text variant="small" color="textMuted">
+        {new Date(r.createdAt).toLocaleString()} · {r.authorName}
+      </Text>
       <Text variant="small">{r.reason}</Text>
-      {created ? <Text variant="small" color="textMuted">Created with:</Text> : null}
+      {created ? (
+        <Text variant="small" color="textMuted">
+          Created with:
+        </Text>
+      ) : null}
       <FieldChanges changes={r.changes} created={created} testID={`revision-${r.version}-changes`} />
       {children}
     </View>

@@ -1,8 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import { useForm } from 'react-hook-form';
-import type { FieldError } from '../../lib/api/client';
-import { UpdateSpecBody } from '../../lib/contracts/curation';
-import { Spacing } from '../../lib/theme';
+import type { FieldError } from '@/lib/api/client';
+import { UpdateSpecBody } from '@/lib/contracts/curation';
+import { Spacing } from '@/lib/theme';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
 import { FormField } from './form-field';
@@ -25,20 +25,30 @@ export type SpecEditFormProps = {
 /** Edit one spec: the changed fields, the version they are based on and why (required). */
 export function SpecEditForm({ base, version, initial, submitting, serverErrors, onSubmit }: SpecEditFormProps) {
   const { control, handleSubmit, setError, getValues, formState } = useForm<SpecFormValues, unknown, UpdateSpecBody>({
-    defaultValues: initial ?? base, resolver: bodyResolver(UpdateSpecBody, (v) => toUpdateBody(base, v, version)),
+    defaultValues: initial ?? base,
+    resolver: bodyResolver(UpdateSpecBody, (v) => toUpdateBody(base, v, version)),
   });
   useServerErrors(setError, serverErrors);
   const rootError = formState.errors.root?.server?.message ?? formState.errors.root?.message;
   return (
     <View style={styles.form} testID="spec-edit-form">
       <Text color="textMuted">
-        {base.make} {base.model} ({base.yearFrom}–{base.yearTo || 'current'}{base.variant ? `, ${base.variant}` : ''}) · {base.component} · version {version}
+        {base.make} {base.model} ({base.yearFrom}–{base.yearTo || 'current'}
+        {base.variant ? `, ${base.variant}` : ''}) · {base.component} · version {version}
       </Text>
       <SpecValueFields control={control} />
       <FormField control={control} name="reason" label="Why does it change? (required)" multiline />
-      {rootError ? <Text color="fail" accessibilityRole="alert">{rootError === 'change at least one field' ? 'Change at least one field before saving.' : rootError}</Text> : null}
-      <Button label={submitting ? 'Saving…' : 'Save a new revision'} disabled={submitting} testID="spec-edit-submit"
-        onPress={handleSubmit((body) => onSubmit(body, getValues()))} />
+      {rootError ? (
+        <Text color="fail" accessibilityRole="alert">
+          {rootError === 'change at least one field' ? 'Change at least one field before saving.' : rootError}
+        </Text>
+      ) : null}
+      <Button
+        label={submitting ? 'Saving…' : 'Save a new revision'}
+        disabled={submitting}
+        testID="spec-edit-submit"
+        onPress={handleSubmit((body) => onSubmit(body, getValues()))}
+      />
     </View>
   );
 }

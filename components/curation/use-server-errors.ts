@@ -1,6 +1,6 @@
 import { useEffect } from 'react';
 import type { UseFormSetError } from 'react-hook-form';
-import type { FieldError } from '../../lib/api/client';
+import type { FieldError } from '@/lib/api/client';
 import { formPath, type SpecFormValues } from './spec-form-values';
 
 /** Puts the API's `errors[].path` messages under the matching form fields (others on the form's root). */

@@ -1,18 +1,18 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { describeError } from '../../lib/api/describe-error';
-import type { JobSummaryDto } from '../../lib/contracts/jobs';
-import { useCreateJobMutation, useJobQuery, useJobsQuery } from '../../lib/hooks/use-jobs';
-import { useModelsQuery, useSpecQuery } from '../../lib/hooks/use-library';
-import { useReadingQueue } from '../../lib/hooks/use-reading-queue';
-import type { AddOutcome } from '../../lib/offline/queue-runner';
-import { toReadingBody } from '../../lib/offline/reading-body';
-import { useSession } from '../../lib/session/session-provider';
-import { formatNumber } from '../../lib/units';
-import type { VerdictInput, VerdictResult } from '../../lib/verdict';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { describeError } from '@/lib/api/describe-error';
+import type { JobSummaryDto } from '@/lib/contracts/jobs';
+import { useCreateJobMutation, useJobQuery, useJobsQuery } from '@/lib/hooks/use-jobs';
+import { useModelsQuery, useSpecQuery } from '@/lib/hooks/use-library';
+import { useReadingQueue } from '@/lib/hooks/use-reading-queue';
+import type { AddOutcome } from '@/lib/offline/queue-runner';
+import { toReadingBody } from '@/lib/offline/reading-body';
+import { useSession } from '@/lib/session/session-provider';
+import { formatNumber } from '@/lib/units';
+import type { VerdictInput, VerdictResult } from '@/lib/verdict';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { formFailure } from '../account/form-state';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
@@ -37,7 +37,14 @@ export function AddToJob({ input, result }: AddToJobProps) {
   const { status } = useSession();
   if (status === 'restoring' || !input || !result) return null;
   if (status !== 'signed-in') {
-    return <Button label="Sign in to keep readings on a job" variant="secondary" onPress={() => router.push('/sign-in')} testID="add-to-job-sign-in" />;
+    return (
+      <Button
+        label="Sign in to keep readings on a job"
+        variant="secondary"
+        onPress={() => router.push('/sign-in')}
+        testID="add-to-job-sign-in"
+      />
+    );
   }
   return <AddToJobPanel input={input} result={result} />;
 }
@@ -67,7 +74,7 @@ function AddToJobPanel({ input, result }: { input: VerdictInput; result: Verdict
   const retaken = retakeJob.data?.readings.find((r) => r.id === retakeOf);
   // Re-taking a hand-typed check: the old label stands unless a new one is typed.
   const typed = label.trim() || retaken?.label || '';
-  const what = specId !== undefined ? spec.data?.parameter ?? 'Reading' : typed;
+  const what = specId !== undefined ? (spec.data?.parameter ?? 'Reading') : typed;
 
   const send = async (target: number) => {
     if (specId === undefined && !typed) {
@@ -75,11 +82,18 @@ function AddToJobPanel({ input, result }: { input: VerdictInput; result: Verdict
       return;
     }
     setSending(true);
+    // eslint-disable-next-line react-hooks/globals -- the module-level memory goes with the useAddToJob() rework
     if (user) lastJob = { userId: user.id, jobId: target };
     setJobId(target);
     setMode('idle');
     const body = toReadingBody(input, specId !== undefined ? { specId } : { label: typed }, { retakeOf });
-    const preview = { label: what, componentName: spec.data?.component.name ?? '', value: input.reading.value, unit: input.reading.unit, verdict: result.verdict };
+    const preview = {
+      label: what,
+      componentName: spec.data?.component.name ?? '',
+      value: input.reading.value,
+      unit: input.reading.unit,
+      verdict: result.verdict,
+    };
     const outcome = await queue.add({ jobId: target, body, preview });
     if (outcome.status !== 'rejected') setRetakeOf(undefined);
     setSent({ for: signature, jobId: target, outcome });
@@ -93,43 +107,100 @@ function AddToJobPanel({ input, result }: { input: VerdictInput; result: Verdict
       <Text variant="heading">Keep this reading</Text>
       {retakeOf !== undefined ? (
         <Text variant="small" testID="add-to-job-retake">
-          Re-take of {retaken ? `“${retaken.label}” (${formatNumber(retaken.value)} ${retaken.unit}, ${retaken.verdict}, ${formatWhen(retaken.takenAt)})` : `reading #${retakeOf}`} on job #{jobId}: the old reading stays on the sheet, struck through.
+          Re-take of{' '}
+          {retaken
+            ? `“${retaken.label}” (${formatNumber(retaken.value)} ${retaken.unit}, ${retaken.verdict}, ${formatWhen(retaken.takenAt)})`
+            : `reading #${retakeOf}`}{' '}
+          on job #{jobId}: the old reading stays on the sheet, struck through.
         </Text>
       ) : null}
       {specId === undefined ? (
-        <TextField label="What did you measure?" placeholder={retaken?.label ?? 'e.g. stator, yellow to yellow'} value={label}
-          onChangeText={(v) => { setLabel(v); setLabelError(null); }} error={labelError} maxLength={200} testID="add-to-job-label" />
+        <TextField
+          label="What did you measure?"
+          placeholder={retaken?.label ?? 'e.g. stator, yellow to yellow'}
+          value={label}
+          onChangeText={(v) => {
+            setLabel(v);
+            setLabelError(null);
+          }}
+          error={labelError}
+          maxLength={200}
+          testID="add-to-job-label"
+        />
       ) : null}
       {mode === 'picking' ? (
-        <JobPicker jobs={jobs.data} loading={jobs.isPending} error={jobs.error ? describeError(jobs.error) : null} onRetry={jobs.refetch}
-          onPick={pick} onNewJob={() => setMode('creating')} onCancel={() => setMode('idle')} />
+        <JobPicker
+          jobs={jobs.data}
+          loading={jobs.isPending}
+          error={jobs.error ? describeError(jobs.error) : null}
+          onRetry={jobs.refetch}
+          onPick={pick}
+          onNewJob={() => setMode('creating')}
+          onCancel={() => setMode('idle')}
+        />
       ) : null}
       {mode === 'creating' ? (
-        <NewJobForm compact testID="add-to-job-new" models={models.data ?? null} initialModelId={spec.data?.model.id ?? null}
-          modelsMessage={models.error ? describeError(models.error) : null} pending={create.isPending} failure={formFailure(create.error)}
-          onCancel={() => setMode('picking')} onSubmit={(b) => create.mutate(b, { onSuccess: (job) => void send(job.id) })} />
+        <NewJobForm
+          compact
+          testID="add-to-job-new"
+          models={models.data ?? null}
+          initialModelId={spec.data?.model.id ?? null}
+          modelsMessage={models.error ? describeError(models.error) : null}
+          pending={create.isPending}
+          failure={formFailure(create.error)}
+          onCancel={() => setMode('picking')}
+          onSubmit={(b) => create.mutate(b, { onSuccess: (job) => void send(job.id) })}
+        />
       ) : null}
       {mode === 'idle' && !done ? (
         <View style={styles.actions}>
-          <Button label={sending ? 'Adding…' : jobId !== null ? `Add to job #${jobId}` : 'Add to job'} disabled={sending}
-            onPress={() => (jobId !== null ? void send(jobId) : setMode('picking'))} testID="add-to-job-button" />
-          {jobId !== null ? <Button label="Another job" variant="quiet" onPress={() => setMode('picking')} testID="add-to-job-change" /> : null}
+          <Button
+            label={sending ? 'Adding…' : jobId !== null ? `Add to job #${jobId}` : 'Add to job'}
+            disabled={sending}
+            onPress={() => (jobId !== null ? void send(jobId) : setMode('picking'))}
+            testID="add-to-job-button"
+          />
+          {jobId !== null ? (
+            <Button label="Another job" variant="quiet" onPress={() => setMode('picking')} testID="add-to-job-change" />
+          ) : null}
         </View>
       ) : null}
-      {jobId !== null && chosen && mode === 'idle' && !done ? <Text variant="small" color="textMuted">Job #{chosen.id}: {machineName(chosen)}</Text> : null}
-      {done ? <Outcome outcome={done.outcome} jobId={done.jobId} onOpen={() => router.dismissTo(`/jobs/${done.jobId}`)} /> : null}
+      {jobId !== null && chosen && mode === 'idle' && !done ? (
+        <Text variant="small" color="textMuted">
+          Job #{chosen.id}: {machineName(chosen)}
+        </Text>
+      ) : null}
+      {done ? (
+        <Outcome outcome={done.outcome} jobId={done.jobId} onOpen={() => router.dismissTo(`/jobs/${done.jobId}`)} />
+      ) : null}
     </View>
   );
 }
 
 // dismissTo: back to the job sheet when the technician came from it (a re-take), else opens it.
 function Outcome({ outcome, jobId, onOpen }: { outcome: AddOutcome; jobId: number; onOpen: () => void }) {
-  const message = outcome.status === 'sent' ? `Added to job #${jobId}`
-    : outcome.status === 'queued' ? 'Queued — will send when online' : `Not added: ${outcome.message}`;
+  const message =
+    outcome.status === 'sent'
+      ? `Added to job #${jobId}`
+      : outcome.status === 'queued'
+        ? 'Queued — will send when online'
+        : `Not added: ${outcome.message}`;
   return (
     <View style={styles.outcome} accessibilityRole="alert" accessibilityLiveRegion="polite">
-      <Text variant="label" color={outcome.status === 'sent' ? 'pass' : outcome.status === 'queued' ? 'text' : 'fail'} testID="add-to-job-outcome">{message}</Text>
-      <Button label={`Open job sheet #${jobId}`} variant="quiet" onPress={onOpen} style={styles.link} testID="add-to-job-open" />
+      <Text
+        variant="label"
+        color={outcome.status === 'sent' ? 'pass' : outcome.status === 'queued' ? 'text' : 'fail'}
+        testID="add-to-job-outcome"
+      >
+        {message}
+      </Text>
+      <Button
+        label={`Open job sheet #${jobId}`}
+        variant="quiet"
+        onPress={onOpen}
+        style={styles.link}
+        testID="add-to-job-open"
+      />
     </View>
   );
 }

@@ -2,9 +2,9 @@
  * Words for the job sheet and its report: the machine's name, the verdict counts, the
  * readings grouped by component, the corrections as typed. Pure (no React).
  */
-import type { JobSummaryDto, ReadingDto } from '../../lib/contracts/jobs';
-import { formatNumber, formatRange, type CanonicalUnit } from '../../lib/units';
-import type { VerdictResult, VerdictStep } from '../../lib/verdict';
+import type { JobSummaryDto, ReadingDto } from '@/lib/contracts/jobs';
+import { formatNumber, formatRange, type CanonicalUnit } from '@/lib/units';
+import type { VerdictResult, VerdictStep } from '@/lib/verdict';
 
 export const OTHER_CHECKS = 'Other checks';
 
@@ -19,7 +19,9 @@ export function countsText(c: JobSummaryDto['counts']): string {
 }
 
 /** Groups in the order their first reading was taken; hand-typed checks last, as "Other checks". */
-export function groupByComponent<T extends { componentName: string }>(readings: T[]): Array<{ component: string; readings: T[] }> {
+export function groupByComponent<T extends { componentName: string }>(
+  readings: T[],
+): { component: string; readings: T[] }[] {
   const groups = new Map<string, T[]>();
   for (const r of readings) {
     const name = r.componentName.trim() || OTHER_CHECKS;
@@ -27,7 +29,10 @@ export function groupByComponent<T extends { componentName: string }>(readings: 
   }
   const named = [...groups.entries()].filter(([k]) => k !== OTHER_CHECKS);
   const other = groups.get(OTHER_CHECKS);
-  return [...named, ...(other ? [[OTHER_CHECKS, other] as const] : [])].map(([component, rs]) => ({ component, readings: rs }));
+  return [...named, ...(other ? [[OTHER_CHECKS, other] as const] : [])].map(([component, rs]) => ({
+    component,
+    readings: rs,
+  }));
 }
 
 /** 'ignition coil (rear)' → 'Ignition coil (rear)'. */
@@ -40,8 +45,14 @@ export function formatWhen(iso: string): string {
 
 export function asVerdictResult(r: ReadingDto): VerdictResult {
   return {
-    verdict: r.verdict, value: r.value, unit: r.unit as CanonicalUnit, expandedUncertainty: r.expandedUncertainty,
-    conformanceProbability: r.conformanceProbability, reason: r.reason, steps: r.steps, zones: r.zones,
+    verdict: r.verdict,
+    value: r.value,
+    unit: r.unit as CanonicalUnit,
+    expandedUncertainty: r.expandedUncertainty,
+    conformanceProbability: r.conformanceProbability,
+    reason: r.reason,
+    steps: r.steps,
+    zones: r.zones,
   };
 }
 
@@ -50,17 +61,26 @@ const q = (x: Q) => `${formatNumber(x.value)} ${x.unit}`;
 
 /** The raw reading and each correction, as the technician entered them. */
 export function inputLines(inputs: Record<string, unknown>): string[] {
-  const i = inputs as { reading?: Q; leadResistance?: Q; seriesResistance?: Q & { tolerancePct?: number }; temperatureC?: number;
-    meter?: { percent: number; counts: number; countValue: number; unit: string } };
+  const i = inputs as {
+    reading?: Q;
+    leadResistance?: Q;
+    seriesResistance?: Q & { tolerancePct?: number };
+    temperatureC?: number;
+    meter?: { percent: number; counts: number; countValue: number; unit: string };
+  };
   const lines: string[] = [];
   if (i.reading) lines.push(`Meter reading ${q(i.reading)}`);
   if (i.leadResistance) lines.push(`Test leads ${q(i.leadResistance)} subtracted`);
   if (i.seriesResistance) {
-    const tol = i.seriesResistance.tolerancePct !== undefined ? ` (±${formatNumber(i.seriesResistance.tolerancePct)} %)` : '';
+    const tol =
+      i.seriesResistance.tolerancePct !== undefined ? ` (±${formatNumber(i.seriesResistance.tolerancePct)} %)` : '';
     lines.push(`Series resistor ${q(i.seriesResistance)}${tol} subtracted`);
   }
   if (i.temperatureC !== undefined) lines.push(`Winding at ${formatNumber(i.temperatureC)} °C`);
-  if (i.meter) lines.push(`Meter accuracy ±(${formatNumber(i.meter.percent)} % + ${formatNumber(i.meter.counts)} counts of ${formatNumber(i.meter.countValue)} ${i.meter.unit})`);
+  if (i.meter)
+    lines.push(
+      `Meter accuracy ±(${formatNumber(i.meter.percent)} % + ${formatNumber(i.meter.counts)} counts of ${formatNumber(i.meter.countValue)} ${i.meter.unit})`,
+    );
   return lines;
 }
 

@@ -1,7 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import type { JobSummaryDto } from '../../lib/contracts/jobs';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { JobSummaryDto } from '@/lib/contracts/jobs';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { countsText, formatWhen, machineName } from './job-format';
@@ -20,15 +20,28 @@ export function JobList({ jobs, onOpen }: JobListProps) {
           accessibilityRole="link"
           accessibilityLabel={`Open job #${job.id}: ${machineName(job)}`}
           onPress={() => onOpen(job.id)}
-          style={({ pressed }) => [styles.row, i > 0 && { borderTopWidth: StyleSheet.hairlineWidth, borderTopColor: t.border },
-            { backgroundColor: pressed ? t.surfaceMuted : 'transparent' }]}
+          style={({ pressed }) => [
+            styles.row,
+            i > 0 && { borderTopWidth: StyleSheet.hairlineWidth, borderTopColor: t.border },
+            { backgroundColor: pressed ? t.surfaceMuted : 'transparent' },
+          ]}
         >
           <View style={styles.top}>
-            <Text variant="label" style={styles.grow}>#{job.id} · {machineName(job)}</Text>
-            <Text variant="small" color={job.status === 'open' ? 'primary' : 'textMuted'}>{job.status === 'open' ? 'Open' : 'Closed'}</Text>
+            <Text variant="label" style={styles.grow}>
+              #{job.id} · {machineName(job)}
+            </Text>
+            <Text variant="small" color={job.status === 'open' ? 'primary' : 'textMuted'}>
+              {job.status === 'open' ? 'Open' : 'Closed'}
+            </Text>
           </View>
           <Text variant="small" color="textMuted">
-            {[job.machineId && `ID ${job.machineId}`, job.customerRef && `Customer ${job.customerRef}`, `Opened ${formatWhen(job.createdAt)}`].filter(Boolean).join(' · ')}
+            {[
+              job.machineId && `ID ${job.machineId}`,
+              job.customerRef && `Customer ${job.customerRef}`,
+              `Opened ${formatWhen(job.createdAt)}`,
+            ]
+              .filter(Boolean)
+              .join(' · ')}
           </Text>
           <Text variant="small">{countsText(job.counts)}</Text>
         </Pressable>

@@ -1,7 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import type { JobSummaryDto } from '../../lib/contracts/jobs';
-import { Radius, Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { JobSummaryDto } from '@/lib/contracts/jobs';
+import { Radius, Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Button } from '../ui/button';
 import { ErrorState, LoadingState } from '../ui/states';
 import { Text } from '../ui/text';
@@ -25,14 +25,28 @@ export function JobPicker({ jobs, loading, error, onRetry, onPick, onNewJob, onC
       <Text variant="label">Add the reading to which job?</Text>
       {loading ? <LoadingState label="Loading your open jobs" /> : null}
       {error ? <ErrorState message={error} onRetry={onRetry} /> : null}
-      {jobs && jobs.length === 0 ? <Text color="textMuted">You have no open job. Start one for this machine.</Text> : null}
+      {jobs && jobs.length === 0 ? (
+        <Text color="textMuted">You have no open job. Start one for this machine.</Text>
+      ) : null}
       {jobs?.map((job) => (
-        <Pressable key={job.id} accessibilityRole="button" accessibilityLabel={`Add to job #${job.id}: ${machineName(job)}`}
-          onPress={() => onPick(job)} testID={`pick-job-${job.id}`}
-          style={({ pressed }) => [styles.option, { borderColor: t.border, backgroundColor: pressed ? t.surfaceMuted : t.surface }]}>
-          <Text variant="label">#{job.id} · {machineName(job)}</Text>
+        <Pressable
+          key={job.id}
+          accessibilityRole="button"
+          accessibilityLabel={`Add to job #${job.id}: ${machineName(job)}`}
+          onPress={() => onPick(job)}
+          testID={`pick-job-${job.id}`}
+          style={({ pressed }) => [
+            styles.option,
+            { borderColor: t.border, backgroundColor: pressed ? t.surfaceMuted : t.surface },
+          ]}
+        >
+          <Text variant="label">
+            #{job.id} · {machineName(job)}
+          </Text>
           {job.machineId || job.customerRef ? (
-            <Text variant="small" color="textMuted">{[job.machineId, job.customerRef].filter(Boolean).join(' · ')}</Text>
+            <Text variant="small" color="textMuted">
+              {[job.machineId, job.customerRef].filter(Boolean).join(' · ')}
+            </Text>
           ) : null}
         </Pressable>
       ))}
@@ -46,6 +60,13 @@ export function JobPicker({ jobs, loading, error, onRetry, onPick, onNewJob, onC
 
 const styles = StyleSheet.create({
   wrap: { gap: Spacing.sm },
-  option: { borderWidth: 1, borderRadius: Radius.md, padding: Spacing.sm, minHeight: 44, justifyContent: 'center', gap: 2 },
+  option: {
+    borderWidth: 1,
+    borderRadius: Radius.md,
+    padding: Spacing.sm,
+    minHeight: 44,
+    justifyContent: 'center',
+    gap: 2,
+  },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: Spacing.sm },
 });

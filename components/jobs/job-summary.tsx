@@ -1,21 +1,29 @@
 import { StyleSheet, View } from 'react-native';
-import type { JobDetailDto } from '../../lib/contracts/jobs';
-import { Spacing } from '../../lib/theme';
+import type { JobDetailDto } from '@/lib/contracts/jobs';
+import { Spacing } from '@/lib/theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { formatWhen, machineName } from './job-format';
 import { VerdictCounts } from './verdict-counts';
 
-export type JobSummaryProps = { job: JobDetailDto; onSetStatus: (status: 'open' | 'closed') => void; pending?: boolean };
+export type JobSummaryProps = {
+  job: JobDetailDto;
+  onSetStatus: (status: 'open' | 'closed') => void;
+  pending?: boolean;
+};
 
 /** The top of the job sheet: the machine, its identifier, the customer, the status and the verdict counts. */
 export function JobSummary({ job, onSetStatus, pending }: JobSummaryProps) {
   const open = job.status === 'open';
   return (
     <Card testID="job-summary">
-      <Text variant="small" color="textMuted">Job #{job.id} · opened {formatWhen(job.createdAt)}</Text>
-      <Text variant="title" testID="job-machine">{machineName(job)}</Text>
+      <Text variant="small" color="textMuted">
+        Job #{job.id} · opened {formatWhen(job.createdAt)}
+      </Text>
+      <Text variant="title" testID="job-machine">
+        {machineName(job)}
+      </Text>
       <View style={styles.facts}>
         <Fact label="VIN / frame number" value={job.machineId || '—'} />
         <Fact label="Customer reference" value={job.customerRef || '—'} />
@@ -23,10 +31,18 @@ export function JobSummary({ job, onSetStatus, pending }: JobSummaryProps) {
       </View>
       <VerdictCounts counts={job.counts} />
       <Button
-        label={pending ? 'Saving…' : open ? 'Close the job' : 'Reopen the job'} variant="secondary" disabled={pending}
-        onPress={() => onSetStatus(open ? 'closed' : 'open')} style={styles.button} testID="job-toggle-status"
+        label={pending ? 'Saving…' : open ? 'Close the job' : 'Reopen the job'}
+        variant="secondary"
+        disabled={pending}
+        onPress={() => onSetStatus(open ? 'closed' : 'open')}
+        style={styles.button}
+        testID="job-toggle-status"
       />
-      {open ? null : <Text variant="small" color="textMuted">A closed job takes no new readings. Reopen it to add one.</Text>}
+      {open ? null : (
+        <Text variant="small" color="textMuted">
+          A closed job takes no new readings. Reopen it to add one.
+        </Text>
+      )}
     </Card>
   );
 }
@@ -34,8 +50,12 @@ export function JobSummary({ job, onSetStatus, pending }: JobSummaryProps) {
 function Fact({ label, value, testID }: { label: string; value: string; testID?: string }) {
   return (
     <View style={styles.fact}>
-      <Text variant="small" color="textMuted">{label}</Text>
-      <Text variant="label" testID={testID}>{value}</Text>
+      <Text variant="small" color="textMuted">
+        {label}
+      </Text>
+      <Text variant="label" testID={testID}>
+        {value}
+      </Text>
     </View>
   );
 }

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { CreateJobBody } from '../../lib/contracts/jobs';
-import type { ModelSummaryDto } from '../../lib/contracts/library';
-import { Spacing } from '../../lib/theme';
+import { CreateJobBody } from '@/lib/contracts/jobs';
+import type { ModelSummaryDto } from '@/lib/contracts/library';
+import { Spacing } from '@/lib/theme';
 import { FormAlert } from '../account/form-alert';
 import { useFormState, type FormFailure } from '../account/form-state';
 import { Button } from '../ui/button';
@@ -29,7 +29,17 @@ export type NewJobFormProps = {
 const blank = (s: string) => (s.trim() === '' ? undefined : s.trim());
 
 /** A new job: a model from the library or a machine described in words, its VIN / frame number, the customer. */
-export function NewJobForm({ models, modelsMessage, initialModelId = null, onSubmit, onCancel, pending, failure, compact, testID = 'new-job-form' }: NewJobFormProps) {
+export function NewJobForm({
+  models,
+  modelsMessage,
+  initialModelId = null,
+  onSubmit,
+  onCancel,
+  pending,
+  failure,
+  compact,
+  testID = 'new-job-form',
+}: NewJobFormProps) {
   const form = useFormState({ machineLabel: '', machineId: '', customerRef: '', notes: '' });
   const [inLibrary, setInLibrary] = useState(true);
   const [modelId, setModelId] = useState<number | null>(initialModelId);
@@ -37,8 +47,11 @@ export function NewJobForm({ models, modelsMessage, initialModelId = null, onSub
   const submit = () => {
     const v = form.values;
     const body = {
-      modelId: inLibrary ? modelId ?? undefined : undefined, machineLabel: blank(v.machineLabel), machineId: blank(v.machineId),
-      customerRef: blank(v.customerRef), notes: compact ? undefined : blank(v.notes),
+      modelId: inLibrary ? (modelId ?? undefined) : undefined,
+      machineLabel: blank(v.machineLabel),
+      machineId: blank(v.machineId),
+      customerRef: blank(v.customerRef),
+      notes: compact ? undefined : blank(v.notes),
     };
     const extra = inLibrary && modelId === null ? { modelId: 'Pick the model, or choose “Not in the library”.' } : {};
     const data = form.check(CreateJobBody, body, extra);
@@ -47,26 +60,68 @@ export function NewJobForm({ models, modelsMessage, initialModelId = null, onSub
   return (
     <Card testID={testID}>
       <Text variant="heading">New job</Text>
-      <ChoiceRow label="The machine" value={inLibrary}
-        options={[{ value: true, label: 'A model in the library' }, { value: false, label: 'Not in the library' }]} onChange={setInLibrary} />
+      <ChoiceRow
+        label="The machine"
+        value={inLibrary}
+        options={[
+          { value: true, label: 'A model in the library' },
+          { value: false, label: 'Not in the library' },
+        ]}
+        onChange={setInLibrary}
+      />
       {inLibrary ? (
-        models ? <ModelPicker models={models} value={modelId} onChange={setModelId} error={error('modelId')} />
-          : <Text color="textMuted">{modelsMessage ?? 'Loading the library’s models…'}</Text>
+        models ? (
+          <ModelPicker models={models} value={modelId} onChange={setModelId} error={error('modelId')} />
+        ) : (
+          <Text color="textMuted">{modelsMessage ?? 'Loading the library’s models…'}</Text>
+        )
       ) : null}
-      <TextField label={inLibrary ? 'Machine description (optional)' : 'Machine description'} placeholder="e.g. customer quad, 250 cc, blue"
-        {...form.field('machineLabel')} error={error('machineLabel')} testID="job-machine-label" />
+      <TextField
+        label={inLibrary ? 'Machine description (optional)' : 'Machine description'}
+        placeholder="e.g. customer quad, 250 cc, blue"
+        {...form.field('machineLabel')}
+        error={error('machineLabel')}
+        testID="job-machine-label"
+      />
       <View style={styles.pair}>
         <View style={styles.cell}>
-          <TextField label="VIN or frame number" {...form.field('machineId')} error={error('machineId')} autoCapitalize="characters" autoCorrect={false} testID="job-machine-id" />
+          <TextField
+            label="VIN or frame number"
+            {...form.field('machineId')}
+            error={error('machineId')}
+            autoCapitalize="characters"
+            autoCorrect={false}
+            testID="job-machine-id"
+          />
         </View>
         <View style={styles.cell}>
-          <TextField label="Customer reference" {...form.field('customerRef')} error={error('customerRef')} testID="job-customer-ref" />
+          <TextField
+            label="Customer reference"
+            {...form.field('customerRef')}
+            error={error('customerRef')}
+            testID="job-customer-ref"
+          />
         </View>
       </View>
-      {compact ? null : <TextField label="Notes" {...form.field('notes')} error={error('notes')} multiline numberOfLines={3} style={styles.notes} testID="job-notes-input" />}
+      {compact ? null : (
+        <TextField
+          label="Notes"
+          {...form.field('notes')}
+          error={error('notes')}
+          multiline
+          numberOfLines={3}
+          style={styles.notes}
+          testID="job-notes-input"
+        />
+      )}
       {failure ? <FormAlert tone="error" message={failure.message} /> : null}
       <View style={styles.actions}>
-        <Button label={pending ? 'Creating…' : 'Create the job'} onPress={submit} disabled={pending} testID="create-job" />
+        <Button
+          label={pending ? 'Creating…' : 'Create the job'}
+          onPress={submit}
+          disabled={pending}
+          testID="create-job"
+        />
         {onCancel ? <Button label="Cancel" variant="quiet" onPress={onCancel} /> : null}
       </View>
     </Card>

@@ -1,6 +1,6 @@
 import { useEffect } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { Colors } from '../../lib/theme';
+import { Colors } from '@/lib/theme';
 import { Button } from '../ui/button';
 
 export type PrintButtonProps = { testID?: string };

@@ -1,8 +1,8 @@
 import { StyleSheet, View } from 'react-native';
-import type { ReadingDto } from '../../lib/contracts/jobs';
-import { formatNumber } from '../../lib/units';
-import { Radius, Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { ReadingDto } from '@/lib/contracts/jobs';
+import { formatNumber } from '@/lib/units';
+import { Radius, Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { BandPicture } from '../calculator/band-picture';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
@@ -19,8 +19,14 @@ export function ReadingCard({ reading: r, onRetake }: ReadingCardProps) {
   return (
     <View testID={`job-reading-${r.id}`} style={[styles.card, { borderTopColor: t.border }]}>
       <View style={styles.top}>
-        <Text variant="label" style={[styles.grow, strike]}>{r.label}</Text>
-        {retaken ? <Text variant="small" color="textMuted" testID="reading-retaken">re-taken</Text> : null}
+        <Text variant="label" style={[styles.grow, strike]}>
+          {r.label}
+        </Text>
+        {retaken ? (
+          <Text variant="small" color="textMuted" testID="reading-retaken">
+            re-taken
+          </Text>
+        ) : null}
         <VerdictChip verdict={r.verdict} muted={retaken} testID="reading-verdict" />
       </View>
       <Text variant="value" style={strike} color={retaken ? 'textMuted' : 'text'}>
@@ -28,15 +34,32 @@ export function ReadingCard({ reading: r, onRetake }: ReadingCardProps) {
         {r.expandedUncertainty !== null ? ` ± ${formatNumber(r.expandedUncertainty, 2)} ${r.unit}` : ''}
       </Text>
       {retaken ? null : <BandPicture result={asVerdictResult(r)} />}
-      <Text variant="small" style={strike}>{r.reason}</Text>
-      <Text variant="small" color="textMuted">{[...inputLines(r.inputs), `Taken ${formatWhen(r.takenAt)}`].join(' · ')}</Text>
+      <Text variant="small" style={strike}>
+        {r.reason}
+      </Text>
+      <Text variant="small" color="textMuted">
+        {[...inputLines(r.inputs), `Taken ${formatWhen(r.takenAt)}`].join(' · ')}
+      </Text>
       {r.specChangedSince && !retaken ? (
-        <View style={[styles.warning, { backgroundColor: t.cautionSurface, borderColor: t.cautionBorder }]} testID="spec-changed">
-          <Text variant="small" color="caution">Spec changed since this reading: the library’s limits were edited after it was judged. Re-take it against the current spec.</Text>
+        <View
+          style={[styles.warning, { backgroundColor: t.cautionSurface, borderColor: t.cautionBorder }]}
+          testID="spec-changed"
+        >
+          <Text variant="small" color="caution">
+            Spec changed since this reading: the library’s limits were edited after it was judged. Re-take it against
+            the current spec.
+          </Text>
         </View>
       ) : null}
       {onRetake && !retaken ? (
-        <Button label="Re-take" variant="secondary" onPress={onRetake} style={styles.retake} accessibilityLabel={`Re-take ${r.label}`} testID="reading-retake" />
+        <Button
+          label="Re-take"
+          variant="secondary"
+          onPress={onRetake}
+          style={styles.retake}
+          accessibilityLabel={`Re-take ${r.label}`}
+          testID="reading-retake"
+        />
       ) : null}
     </View>
   );

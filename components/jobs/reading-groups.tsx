@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
-import type { ReadingDto } from '../../lib/contracts/jobs';
-import type { QueuedReading } from '../../lib/offline/reading-queue';
-import { Spacing } from '../../lib/theme';
+import type { ReadingDto } from '@/lib/contracts/jobs';
+import type { QueuedReading } from '@/lib/offline/reading-queue';
+import { Spacing } from '@/lib/theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { groupByComponent, sentenceCase } from './job-format';
@@ -30,10 +30,17 @@ export function ReadingGroups({ readings, pending, onRetake }: ReadingGroupsProp
       {groupByComponent(rows).map((g) => (
         <Card key={g.component} testID="reading-group">
           <Text variant="heading">{sentenceCase(g.component)}</Text>
-          {g.readings.map((row) => (row.reading
-            ? <ReadingCard key={row.reading.id} reading={row.reading}
-              onRetake={onRetake && !retakeWaiting.has(row.reading.id) ? () => onRetake(row.reading!) : undefined} />
-            : <PendingReadingRow key={row.pending!.key} item={row.pending!} />))}
+          {g.readings.map((row) =>
+            row.reading ? (
+              <ReadingCard
+                key={row.reading.id}
+                reading={row.reading}
+                onRetake={onRetake && !retakeWaiting.has(row.reading.id) ? () => onRetake(row.reading!) : undefined}
+              />
+            ) : (
+              <PendingReadingRow key={row.pending!.key} item={row.pending!} />
+            ),
+          )}
         </Card>
       ))}
     </View>

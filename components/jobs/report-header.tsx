@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
-import type { JobDetailDto } from '../../lib/contracts/jobs';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { JobDetailDto } from '@/lib/contracts/jobs';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from '../ui/text';
 import { formatSpan, formatWhen, machineName } from './job-format';
 import { VerdictCounts } from './verdict-counts';
@@ -12,7 +12,7 @@ export type ReportHeaderProps = { job: JobDetailDto; printedAt: string };
 export function ReportHeader({ job, printedAt }: ReportHeaderProps) {
   const t = useTheme();
   const times = job.readings.map((r) => r.takenAt).sort();
-  const rows: Array<[string, string]> = [
+  const rows: [string, string][] = [
     ['Machine', machineName(job)],
     ['VIN / frame number', job.machineId || '—'],
     ['Customer reference', job.customerRef || '—'],
@@ -27,8 +27,12 @@ export function ReportHeader({ job, printedAt }: ReportHeaderProps) {
       <View style={styles.table}>
         {rows.map(([k, v]) => (
           <View key={k} style={styles.row}>
-            <Text variant="small" color="textMuted" style={styles.key}>{k}</Text>
-            <Text variant="small" style={styles.value}>{v}</Text>
+            <Text variant="small" color="textMuted" style={styles.key}>
+              {k}
+            </Text>
+            <Text variant="small" style={styles.value}>
+              {v}
+            </Text>
           </View>
         ))}
       </View>

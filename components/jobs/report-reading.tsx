@@ -1,8 +1,8 @@
 import { StyleSheet, View } from 'react-native';
-import type { ReadingDto } from '../../lib/contracts/jobs';
-import { formatNumber } from '../../lib/units';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { ReadingDto } from '@/lib/contracts/jobs';
+import { formatNumber } from '@/lib/units';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from '../ui/text';
 import { formatWhen, inputLines, limitsText, stepText } from './job-format';
 import { VerdictChip } from './verdict-chip';
@@ -20,16 +20,29 @@ export function ReportReading({ reading: r, index }: ReportReadingProps) {
         </Text>
         <VerdictChip verdict={r.verdict} />
       </View>
-      <Text variant="small">Spec: {limitsText(r.specLimits)}{r.citation ? ` · Source: ${r.citation}` : ' · Limits typed by the technician'}</Text>
+      <Text variant="small">
+        Spec: {limitsText(r.specLimits)}
+        {r.citation ? ` · Source: ${r.citation}` : ' · Limits typed by the technician'}
+      </Text>
       <Text variant="label">
-        Result {formatNumber(r.value)} {r.unit}{r.expandedUncertainty !== null ? ` ± ${formatNumber(r.expandedUncertainty, 2)} ${r.unit} (k = 2)` : ''}: {r.verdict.toUpperCase()}
+        Result {formatNumber(r.value)} {r.unit}
+        {r.expandedUncertainty !== null ? ` ± ${formatNumber(r.expandedUncertainty, 2)} ${r.unit} (k = 2)` : ''}:{' '}
+        {r.verdict.toUpperCase()}
       </Text>
       <Text variant="small">{r.reason}</Text>
-      <Text variant="small" color="textMuted">{[...inputLines(r.inputs), `Taken ${formatWhen(r.takenAt)}`].join(' · ')}</Text>
-      {r.specChangedSince ? <Text variant="small" color="caution">Note: the library’s spec was edited after this reading was judged.</Text> : null}
+      <Text variant="small" color="textMuted">
+        {[...inputLines(r.inputs), `Taken ${formatWhen(r.takenAt)}`].join(' · ')}
+      </Text>
+      {r.specChangedSince ? (
+        <Text variant="small" color="caution">
+          Note: the library’s spec was edited after this reading was judged.
+        </Text>
+      ) : null}
       <View style={styles.steps}>
         {r.steps.map((s, i) => (
-          <Text key={`${i}-${s.label}`} variant="small">{i + 1}. {stepText(s)}</Text>
+          <Text key={`${i}-${s.label}`} variant="small">
+            {i + 1}. {stepText(s)}
+          </Text>
         ))}
       </View>
     </View>

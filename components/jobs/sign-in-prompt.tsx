@@ -6,7 +6,9 @@ import { Text } from '../ui/text';
 export type SignInPromptProps = { message?: string };
 
 /** Shown instead of job sheets to someone who is not signed in. */
-export function SignInPrompt({ message = 'Job sheets keep the readings of each machine you work on, with their verdicts, ready to print for the customer.' }: SignInPromptProps) {
+export function SignInPrompt({
+  message = 'Job sheets keep the readings of each machine you work on, with their verdicts, ready to print for the customer.',
+}: SignInPromptProps) {
   const router = useRouter();
   return (
     <Card testID="jobs-sign-in">

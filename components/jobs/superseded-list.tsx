@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
-import type { ReadingDto } from '../../lib/contracts/jobs';
-import { formatNumber } from '../../lib/units';
-import { Spacing } from '../../lib/theme';
+import type { ReadingDto } from '@/lib/contracts/jobs';
+import { formatNumber } from '@/lib/units';
+import { Spacing } from '@/lib/theme';
 import { Text } from '../ui/text';
 import { formatWhen } from './job-format';
 
@@ -13,10 +13,14 @@ export function SupersededList({ readings }: SupersededListProps) {
   return (
     <View style={styles.list} testID="report-superseded">
       <Text variant="heading">Re-taken readings</Text>
-      <Text variant="small" color="textMuted">Kept for the record; each was replaced by the reading named beside it.</Text>
+      <Text variant="small" color="textMuted">
+        Kept for the record; each was replaced by the reading named beside it.
+      </Text>
       {readings.map((r) => (
         <Text key={r.id} variant="small">
-          <Text variant="small" style={styles.struck}>{r.label}: {formatNumber(r.value)} {r.unit}, {r.verdict.toUpperCase()}</Text>
+          <Text variant="small" style={styles.struck}>
+            {r.label}: {formatNumber(r.value)} {r.unit}, {r.verdict.toUpperCase()}
+          </Text>
           {` — taken ${formatWhen(r.takenAt)}, re-taken (replaced by reading #${r.supersededBy})`}
         </Text>
       ))}

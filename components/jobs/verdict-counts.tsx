@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import type { JobSummaryDto } from '../../lib/contracts/jobs';
-import { Spacing } from '../../lib/theme';
+import type { JobSummaryDto } from '@/lib/contracts/jobs';
+import { Spacing } from '@/lib/theme';
 import { Text } from '../ui/text';
 import { countsText } from './job-format';
 
@@ -10,9 +10,18 @@ export type VerdictCountsProps = { counts: JobSummaryDto['counts']; testID?: str
 export function VerdictCounts({ counts, testID = 'verdict-counts' }: VerdictCountsProps) {
   const total = counts.pass + counts.marginal + counts.fail;
   return (
-    <View style={styles.row} testID={testID} accessibilityRole="summary" accessibilityLabel={`Verdicts: ${countsText(counts)}`}>
+    <View
+      style={styles.row}
+      testID={testID}
+      accessibilityRole="summary"
+      accessibilityLabel={`Verdicts: ${countsText(counts)}`}
+    >
       <Text variant="heading">{total === 0 ? 'No readings yet' : countsText(counts)}</Text>
-      {counts.fail > 0 ? <Text variant="label" color="fail">{counts.fail === 1 ? '1 reading failed' : `${counts.fail} readings failed`}</Text> : null}
+      {counts.fail > 0 ? (
+        <Text variant="label" color="fail">
+          {counts.fail === 1 ? '1 reading failed' : `${counts.fail} readings failed`}
+        </Text>
+      ) : null}
     </View>
   );
 }

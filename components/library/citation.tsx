@@ -1,5 +1,5 @@
 import { Linking, Pressable } from 'react-native';
-import type { SpecDetailDto } from '../../lib/contracts/library';
+import type { SpecDetailDto } from '@/lib/contracts/library';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 
@@ -11,10 +11,18 @@ export function Citation({ spec }: { spec: SpecDetailDto }) {
       <Text variant="heading">Source</Text>
       {s ? (
         <>
-          <Text>{s.title}{s.edition ? `, ${s.edition}` : ''}{s.year ? ` (${s.year})` : ''}</Text>
+          <Text>
+            {s.title}
+            {s.edition ? `, ${s.edition}` : ''}
+            {s.year ? ` (${s.year})` : ''}
+          </Text>
           {spec.sourcePage ? <Text color="textMuted">Page {spec.sourcePage}</Text> : null}
           {s.url ? (
-            <Pressable accessibilityRole="link" accessibilityLabel="Open the source document" onPress={() => Linking.openURL(s.url!)}>
+            <Pressable
+              accessibilityRole="link"
+              accessibilityLabel="Open the source document"
+              onPress={() => Linking.openURL(s.url!)}
+            >
               <Text color="primary">{s.url}</Text>
             </Pressable>
           ) : null}

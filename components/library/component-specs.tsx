@@ -1,7 +1,7 @@
-import { Pressable, StyleSheet, View } from 'react-native';
-import type { ModelDetailDto } from '../../lib/contracts/library';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { Pressable, StyleSheet } from 'react-native';
+import type { ModelDetailDto } from '@/lib/contracts/library';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 
@@ -13,17 +13,26 @@ export function ComponentSpecs({ component, onOpenSpec }: ComponentSpecsProps) {
   return (
     <Card testID={`component-${component.id}`}>
       <Text variant="heading">{component.name}</Text>
-      {component.locationNotes ? <Text variant="small" color="textMuted">{component.locationNotes}</Text> : null}
+      {component.locationNotes ? (
+        <Text variant="small" color="textMuted">
+          {component.locationNotes}
+        </Text>
+      ) : null}
       {component.specs.map((s) => (
         <Pressable
           key={s.id}
           accessibilityRole="link"
           accessibilityLabel={`${s.parameter}: ${s.display}`}
           onPress={() => onOpenSpec(s.id)}
-          style={({ pressed }) => [styles.row, { borderTopColor: t.border, backgroundColor: pressed ? t.surfaceMuted : 'transparent' }]}
+          style={({ pressed }) => [
+            styles.row,
+            { borderTopColor: t.border, backgroundColor: pressed ? t.surfaceMuted : 'transparent' },
+          ]}
         >
           <Text style={styles.parameter}>{s.parameter}</Text>
-          <Text variant="label" style={styles.value}>{s.display}</Text>
+          <Text variant="label" style={styles.value}>
+            {s.display}
+          </Text>
         </Pressable>
       ))}
     </Card>
@@ -31,7 +40,13 @@ export function ComponentSpecs({ component, onOpenSpec }: ComponentSpecsProps) {
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', alignItems: 'center', gap: Spacing.md, minHeight: 44, borderTopWidth: StyleSheet.hairlineWidth },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: Spacing.md,
+    minHeight: 44,
+    borderTopWidth: StyleSheet.hairlineWidth,
+  },
   parameter: { flex: 1 },
   value: { fontSize: 16 },
 });

@@ -1,10 +1,10 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import type { ModelSummaryDto } from '../../lib/contracts/library';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { ModelSummaryDto } from '@/lib/contracts/library';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import { modelTitle } from '../../lib/format/model-title';
+import { modelTitle } from '@/lib/format/model-title';
 
 export type ModelListProps = { models: ModelSummaryDto[]; onOpenModel: (id: number) => void };
 
@@ -17,18 +17,25 @@ export function ModelList({ models, onOpenModel }: ModelListProps) {
       {makes.map((make) => (
         <Card key={make}>
           <Text variant="heading">{make}</Text>
-          {models.filter((m) => m.make.name === make).map((m) => (
-            <Pressable
-              key={m.id}
-              accessibilityRole="link"
-              accessibilityLabel={`Open model sheet ${modelTitle(m)}`}
-              onPress={() => onOpenModel(m.id)}
-              style={({ pressed }) => [styles.row, { borderTopColor: t.border, backgroundColor: pressed ? t.surfaceMuted : 'transparent' }]}
-            >
-              <Text style={styles.name}>{modelTitle(m).slice(make.length + 1)}</Text>
-              <Text variant="small" color="textMuted">{m.specCount === 1 ? '1 spec' : `${m.specCount} specs`}</Text>
-            </Pressable>
-          ))}
+          {models
+            .filter((m) => m.make.name === make)
+            .map((m) => (
+              <Pressable
+                key={m.id}
+                accessibilityRole="link"
+                accessibilityLabel={`Open model sheet ${modelTitle(m)}`}
+                onPress={() => onOpenModel(m.id)}
+                style={({ pressed }) => [
+                  styles.row,
+                  { borderTopColor: t.border, backgroundColor: pressed ? t.surfaceMuted : 'transparent' },
+                ]}
+              >
+                <Text style={styles.name}>{modelTitle(m).slice(make.length + 1)}</Text>
+                <Text variant="small" color="textMuted">
+                  {m.specCount === 1 ? '1 spec' : `${m.specCount} specs`}
+                </Text>
+              </Pressable>
+            ))}
         </Card>
       ))}
     </View>
@@ -37,6 +44,12 @@ export function ModelList({ models, onOpenModel }: ModelListProps) {
 
 const styles = StyleSheet.create({
   list: { gap: Spacing.md },
-  row: { flexDirection: 'row', alignItems: 'center', gap: Spacing.md, minHeight: 44, borderTopWidth: StyleSheet.hairlineWidth },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: Spacing.md,
+    minHeight: 44,
+    borderTopWidth: StyleSheet.hairlineWidth,
+  },
   name: { flex: 1 },
 });

@@ -1,5 +1,5 @@
 import { View } from 'react-native';
-import { cautionsFor } from '../../lib/safety/cautions';
+import { cautionsFor } from '@/lib/safety/cautions';
 import { Caution } from '../ui/caution';
 import { Text } from '../ui/text';
 
@@ -10,8 +10,12 @@ export function SafetyNotes({ component, parameter }: SafetyNotesProps) {
   const { notes, defer } = cautionsFor(component, parameter);
   return (
     <View testID="safety-notes" style={{ gap: 8 }}>
-      {notes.map((n) => <Caution key={n.id} title={n.title} lines={n.lines} testID={`caution-${n.id}`} />)}
-      <Text variant="small" color="textMuted">{defer}</Text>
+      {notes.map((n) => (
+        <Caution key={n.id} title={n.title} lines={n.lines} testID={`caution-${n.id}`} />
+      ))}
+      <Text variant="small" color="textMuted">
+        {defer}
+      </Text>
     </View>
   );
 }

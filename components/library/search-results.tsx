@@ -1,10 +1,10 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import type { SearchResultDto } from '../../lib/contracts/library';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import type { SearchResultDto } from '@/lib/contracts/library';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import { modelTitle } from '../../lib/format/model-title';
+import { modelTitle } from '@/lib/format/model-title';
 
 export type SearchResultsProps = {
   result: SearchResultDto;
@@ -17,11 +17,19 @@ export function SearchResults({ result, onOpenSpec, onOpenModel }: SearchResults
   const t = useTheme();
   return (
     <View style={styles.list} testID="search-results">
-      <Text variant="small" color="textMuted">{result.total === 1 ? '1 spec' : `${result.total} specs`} for “{result.query}”</Text>
+      <Text variant="small" color="textMuted">
+        {result.total === 1 ? '1 spec' : `${result.total} specs`} for “{result.query}”
+      </Text>
       {result.groups.map((g) => (
         <Card key={g.model.id}>
-          <Pressable accessibilityRole="link" accessibilityLabel={`Open model sheet ${modelTitle(g.model)}`} onPress={() => onOpenModel(g.model.id)}>
-            <Text variant="heading" color="primary">{modelTitle(g.model)}</Text>
+          <Pressable
+            accessibilityRole="link"
+            accessibilityLabel={`Open model sheet ${modelTitle(g.model)}`}
+            onPress={() => onOpenModel(g.model.id)}
+          >
+            <Text variant="heading" color="primary">
+              {modelTitle(g.model)}
+            </Text>
           </Pressable>
           {g.hits.map((h) => (
             <Pressable
@@ -30,13 +38,20 @@ export function SearchResults({ result, onOpenSpec, onOpenModel }: SearchResults
               accessibilityRole="link"
               accessibilityLabel={`${h.component}, ${h.parameter}: ${h.display}`}
               onPress={() => onOpenSpec(h.specId)}
-              style={({ pressed }) => [styles.hit, { borderTopColor: t.border, backgroundColor: pressed ? t.surfaceMuted : 'transparent' }]}
+              style={({ pressed }) => [
+                styles.hit,
+                { borderTopColor: t.border, backgroundColor: pressed ? t.surfaceMuted : 'transparent' },
+              ]}
             >
               <View style={styles.hitText}>
-                <Text variant="small" color="textMuted">{h.component}</Text>
+                <Text variant="small" color="textMuted">
+                  {h.component}
+                </Text>
                 <Text>{h.parameter}</Text>
               </View>
-              <Text variant="label" style={styles.value}>{h.display}</Text>
+              <Text variant="label" style={styles.value}>
+                {h.display}
+              </Text>
             </Pressable>
           ))}
         </Card>
@@ -47,7 +62,14 @@ export function SearchResults({ result, onOpenSpec, onOpenModel }: SearchResults
 
 const styles = StyleSheet.create({
   list: { gap: Spacing.md },
-  hit: { flexDirection: 'row', alignItems: 'center', gap: Spacing.md, paddingVertical: Spacing.sm, borderTopWidth: StyleSheet.hairlineWidth, minHeight: 48 },
+  hit: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: Spacing.md,
+    paddingVertical: Spacing.sm,
+    borderTopWidth: StyleSheet.hairlineWidth,
+    minHeight: 48,
+  },
   hitText: { flex: 1 },
   value: { fontSize: 16, textAlign: 'right' },
 });

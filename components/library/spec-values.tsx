@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
-import type { SpecDetailDto } from '../../lib/contracts/library';
-import { formatQuantity, type CanonicalUnit } from '../../lib/units';
-import { Spacing } from '../../lib/theme';
+import type { SpecDetailDto } from '@/lib/contracts/library';
+import { formatQuantity, type CanonicalUnit } from '@/lib/units';
+import { Spacing } from '@/lib/theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 
@@ -13,13 +13,19 @@ export function SpecValues({ spec }: { spec: SpecDetailDto }) {
   const limits = (['min', 'nominal', 'max'] as const).filter((k) => spec[k] !== null);
   return (
     <Card testID="spec-values">
-      <Text variant="small" color="textMuted">{spec.component.name}</Text>
+      <Text variant="small" color="textMuted">
+        {spec.component.name}
+      </Text>
       <Text variant="heading">{spec.parameter}</Text>
-      <Text variant="title" testID="spec-display">{spec.display}</Text>
+      <Text variant="title" testID="spec-display">
+        {spec.display}
+      </Text>
       <View style={styles.limits}>
         {limits.map((k) => (
           <View key={k} style={styles.limit}>
-            <Text variant="small" color="textMuted">{LABELS[k]}</Text>
+            <Text variant="small" color="textMuted">
+              {LABELS[k]}
+            </Text>
             <Text variant="label">{formatQuantity(spec[k] as number, unit)}</Text>
           </View>
         ))}
@@ -27,7 +33,10 @@ export function SpecValues({ spec }: { spec: SpecDetailDto }) {
       <Detail label="Test points" value={spec.testPoints} />
       <Detail label="Conditions" value={spec.conditions} />
       <Detail label="Reference temperature" value={spec.refTempC === null ? null : `${spec.refTempC} °C`} />
-      <Detail label="Winding" value={spec.material === 'copper' ? 'Copper (resistance corrected for temperature)' : null} />
+      <Detail
+        label="Winding"
+        value={spec.material === 'copper' ? 'Copper (resistance corrected for temperature)' : null}
+      />
       <Detail label="Notes" value={spec.notes} />
     </Card>
   );
@@ -37,7 +46,9 @@ function Detail({ label, value }: { label: string; value: string | null }) {
   if (!value) return null;
   return (
     <View style={styles.detail}>
-      <Text variant="small" color="textMuted">{label}</Text>
+      <Text variant="small" color="textMuted">
+        {label}
+      </Text>
       <Text>{value}</Text>
     </View>
   );

@@ -1,6 +1,6 @@
 import { Pressable, StyleSheet, type PressableProps } from 'react-native';
-import { Radius, Spacing, Type } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { Radius, Spacing, Type } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from './text';
 
 export type ButtonProps = Omit<PressableProps, 'children'> & {

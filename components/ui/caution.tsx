@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import { Radius, Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { Radius, Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from './text';
 
 export type CautionProps = { title: string; lines: string[]; testID?: string };
@@ -9,9 +9,19 @@ export type CautionProps = { title: string; lines: string[]; testID?: string };
 export function Caution({ title, lines, testID }: CautionProps) {
   const t = useTheme();
   return (
-    <View testID={testID} accessibilityRole="alert" style={[styles.box, { backgroundColor: t.cautionSurface, borderColor: t.cautionBorder }]}>
-      <Text variant="label" color="caution">Caution: {title}</Text>
-      {lines.map((line) => <Text key={line} variant="small" color="text">• {line}</Text>)}
+    <View
+      testID={testID}
+      accessibilityRole="alert"
+      style={[styles.box, { backgroundColor: t.cautionSurface, borderColor: t.cautionBorder }]}
+    >
+      <Text variant="label" color="caution">
+        Caution: {title}
+      </Text>
+      {lines.map((line) => (
+        <Text key={line} variant="small" color="text">
+          • {line}
+        </Text>
+      ))}
     </View>
   );
 }

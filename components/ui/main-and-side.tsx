@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { Spacing } from '../../lib/theme';
-import { useIsWide } from '../../lib/theme/use-theme';
+import { Spacing } from '@/lib/theme';
+import { useIsWide } from '@/lib/theme/use-theme';
 
 export type MainAndSideProps = { main: ReactNode; side?: ReactNode; mainTestID?: string };
 
@@ -10,7 +10,9 @@ export function MainAndSide({ main, side, mainTestID }: MainAndSideProps) {
   const wide = useIsWide();
   return (
     <View style={[styles.columns, wide && styles.columnsWide]}>
-      <View style={styles.main} testID={mainTestID}>{main}</View>
+      <View style={styles.main} testID={mainTestID}>
+        {main}
+      </View>
       {side ? <View style={[styles.side, wide && styles.sideWide]}>{side}</View> : null}
     </View>
   );

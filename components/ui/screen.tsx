@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
-import { Spacing } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { Spacing } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 
 export type ScreenProps = { children: ReactNode; testID?: string; scroll?: boolean };
 
@@ -11,7 +11,13 @@ export function Screen({ children, testID, scroll = true }: ScreenProps) {
   const body = <View style={styles.column}>{children}</View>;
   return (
     <View testID={testID} style={[styles.root, { backgroundColor: t.background }]}>
-      {scroll ? <ScrollView contentContainerStyle={styles.scroll} keyboardShouldPersistTaps="handled">{body}</ScrollView> : body}
+      {scroll ? (
+        <ScrollView contentContainerStyle={styles.scroll} keyboardShouldPersistTaps="handled">
+          {body}
+        </ScrollView>
+      ) : (
+        body
+      )}
     </View>
   );
 }

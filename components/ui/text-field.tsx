@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
-import { Radius, Spacing, Type } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { Radius, Spacing, Type } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from './text';
 
 export type TextFieldProps = TextInputProps & {
@@ -17,19 +17,42 @@ export function TextField({ label, hideLabel, error, hint, style, onFocus, onBlu
   const [focused, setFocused] = useState(false);
   return (
     <View style={styles.wrap}>
-      {!hideLabel && <Text variant="label" color="textMuted">{label}</Text>}
+      {!hideLabel && (
+        <Text variant="label" color="textMuted">
+          {label}
+        </Text>
+      )}
       <TextInput
         accessibilityLabel={label}
         aria-label={label}
         aria-invalid={!!error}
         placeholderTextColor={t.textMuted}
-        style={[styles.input, { color: t.text, backgroundColor: t.surface, borderColor: error ? t.fail : focused ? t.focus : t.border }, focused && styles.focused, style]}
-        onFocus={(e) => { setFocused(true); onFocus?.(e); }}
-        onBlur={(e) => { setFocused(false); onBlur?.(e); }}
+        style={[
+          styles.input,
+          { color: t.text, backgroundColor: t.surface, borderColor: error ? t.fail : focused ? t.focus : t.border },
+          focused && styles.focused,
+          style,
+        ]}
+        onFocus={(e) => {
+          setFocused(true);
+          onFocus?.(e);
+        }}
+        onBlur={(e) => {
+          setFocused(false);
+          onBlur?.(e);
+        }}
         {...rest}
       />
-      {hint && !error ? <Text variant="small" color="textMuted">{hint}</Text> : null}
-      {error ? <Text variant="small" color="fail" accessibilityRole="alert">{error}</Text> : null}
+      {hint && !error ? (
+        <Text variant="small" color="textMuted">
+          {hint}
+        </Text>
+      ) : null}
+      {error ? (
+        <Text variant="small" color="fail" accessibilityRole="alert">
+          {error}
+        </Text>
+      ) : null}
     </View>
   );
 }

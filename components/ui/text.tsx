@@ -1,6 +1,6 @@
 import { Text as RNText, type TextProps as RNTextProps } from 'react-native';
-import { Type, type ThemeColor } from '../../lib/theme';
-import { useTheme } from '../../lib/theme/use-theme';
+import { Type, type ThemeColor } from '@/lib/theme';
+import { useTheme } from '@/lib/theme/use-theme';
 
 export type TextProps = RNTextProps & { variant?: keyof typeof Type; color?: ThemeColor };
 

@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { Spacing } from '../../lib/theme';
-import { useIsWide } from '../../lib/theme/use-theme';
+import { Spacing } from '@/lib/theme';
+import { useIsWide } from '@/lib/theme/use-theme';
 
 export type TwoColumnsProps = { first: ReactNode; second: ReactNode };
 

@@ -1,7 +1,17 @@
-import type { ChangePasswordBody, ResetBody, SessionDto, SignInBody, SignUpBody, UserAuditDto, UserDto, RoleValue } from '../contracts/auth';
+import type {
+  ChangePasswordBody,
+  ResetBody,
+  SessionDto,
+  SignInBody,
+  SignUpBody,
+  UserAuditDto,
+  UserDto,
+  RoleValue,
+} from '../contracts/auth';
 import { apiFetch, query } from './client';
 
-const post = <T>(path: string, body?: unknown) => apiFetch<T>(path, { method: 'POST', body: body === undefined ? undefined : JSON.stringify(body) });
+const post = <T>(path: string, body?: unknown) =>
+  apiFetch<T>(path, { method: 'POST', body: body === undefined ? undefined : JSON.stringify(body) });
 
 export const signUp = (body: SignUpBody) => post<{ message: string }>('/api/auth/sign-up', body);
 export const verifyEmail = (token: string) => post<{ user: UserDto }>('/api/auth/verify', { token });

@@ -40,19 +40,34 @@ export function requestHeaders(accept = 'application/json'): Record<string, stri
 export function errorFromAnswer(status: number, text: string, sentToken: boolean): ApiError {
   if (status === 401 && sentToken) onUnauthorized?.();
   let p: { code?: string; detail?: string; errors?: FieldError[] } = {};
-  try { p = text ? JSON.parse(text) : {}; } catch { /* not problem details */ }
-  return new ApiError(status, p.code ?? 'http_error', p.detail ?? `The server answered ${status}.`, p.errors ?? [], p as Record<string, unknown>);
+  try {
+    p = text ? JSON.parse(text) : {};
+  } catch {
+    /* not problem details */
+  }
+  return new ApiError(
+    status,
+    p.code ?? 'http_error',
+    p.detail ?? `The server answered ${status}.`,
+    p.errors ?? [],
+    p as Record<string, unknown>,
+  );
 }
 
 export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
   const headers = new Headers(init.headers);
   for (const [k, v] of Object.entries(requestHeaders())) headers.set(k, v);
-  if (init.body && typeof init.body === 'string' && !headers.has('Content-Type')) headers.set('Content-Type', 'application/json');
+  if (init.body && typeof init.body === 'string' && !headers.has('Content-Type'))
+    headers.set('Content-Type', 'application/json');
   const res = await fetch(`${BASE_URL}${path}`, { ...init, headers, credentials: 'include' });
   const text = await res.text();
   if (!res.ok) throw errorFromAnswer(res.status, text, headers.has('Authorization'));
   if (!text) return null as T;
-  try { return JSON.parse(text) as T; } catch { return null as T; }
+  try {
+    return JSON.parse(text) as T;
+  } catch {
+    return null as T;
+  }
 }
 
 /** Builds a query string from defined values only. */

@@ -1,5 +1,12 @@
 /** Job sheets: one typed function per endpoint of /api/jobs. */
-import type { CreateJobBody, JobDetailDto, JobSummaryDto, ReadingBody, ReadingDto, UpdateJobBody } from '../contracts/jobs';
+import type {
+  CreateJobBody,
+  JobDetailDto,
+  JobSummaryDto,
+  ReadingBody,
+  ReadingDto,
+  UpdateJobBody,
+} from '../contracts/jobs';
 import { apiFetch, apiFetchBlob, query } from './client';
 import { saveFile } from './save-file';
 
@@ -15,7 +22,9 @@ export const updateJob = (id: number, body: UpdateJobBody) =>
 /** 201 for a new reading, 200 when the key was seen before: either way the stored reading comes back. */
 export const addReading = (jobId: number, body: ReadingBody, idempotencyKey: string) =>
   apiFetch<ReadingDto>(`/api/jobs/${jobId}/readings`, {
-    method: 'POST', body: JSON.stringify(body), headers: { 'Idempotency-Key': idempotencyKey },
+    method: 'POST',
+    body: JSON.stringify(body),
+    headers: { 'Idempotency-Key': idempotencyKey },
   });
 
 /** Fetches the readings CSV with the session's token and saves it on the device. */

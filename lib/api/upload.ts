@@ -27,10 +27,17 @@ export function uploadFile<T>(path: string, field: string, file: UploadFile, onP
     xhr.withCredentials = true;
     const headers = requestHeaders();
     for (const [k, v] of Object.entries(headers)) xhr.setRequestHeader(k, v);
-    xhr.upload.onprogress = (e) => { if (e.lengthComputable && e.total > 0) onProgress?.(e.loaded / e.total); };
+    xhr.upload.onprogress = (e) => {
+      if (e.lengthComputable && e.total > 0) onProgress?.(e.loaded / e.total);
+    };
     xhr.onload = () => {
-      if (xhr.status < 200 || xhr.status >= 300) return reject(errorFromAnswer(xhr.status, xhr.responseText, 'Authorization' in headers));
-      try { resolve(JSON.parse(xhr.responseText) as T); } catch { reject(new ApiError(xhr.status, 'bad_response', 'The server sent an answer that could not be read.')); }
+      if (xhr.status < 200 || xhr.status >= 300)
+        return reject(errorFromAnswer(xhr.status, xhr.responseText, 'Authorization' in headers));
+      try {
+        resolve(JSON.parse(xhr.responseText) as T);
+      } catch {
+        reject(new ApiError(xhr.status, 'bad_response', 'The server sent an answer that could not be read.'));
+      }
     };
     // Same class apiFetch's network failures have, so describeError says "no connection".
     xhr.onerror = () => reject(new TypeError('Network request failed'));

@@ -10,7 +10,7 @@ export type Band = {
   lower?: number;
   upper?: number;
   /** Marginal zones: [from, to] pairs straddling or inside the limits. */
-  marginal: Array<[number, number]>;
+  marginal: [number, number][];
   value: number;
   interval?: [number, number];
 };
@@ -19,7 +19,7 @@ export function bandOf(result: VerdictResult): Band {
   const { lower, upper, nearBand, interval } = result.zones;
   const x = result.value;
   const U = result.expandedUncertainty;
-  const marginal: Array<[number, number]> = [];
+  const marginal: [number, number][] = [];
   for (const limit of [lower, upper]) {
     if (limit === undefined) continue;
     if (U !== null) marginal.push([limit - U, limit + U]);

@@ -8,19 +8,36 @@ import { unitsOfKind } from '../units';
 import { evaluateReading, VerdictInputError, type SpecLimits, type VerdictInput, type VerdictResult } from '../verdict';
 
 export type CalculatorForm = {
-  reading: string; readingUnit: CanonicalUnit;
-  lead: string; leadUnit: CanonicalUnit;
-  series: string; seriesUnit: CanonicalUnit; seriesTolerancePct: string;
+  reading: string;
+  readingUnit: CanonicalUnit;
+  lead: string;
+  leadUnit: CanonicalUnit;
+  series: string;
+  seriesUnit: CanonicalUnit;
+  seriesTolerancePct: string;
   temperatureC: string;
-  meterPercent: string; meterCounts: string; meterCountValue: string; meterUnit: CanonicalUnit;
+  meterPercent: string;
+  meterCounts: string;
+  meterCountValue: string;
+  meterUnit: CanonicalUnit;
 };
 
 export type FormErrors = Partial<Record<keyof CalculatorForm | 'spec', string>>;
 
 export function emptyForm(unit: CanonicalUnit): CalculatorForm {
   return {
-    reading: '', readingUnit: unit, lead: '', leadUnit: unit, series: '', seriesUnit: unit, seriesTolerancePct: '',
-    temperatureC: '', meterPercent: '', meterCounts: '', meterCountValue: '', meterUnit: unit,
+    reading: '',
+    readingUnit: unit,
+    lead: '',
+    leadUnit: unit,
+    series: '',
+    seriesUnit: unit,
+    seriesTolerancePct: '',
+    temperatureC: '',
+    meterPercent: '',
+    meterCounts: '',
+    meterCountValue: '',
+    meterUnit: unit,
   };
 }
 
@@ -33,15 +50,29 @@ export function parseDecimal(text: string): number | undefined {
 
 /** Which optional corrections make sense for a spec of this kind. */
 export function correctionsFor(kind: QuantityKind, material: SpecLimits['material']) {
-  return { leads: kind === 'resistance', series: kind === 'resistance', temperature: kind === 'resistance' && material === 'copper' };
+  return {
+    leads: kind === 'resistance',
+    series: kind === 'resistance',
+    temperature: kind === 'resistance' && material === 'copper',
+  };
 }
 
 const FIELD_OF: Record<string, keyof CalculatorForm | 'spec'> = {
-  reading: 'reading', 'reading.value': 'reading', 'reading.unit': 'readingUnit',
-  leadResistance: 'lead', 'leadResistance.value': 'lead', 'leadResistance.unit': 'leadUnit',
-  seriesResistance: 'series', 'seriesResistance.value': 'series', 'seriesResistance.tolerancePct': 'seriesTolerancePct',
-  temperatureC: 'temperatureC', meter: 'meterPercent', 'meter.percent': 'meterPercent', 'meter.counts': 'meterCounts',
-  'meter.countValue': 'meterCountValue', 'meter.unit': 'meterUnit',
+  reading: 'reading',
+  'reading.value': 'reading',
+  'reading.unit': 'readingUnit',
+  leadResistance: 'lead',
+  'leadResistance.value': 'lead',
+  'leadResistance.unit': 'leadUnit',
+  seriesResistance: 'series',
+  'seriesResistance.value': 'series',
+  'seriesResistance.tolerancePct': 'seriesTolerancePct',
+  temperatureC: 'temperatureC',
+  meter: 'meterPercent',
+  'meter.percent': 'meterPercent',
+  'meter.counts': 'meterCounts',
+  'meter.countValue': 'meterCountValue',
+  'meter.unit': 'meterUnit',
 };
 
 export type Calculation = { input: VerdictInput | null; result: VerdictResult | null; errors: FormErrors };
@@ -69,7 +100,12 @@ export function calculate(spec: SpecLimits, kind: QuantityKind, form: Calculator
   if (series !== undefined) input.seriesResistance = { value: series, unit: form.seriesUnit, tolerancePct: tolerance };
   if (temperature !== undefined) input.temperatureC = temperature;
   if (meterGiven) {
-    input.meter = { percent: meter.percent ?? 0, counts: meter.counts ?? 0, countValue: meter.countValue ?? 0, unit: form.meterUnit };
+    input.meter = {
+      percent: meter.percent ?? 0,
+      counts: meter.counts ?? 0,
+      countValue: meter.countValue ?? 0,
+      unit: form.meterUnit,
+    };
   }
   try {
     return { input, result: evaluateReading(input), errors };

@@ -1,41 +1,73 @@
 /** Account requests and answers, shared by the client forms and the server. */
 import { z } from 'zod';
 
-export const Email = z.string({ error: 'E-mail is required' }).trim().min(3).max(254).email('Enter a valid e-mail address');
+export const Email = z
+  .string({ error: 'E-mail is required' })
+  .trim()
+  .min(3)
+  .max(254)
+  .email('Enter a valid e-mail address');
 /** Length is checked here; the common-password list is checked on the server. */
-export const NewPassword = z.string({ error: 'Password is required' })
-  .min(12, 'Use at least 12 characters').max(200, 'Use at most 200 characters');
+export const NewPassword = z
+  .string({ error: 'Password is required' })
+  .min(12, 'Use at least 12 characters')
+  .max(200, 'Use at most 200 characters');
 
-export const SignUpBody = z.object({
-  email: Email,
-  displayName: z.string({ error: 'Name is required' }).trim().min(2, 'Use at least 2 characters').max(80)
-    .regex(/^[^<>]*$/, 'Angle brackets are not allowed'),
-  password: NewPassword,
-}).strict();
+export const SignUpBody = z
+  .object({
+    email: Email,
+    displayName: z
+      .string({ error: 'Name is required' })
+      .trim()
+      .min(2, 'Use at least 2 characters')
+      .max(80)
+      .regex(/^[^<>]*$/, 'Angle brackets are not allowed'),
+    password: NewPassword,
+  })
+  .strict();
 export type SignUpBody = z.infer<typeof SignUpBody>;
 
-export const SignInBody = z.object({ email: Email, password: z.string().min(1, 'Password is required').max(200) }).strict();
+export const SignInBody = z
+  .object({ email: Email, password: z.string().min(1, 'Password is required').max(200) })
+  .strict();
 export type SignInBody = z.infer<typeof SignInBody>;
 
 export const TokenBody = z.object({ token: z.string().trim().min(20).max(200) }).strict();
 export const ForgotBody = z.object({ email: Email }).strict();
 export const ResetBody = z.object({ token: z.string().trim().min(20).max(200), password: NewPassword }).strict();
 export type ResetBody = z.infer<typeof ResetBody>;
-export const ChangePasswordBody = z.object({ currentPassword: z.string().min(1).max(200), newPassword: NewPassword }).strict();
+export const ChangePasswordBody = z
+  .object({ currentPassword: z.string().min(1).max(200), newPassword: NewPassword })
+  .strict();
 export type ChangePasswordBody = z.infer<typeof ChangePasswordBody>;
 
 export const ROLE_VALUES = ['contributor', 'editor', 'admin'] as const;
 export type RoleValue = (typeof ROLE_VALUES)[number];
 
 export const UsersQuery = z.object({ q: z.string().trim().max(120).optional() });
-export const UpdateUserBody = z.object({
-  role: z.enum(ROLE_VALUES).optional(),
-  disabled: z.boolean().optional(),
-}).strict().refine((b) => b.role !== undefined || b.disabled !== undefined, { message: 'Give a role or disabled.' });
+export const UpdateUserBody = z
+  .object({
+    role: z.enum(ROLE_VALUES).optional(),
+    disabled: z.boolean().optional(),
+  })
+  .strict()
+  .refine((b) => b.role !== undefined || b.disabled !== undefined, { message: 'Give a role or disabled.' });
 
 export type UserDto = {
-  id: number; email: string; displayName: string; role: RoleValue;
-  emailVerified: boolean; disabled: boolean; createdAt: string;
+  id: number;
+  email: string;
+  displayName: string;
+  role: RoleValue;
+  emailVerified: boolean;
+  disabled: boolean;
+  createdAt: string;
 };
 export type SessionDto = { accessToken: string; expiresIn: number; user: UserDto };
-export type UserAuditDto = { id: number; action: string; fromValue: string | null; toValue: string | null; actorName: string; createdAt: string };
+export type UserAuditDto = {
+  id: number;
+  action: string;
+  fromValue: string | null;
+  toValue: string | null;
+  actorName: string;
+  createdAt: string;
+};

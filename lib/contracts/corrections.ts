@@ -7,56 +7,118 @@ import { z } from 'zod';
 import { parseUnit } from '../units';
 import { specValueIssues } from './curation';
 
-const line = (label: string, max: number) => z.string({ error: `${label} must be text` }).trim().max(max, `${label}: at most ${max} characters`)
-  .refine((s) => !/[\r\n\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(s), `${label} must be one line of plain text`);
-const para = (label: string, max: number) => z.string({ error: `${label} must be text` }).trim().max(max, `${label}: at most ${max} characters`)
-  .refine((s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(s), `${label} contains an invisible control character`);
+const line = (label: string, max: number) =>
+  z
+    .string({ error: `${label} must be text` })
+    .trim()
+    .max(max, `${label}: at most ${max} characters`)
+    .refine((s) => !/[\r\n\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(s), `${label} must be one line of plain text`);
+const para = (label: string, max: number) =>
+  z
+    .string({ error: `${label} must be text` })
+    .trim()
+    .max(max, `${label}: at most ${max} characters`)
+    .refine(
+      (s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(s),
+      `${label} contains an invisible control character`,
+    );
 const limit = z.number({ error: 'must be a number or null' }).finite().nullable().default(null);
 
-export const ProposedValues = z.object({
-  min: limit, nominal: limit, max: limit,
-  unit: z.string({ error: 'unit is required' }).trim().min(1, 'unit is required').max(12)
-    .refine((u) => parseUnit(u) !== null, 'unit is not recognised; use Ω, kΩ, MΩ, V, mV, A, mA, mm, in or thou'),
-  refTempC: z.number().min(-40).max(200).nullable().default(null),
-  material: z.enum(['copper', 'none']).optional(),
-  testPoints: para('test points', 1000).default(''),
-  conditions: para('conditions', 1000).default(''),
-}).strict();
+export const ProposedValues = z
+  .object({
+    min: limit,
+    nominal: limit,
+    max: limit,
+    unit: z
+      .string({ error: 'unit is required' })
+      .trim()
+      .min(1, 'unit is required')
+      .max(12)
+      .refine((u) => parseUnit(u) !== null, 'unit is not recognised; use Ω, kΩ, MΩ, V, mV, A, mA, mm, in or thou'),
+    refTempC: z.number().min(-40).max(200).nullable().default(null),
+    material: z.enum(['copper', 'none']).optional(),
+    testPoints: para('test points', 1000).default(''),
+    conditions: para('conditions', 1000).default(''),
+  })
+  .strict();
 export type ProposedValues = z.infer<typeof ProposedValues>;
 
-export const CitationInput = z.object({
-  title: line('source title', 200).refine((s) => s.length > 0, 'source title is required'),
-  edition: line('source edition', 200).default(''),
-  page: line('source page', 40).refine((s) => s.length > 0, 'source page is required'),
-  url: z.string().trim().max(500).refine((s) => s === '' || /^https?:\/\/\S+$/i.test(s), 'url must start with http:// or https://')
-    .nullable().optional().transform((s) => s || null),
-}).strict();
+export const CitationInput = z
+  .object({
+    title: line('source title', 200).refine((s) => s.length > 0, 'source title is required'),
+    edition: line('source edition', 200).default(''),
+    page: line('source page', 40).refine((s) => s.length > 0, 'source page is required'),
+    url: z
+      .string()
+      .trim()
+      .max(500)
+      .refine((s) => s === '' || /^https?:\/\/\S+$/i.test(s), 'url must start with http:// or https://')
+      .nullable()
+      .optional()
+      .transform((s) => s || null),
+  })
+  .strict();
 
-const common = { values: ProposedValues, citation: CitationInput, rationale: para('rationale', 2000).refine((s) => s.length >= 10, 'say why, in at least 10 characters') };
+const common = {
+  values: ProposedValues,
+  citation: CitationInput,
+  rationale: para('rationale', 2000).refine((s) => s.length >= 10, 'say why, in at least 10 characters'),
+};
 
 /** Adds the value rules, with the parameter the values are for. */
 const checkValues = (parameter: string | undefined, values: ProposedValues, ctx: z.RefinementCtx) => {
   if (!parameter) return;
-  for (const i of specValueIssues({ parameter, ...values })) ctx.addIssue({ code: 'custom', path: ['values', i.path], message: i.message });
+  for (const i of specValueIssues({ parameter, ...values }))
+    ctx.addIssue({ code: 'custom', path: ['values', i.path], message: i.message });
 };
 
-export const ProposeBody = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('change'), specId: z.number().int().positive(), version: z.number().int().positive(), ...common }).strict(),
-  z.object({ kind: z.literal('new_spec'), componentId: z.number().int().positive(), parameter: line('parameter', 120).refine((s) => s.length > 0, 'parameter is required'), ...common }).strict(),
-  z.object({
-    kind: z.literal('new_component'), modelId: z.number().int().positive(),
-    component: line('component', 120).refine((s) => s.length > 0, 'component is required'),
-    parameter: line('parameter', 120).refine((s) => s.length > 0, 'parameter is required'), ...common,
-  }).strict(),
-]).superRefine((b, ctx) => checkValues('parameter' in b ? b.parameter : undefined, b.values, ctx));
+export const ProposeBody = z
+  .discriminatedUnion('kind', [
+    z
+      .object({
+        kind: z.literal('change'),
+        specId: z.number().int().positive(),
+        version: z.number().int().positive(),
+        ...common,
+      })
+      .strict(),
+    z
+      .object({
+        kind: z.literal('new_spec'),
+        componentId: z.number().int().positive(),
+        parameter: line('parameter', 120).refine((s) => s.length > 0, 'parameter is required'),
+        ...common,
+      })
+      .strict(),
+    z
+      .object({
+        kind: z.literal('new_component'),
+        modelId: z.number().int().positive(),
+        component: line('component', 120).refine((s) => s.length > 0, 'component is required'),
+        parameter: line('parameter', 120).refine((s) => s.length > 0, 'parameter is required'),
+        ...common,
+      })
+      .strict(),
+  ])
+  .superRefine((b, ctx) => checkValues('parameter' in b ? b.parameter : undefined, b.values, ctx));
 export type ProposeBody = z.infer<typeof ProposeBody>;
 
-export const EditProposalBody = z.object({ values: ProposedValues.optional(), citation: CitationInput.optional(), rationale: common.rationale.optional() }).strict()
+export const EditProposalBody = z
+  .object({
+    values: ProposedValues.optional(),
+    citation: CitationInput.optional(),
+    rationale: common.rationale.optional(),
+  })
+  .strict()
   .refine((b) => b.values || b.citation || b.rationale, 'change at least one of values, citation or rationale');
 export type EditProposalBody = z.infer<typeof EditProposalBody>;
 
-export const AcceptBody = z.object({ confirmStale: z.boolean().optional(), note: para('note', 1000).optional() }).strict();
-export const RejectBody = z.object({ note: para('note', 1000).refine((s) => s.length >= 3, 'tell the proposer why, in a few words') }).strict();
+export const AcceptBody = z
+  .object({ confirmStale: z.boolean().optional(), note: para('note', 1000).optional() })
+  .strict();
+export const RejectBody = z
+  .object({ note: para('note', 1000).refine((s) => s.length >= 3, 'tell the proposer why, in a few words') })
+  .strict();
 export const CorrectionsQuery = z.object({
   status: z.enum(['pending', 'accepted', 'rejected', 'withdrawn']).optional(),
   mine: z.enum(['true', 'false']).optional(),
@@ -65,14 +127,29 @@ export const CorrectionsQuery = z.object({
 });
 
 export type CorrectionDto = {
-  id: number; kind: 'change' | 'new_spec' | 'new_component'; status: 'pending' | 'accepted' | 'rejected' | 'withdrawn';
-  specId: number | null; componentId: number | null; modelId: number; modelTitle: string; componentName: string; parameter: string;
-  proposed: ProposedValues; citation: { title: string; edition: string; page: string; url: string | null }; rationale: string;
-  baseVersion: number | null; proposer: { id: number; name: string; accepted: number; rejected: number };
-  reviewerName: string | null; decisionNote: string | null; decidedAt: string | null; createdAt: string; updatedAt: string;
+  id: number;
+  kind: 'change' | 'new_spec' | 'new_component';
+  status: 'pending' | 'accepted' | 'rejected' | 'withdrawn';
+  specId: number | null;
+  componentId: number | null;
+  modelId: number;
+  modelTitle: string;
+  componentName: string;
+  parameter: string;
+  proposed: ProposedValues;
+  citation: { title: string; edition: string; page: string; url: string | null };
+  rationale: string;
+  baseVersion: number | null;
+  proposer: { id: number; name: string; accepted: number; rejected: number };
+  reviewerName: string | null;
+  decisionNote: string | null;
+  decidedAt: string | null;
+  createdAt: string;
+  updatedAt: string;
 };
 /** For review: the values when proposed, now, and as proposed, field by field. */
 export type CorrectionReviewDto = CorrectionDto & {
-  stale: boolean; currentVersion: number | null;
-  fields: Array<{ field: string; proposedAgainst: unknown; current: unknown; proposed: unknown }>;
+  stale: boolean;
+  currentVersion: number | null;
+  fields: { field: string; proposedAgainst: unknown; current: unknown; proposed: unknown }[];
 };

@@ -14,28 +14,48 @@ const CONTROL_CHARS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 
 /** Trimmed text up to `max` characters; single-line unless `multiline`. */
 const text = (label: string, max: number, multiline = false) =>
-  z.string({ error: `${label} must be text` }).trim()
+  z
+    .string({ error: `${label} must be text` })
+    .trim()
     .max(max, `${label} is too long; the limit is ${max} characters`)
     .refine((s) => !CONTROL_CHARS.test(s), `${label} contains an invisible control character; retype it`)
     .refine((s) => multiline || !/[\r\n]/.test(s), `${label} must fit on one line`);
 const required = (label: string, max: number) => text(label, max).refine((s) => s.length > 0, `${label} is required`);
 
 const limit = (label: string) => z.number({ error: `${label} must be a number or null` }).nullable();
-const year = (label: string) => z.number({ error: `${label} must be a year` }).int(`${label} must be a whole year`)
-  .min(1900, `${label} must be 1900 or later`).max(2100, `${label} must be 2100 or earlier`);
+const year = (label: string) =>
+  z
+    .number({ error: `${label} must be a year` })
+    .int(`${label} must be a whole year`)
+    .min(1900, `${label} must be 1900 or later`)
+    .max(2100, `${label} must be 2100 or earlier`);
 
 const unit = z.string({ error: 'unit is required' }).transform((s, ctx): CanonicalUnit => {
   const parsed = parseUnit(s);
-  if (!parsed) ctx.addIssue({ code: 'custom', message: `unit "${s}" is not recognised; use one of Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil)` });
+  if (!parsed)
+    ctx.addIssue({
+      code: 'custom',
+      message: `unit "${s}" is not recognised; use one of Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil)`,
+    });
   return (parsed?.unit ?? s) as CanonicalUnit;
 });
 
-const url = z.string().trim().max(500, 'source url is too long; the limit is 500 characters')
-  .refine((s) => s === '' || /^https?:\/\/[^\s/?#"<>]+[^\s"<>]*$/i.test(s), 'source url must be a web address starting with http:// or https://')
-  .nullable().transform((s) => s || null);
+const url = z
+  .string()
+  .trim()
+  .max(500, 'source url is too long; the limit is 500 characters')
+  .refine(
+    (s) => s === '' || /^https?:\/\/[^\s/?#"<>]+[^\s"<>]*$/i.test(s),
+    'source url must be a web address starting with http:// or https://',
+  )
+  .nullable()
+  .transform((s) => s || null);
 
-export const Reason = z.string({ error: 'reason is required: say why the spec changes' }).trim()
-  .min(3, 'reason must be at least 3 characters').max(500, 'reason is too long; the limit is 500 characters');
+export const Reason = z
+  .string({ error: 'reason is required: say why the spec changes' })
+  .trim()
+  .min(3, 'reason must be at least 3 characters')
+  .max(500, 'reason is too long; the limit is 500 characters');
 
 export const SourceInput = z.object({
   title: required('source title', 200),
@@ -52,7 +72,11 @@ const valueFields = {
   nominal: limit('nominal'),
   max: limit('max'),
   unit,
-  refTempC: z.number({ error: 'refTempC must be a number or null' }).min(-40, 'refTempC must be −40 °C or warmer').max(200, 'refTempC must be 200 °C or colder').nullable(),
+  refTempC: z
+    .number({ error: 'refTempC must be a number or null' })
+    .min(-40, 'refTempC must be −40 °C or warmer')
+    .max(200, 'refTempC must be 200 °C or colder')
+    .nullable(),
   material: z.enum(['copper', 'none'], { error: 'material must be copper or none' }),
   testPoints: text('test points', 1000, true),
   conditions: text('conditions', 1000, true),
@@ -62,25 +86,43 @@ const valueFields = {
 };
 
 export type SpecValueIssue = { path: string; message: string };
-type CheckedValues = { parameter: string; min: number | null; nominal: number | null; max: number | null; unit: string };
+type CheckedValues = {
+  parameter: string;
+  min: number | null;
+  nominal: number | null;
+  max: number | null;
+  unit: string;
+};
 
 /** Rules between fields, applied to the body and again to the spec an edit would leave. */
 export function specValueIssues(v: CheckedValues): SpecValueIssue[] {
   const issues: SpecValueIssue[] = [];
   const { min, nominal, max } = v;
-  if (min === null && nominal === null && max === null) issues.push({ path: 'min', message: 'give at least one of min, nominal or max' });
-  if (min !== null && max !== null && min > max) issues.push({ path: 'min', message: `min ${min} is greater than max ${max}` });
-  if (min !== null && nominal !== null && min > nominal) issues.push({ path: 'nominal', message: `nominal ${nominal} is less than min ${min}` });
-  if (nominal !== null && max !== null && nominal > max) issues.push({ path: 'nominal', message: `nominal ${nominal} is greater than max ${max}` });
+  if (min === null && nominal === null && max === null)
+    issues.push({ path: 'min', message: 'give at least one of min, nominal or max' });
+  if (min !== null && max !== null && min > max)
+    issues.push({ path: 'min', message: `min ${min} is greater than max ${max}` });
+  if (min !== null && nominal !== null && min > nominal)
+    issues.push({ path: 'nominal', message: `nominal ${nominal} is less than min ${min}` });
+  if (nominal !== null && max !== null && nominal > max)
+    issues.push({ path: 'nominal', message: `nominal ${nominal} is greater than max ${max}` });
   const parsed = parseUnit(v.unit);
   if (!parsed) return issues;
   const needed = expectedKindForParameter(v.parameter);
   if (needed && needed !== parsed.kind) {
-    issues.push({ path: 'unit', message: `unit ${parsed.unit} is a ${parsed.kind} unit but parameter '${v.parameter}' needs a ${needed} unit` });
+    issues.push({
+      path: 'unit',
+      message: `unit ${parsed.unit} is a ${parsed.kind} unit but parameter '${v.parameter}' needs a ${needed} unit`,
+    });
   }
   if (parsed.kind === 'resistance' || parsed.kind === 'length') {
-    for (const [path, value] of [['min', min], ['nominal', nominal], ['max', max]] as const) {
-      if (value !== null && value < 0) issues.push({ path, message: `${path} ${value} is negative; a ${parsed.kind} cannot be below zero` });
+    for (const [path, value] of [
+      ['min', min],
+      ['nominal', nominal],
+      ['max', max],
+    ] as const) {
+      if (value !== null && value < 0)
+        issues.push({ path, message: `${path} ${value} is negative; a ${parsed.kind} cannot be below zero` });
     }
   }
   return issues;
@@ -91,54 +133,71 @@ const addIssues = (values: CheckedValues, ctx: z.RefinementCtx) => {
 };
 
 /** POST /api/specs: a new spec; make, model, component and source are found or created by natural key. */
-export const CreateSpecBody = z.object({
-  make: required('make', 120),
-  model: required('model', 120),
-  yearFrom: year('yearFrom'),
-  yearTo: year('yearTo').nullable().default(null),
-  variant: text('variant', 120).default(''),
-  component: required('component', 120),
-  ...valueFields,
-  min: valueFields.min.default(null),
-  nominal: valueFields.nominal.default(null),
-  max: valueFields.max.default(null),
-  refTempC: valueFields.refTempC.default(null),
-  /** Absent: copper for winding and coil resistances, none otherwise (as the CSV importer decides). */
-  material: valueFields.material.optional(),
-  testPoints: valueFields.testPoints.default(''),
-  conditions: valueFields.conditions.default(''),
-  notes: valueFields.notes.default(''),
-  status: valueFields.status.default('published'),
-  reason: Reason.default('Created in the spec editor'),
-}).strict().superRefine((b, ctx) => {
-  if (b.yearTo !== null && b.yearTo < b.yearFrom) ctx.addIssue({ code: 'custom', path: ['yearTo'], message: `yearTo ${b.yearTo} is before yearFrom ${b.yearFrom}` });
-  addIssues(b, ctx);
-});
+export const CreateSpecBody = z
+  .object({
+    make: required('make', 120),
+    model: required('model', 120),
+    yearFrom: year('yearFrom'),
+    yearTo: year('yearTo').nullable().default(null),
+    variant: text('variant', 120).default(''),
+    component: required('component', 120),
+    ...valueFields,
+    min: valueFields.min.default(null),
+    nominal: valueFields.nominal.default(null),
+    max: valueFields.max.default(null),
+    refTempC: valueFields.refTempC.default(null),
+    /** Absent: copper for winding and coil resistances, none otherwise (as the CSV importer decides). */
+    material: valueFields.material.optional(),
+    testPoints: valueFields.testPoints.default(''),
+    conditions: valueFields.conditions.default(''),
+    notes: valueFields.notes.default(''),
+    status: valueFields.status.default('published'),
+    reason: Reason.default('Created in the spec editor'),
+  })
+  .strict()
+  .superRefine((b, ctx) => {
+    if (b.yearTo !== null && b.yearTo < b.yearFrom)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['yearTo'],
+        message: `yearTo ${b.yearTo} is before yearFrom ${b.yearFrom}`,
+      });
+    addIssues(b, ctx);
+  });
 export type CreateSpecBody = z.infer<typeof CreateSpecBody>;
 
-const VALUE_KEYS = Object.keys(valueFields) as Array<keyof typeof valueFields>;
+const VALUE_KEYS = Object.keys(valueFields) as (keyof typeof valueFields)[];
 
 /**
  * PATCH /api/specs/:id: the version the edit is based on, why, and the fields that change.
  * Cross-field rules run here on what the body gives, and on the server again on the result.
  */
-export const UpdateSpecBody = z.object({
-  version: z.number({ error: 'version is required: the version this edit is based on' }).int().positive(),
-  reason: Reason,
-  ...Object.fromEntries(VALUE_KEYS.map((k) => [k, valueFields[k].optional()])) as { [K in keyof typeof valueFields]: z.ZodOptional<(typeof valueFields)[K]> },
-}).strict().superRefine((b, ctx) => {
-  if (!VALUE_KEYS.some((k) => b[k] !== undefined)) ctx.addIssue({ code: 'custom', path: [], message: 'change at least one field' });
-  const { min = null, nominal = null, max = null } = b;
-  if (min !== null && max !== null && min > max) ctx.addIssue({ code: 'custom', path: ['min'], message: `min ${min} is greater than max ${max}` });
-});
+export const UpdateSpecBody = z
+  .object({
+    version: z.number({ error: 'version is required: the version this edit is based on' }).int().positive(),
+    reason: Reason,
+    ...(Object.fromEntries(VALUE_KEYS.map((k) => [k, valueFields[k].optional()])) as {
+      [K in keyof typeof valueFields]: z.ZodOptional<(typeof valueFields)[K]>;
+    }),
+  })
+  .strict()
+  .superRefine((b, ctx) => {
+    if (!VALUE_KEYS.some((k) => b[k] !== undefined))
+      ctx.addIssue({ code: 'custom', path: [], message: 'change at least one field' });
+    const { min = null, max = null } = b;
+    if (min !== null && max !== null && min > max)
+      ctx.addIssue({ code: 'custom', path: ['min'], message: `min ${min} is greater than max ${max}` });
+  });
 export type UpdateSpecBody = z.infer<typeof UpdateSpecBody>;
 
 /** POST /api/specs/:id/revert: bring back one revision's values, as a new revision. */
-export const RevertSpecBody = z.object({
-  revisionId: z.number({ error: 'revisionId is required' }).int().positive(),
-  version: z.number({ error: 'version is required: the version this revert is based on' }).int().positive(),
-  reason: Reason,
-}).strict();
+export const RevertSpecBody = z
+  .object({
+    revisionId: z.number({ error: 'revisionId is required' }).int().positive(),
+    version: z.number({ error: 'version is required: the version this revert is based on' }).int().positive(),
+    reason: Reason,
+  })
+  .strict();
 export type RevertSpecBody = z.infer<typeof RevertSpecBody>;
 
 export type FieldChangeDto = { field: string; before: string | number | null; after: string | number | null };

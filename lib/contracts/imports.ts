@@ -6,15 +6,22 @@ import { z } from 'zod';
 import { Reason, type FieldChangeDto } from './curation';
 
 const count = (name: string, max: number, fallback: number) =>
-  z.coerce.number({ error: `${name} must be a number` }).int(`${name} must be a whole number`)
-    .min(name === 'offset' ? 0 : 1, `${name} is too small`).max(max, `${name} must be at most ${max}`).default(fallback);
+  z.coerce
+    .number({ error: `${name} must be a number` })
+    .int(`${name} must be a whole number`)
+    .min(name === 'offset' ? 0 : 1, `${name} is too small`)
+    .max(max, `${name} must be at most ${max}`)
+    .default(fallback);
 
 /** GET /api/imports */
 export const ImportListQuery = z.object({ limit: count('limit', 100, 20) });
 export type ImportListQuery = z.infer<typeof ImportListQuery>;
 
 /** POST /api/imports and GET /api/imports/:id: each group lists rows offset … offset + limit − 1. */
-export const ImportPreviewQuery = z.object({ offset: count('offset', 1_000_000, 0), limit: count('limit', 5000, 1000) });
+export const ImportPreviewQuery = z.object({
+  offset: count('offset', 1_000_000, 0),
+  limit: count('limit', 5000, 1000),
+});
 export type ImportPreviewQuery = z.infer<typeof ImportPreviewQuery>;
 
 /** POST /api/imports/:id/commit: the reason every revision of this commit records. */
@@ -22,14 +29,22 @@ export const ImportCommitBody = z.object({ reason: Reason.optional() }).strict()
 export type ImportCommitBody = z.infer<typeof ImportCommitBody>;
 
 /** GET /api/exports/specs.csv: the whole published library, one make, or one model. */
-export const ExportQuery = z.object({
-  make: z.string().trim().min(1, 'make must not be empty').max(120).optional(),
-  modelId: z.coerce.number({ error: 'modelId must be a number' }).int().positive().max(2_147_483_647).optional(),
-}).refine((q) => !(q.make && q.modelId), { message: 'give make or modelId, not both', path: ['modelId'] });
+export const ExportQuery = z
+  .object({
+    make: z.string().trim().min(1, 'make must not be empty').max(120).optional(),
+    modelId: z.coerce.number({ error: 'modelId must be a number' }).int().positive().max(2_147_483_647).optional(),
+  })
+  .refine((q) => !(q.make && q.modelId), { message: 'give make or modelId, not both', path: ['modelId'] });
 export type ExportQuery = z.infer<typeof ExportQuery>;
 
 export type ImportStatus = 'previewed' | 'committed' | 'failed';
-export type ImportCountsDto = { created: number; updated: number; unchanged: number; rejected: number; warnings: number };
+export type ImportCountsDto = {
+  created: number;
+  updated: number;
+  unchanged: number;
+  rejected: number;
+  warnings: number;
+};
 
 export type ImportBatchSummaryDto = {
   id: number;
@@ -51,8 +66,13 @@ export type ImportRowDto = {
   line: number;
   /** The spec the row matched (update / unchanged) or created (after commit). */
   specId: number | null;
-  make: string; model: string; yearFrom: number; yearTo: number | null; variant: string;
-  component: string; parameter: string;
+  make: string;
+  model: string;
+  yearFrom: number;
+  yearTo: number | null;
+  variant: string;
+  component: string;
+  parameter: string;
   /** The row's limits as the library shows them, e.g. '2.4–3.2 Ω'. */
   display: string;
   /** Valid but unusual values: accepted, with a note to check. */
@@ -72,4 +92,4 @@ export type ImportPreviewDto = ImportBatchSummaryDto & {
   page: { offset: number; limit: number };
 };
 
-export type ColumnReferenceDto = Array<{ column: string; required: boolean; description: string; example: string }>;
+export type ColumnReferenceDto = { column: string; required: boolean; description: string; example: string }[];

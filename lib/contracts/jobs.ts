@@ -3,28 +3,37 @@ import { z } from 'zod';
 import { VerdictFields, exactlyOneSpec, type VerdictResponse } from './verdicts';
 
 /** VIN / frame numbers: letters, digits, spaces, dashes, dots and slashes. */
-const MachineId = z.string().trim().max(40, 'At most 40 characters')
+const MachineId = z
+  .string()
+  .trim()
+  .max(40, 'At most 40 characters')
   .regex(/^[A-Za-z0-9 ./-]*$/, 'Letters, digits, spaces, dots, dashes and slashes only');
 const Text = (max: number) => z.string().trim().max(max, `At most ${max} characters`);
 
-export const CreateJobBody = z.object({
-  modelId: z.number().int().positive().optional(),
-  machineLabel: Text(160).optional(),
-  machineId: MachineId.optional(),
-  customerRef: Text(80).optional(),
-  notes: Text(4000).optional(),
-}).strict().refine((b) => b.modelId !== undefined || (b.machineLabel ?? '').length > 0, {
-  message: 'Pick a model from the library or describe the machine.', path: ['machineLabel'],
-});
+export const CreateJobBody = z
+  .object({
+    modelId: z.number().int().positive().optional(),
+    machineLabel: Text(160).optional(),
+    machineId: MachineId.optional(),
+    customerRef: Text(80).optional(),
+    notes: Text(4000).optional(),
+  })
+  .strict()
+  .refine((b) => b.modelId !== undefined || (b.machineLabel ?? '').length > 0, {
+    message: 'Pick a model from the library or describe the machine.',
+    path: ['machineLabel'],
+  });
 export type CreateJobBody = z.infer<typeof CreateJobBody>;
 
-export const UpdateJobBody = z.object({
-  machineLabel: Text(160).optional(),
-  machineId: MachineId.optional(),
-  customerRef: Text(80).optional(),
-  notes: Text(4000).optional(),
-  status: z.enum(['open', 'closed']).optional(),
-}).strict();
+export const UpdateJobBody = z
+  .object({
+    machineLabel: Text(160).optional(),
+    machineId: MachineId.optional(),
+    customerRef: Text(80).optional(),
+    notes: Text(4000).optional(),
+    status: z.enum(['open', 'closed']).optional(),
+  })
+  .strict();
 export type UpdateJobBody = z.infer<typeof UpdateJobBody>;
 
 export const JobsQuery = z.object({
@@ -39,25 +48,49 @@ export const ReadingBody = VerdictFields.extend({
   retakeOf: z.number().int().positive().optional(),
   /** When it was taken on the device (readings queued offline arrive later). */
   takenAt: z.string().datetime({ offset: true }).optional(),
-}).strict().refine(exactlyOneSpec, { message: 'Give exactly one of specId or spec.', path: ['specId'] })
-  .refine((b) => b.specId !== undefined || (b.label ?? '').length > 0, { message: 'Say what was measured.', path: ['label'] });
+})
+  .strict()
+  .refine(exactlyOneSpec, { message: 'Give exactly one of specId or spec.', path: ['specId'] })
+  .refine((b) => b.specId !== undefined || (b.label ?? '').length > 0, {
+    message: 'Say what was measured.',
+    path: ['label'],
+  });
 export type ReadingBody = z.infer<typeof ReadingBody>;
 
 export const IDEMPOTENCY_KEY = /^[A-Za-z0-9_.:-]{8,80}$/;
 
 export type ReadingDto = Omit<VerdictResponse, 'specVersion'> & {
-  id: number; jobId: number; label: string; componentName: string;
-  specId: number | null; specVersion: number | null; specLimits: Record<string, unknown>; inputs: Record<string, unknown>;
+  id: number;
+  jobId: number;
+  label: string;
+  componentName: string;
+  specId: number | null;
+  specVersion: number | null;
+  specLimits: Record<string, unknown>;
+  inputs: Record<string, unknown>;
   /** The spec has been edited since this reading was judged. */
   specChangedSince: boolean;
   citation: string | null;
-  supersededBy: number | null; takenAt: string; createdAt: string; idempotencyKey: string;
+  supersededBy: number | null;
+  takenAt: string;
+  createdAt: string;
+  idempotencyKey: string;
 };
 
 export type JobSummaryDto = {
-  id: number; ownerId: number; ownerName: string; modelId: number | null; modelTitle: string | null; machineLabel: string;
-  machineId: string; customerRef: string; notes: string | null; status: 'open' | 'closed';
-  counts: { pass: number; marginal: number; fail: number }; createdAt: string; updatedAt: string;
+  id: number;
+  ownerId: number;
+  ownerName: string;
+  modelId: number | null;
+  modelTitle: string | null;
+  machineLabel: string;
+  machineId: string;
+  customerRef: string;
+  notes: string | null;
+  status: 'open' | 'closed';
+  counts: { pass: number; marginal: number; fail: number };
+  createdAt: string;
+  updatedAt: string;
 };
 
 export type JobDetailDto = JobSummaryDto & { readings: ReadingDto[] };

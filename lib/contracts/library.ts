@@ -5,12 +5,20 @@
 import { z } from 'zod';
 
 export const IdParams = z.object({
-  id: z.coerce.number({ error: 'id must be a number' }).int('id must be a whole number').positive('id must be positive').max(2_147_483_647),
+  id: z.coerce
+    .number({ error: 'id must be a number' })
+    .int('id must be a whole number')
+    .positive('id must be positive')
+    .max(2_147_483_647),
 });
 export type IdParams = z.infer<typeof IdParams>;
 
 export const SearchQuery = z.object({
-  q: z.string({ error: 'q is required' }).trim().min(1, 'Type at least one character').max(200, 'Keep the query under 200 characters'),
+  q: z
+    .string({ error: 'q is required' })
+    .trim()
+    .min(1, 'Type at least one character')
+    .max(200, 'Keep the query under 200 characters'),
   limit: z.coerce.number().int().min(1).max(100).default(40),
 });
 export type SearchQuery = z.infer<typeof SearchQuery>;
@@ -58,7 +66,7 @@ export type ComponentDto = {
 };
 
 export type ModelDetailDto = ModelSummaryDto & {
-  components: Array<ComponentDto & { specs: SpecSummaryDto[] }>;
+  components: (ComponentDto & { specs: SpecSummaryDto[] })[];
 };
 
 export type SourceDto = {

@@ -12,15 +12,17 @@ const Num = z.custom<number>((v) => typeof v === 'number', { message: 'must be a
 const UnitText = z.string({ error: 'unit is required' }).trim().min(1, 'unit is required').max(12);
 const QuantityBody = z.object({ value: Num, unit: UnitText }).strict();
 
-export const SpecLimitsBody = z.object({
-  min: Num.optional(),
-  nominal: Num.optional(),
-  max: Num.optional(),
-  unit: UnitText,
-  refTempC: Num.optional(),
-  material: z.enum(['copper', 'none']).optional(),
-  nearLimitPct: Num.optional(),
-}).strict();
+export const SpecLimitsBody = z
+  .object({
+    min: Num.optional(),
+    nominal: Num.optional(),
+    max: Num.optional(),
+    unit: UnitText,
+    refTempC: Num.optional(),
+    material: z.enum(['copper', 'none']).optional(),
+    nearLimitPct: Num.optional(),
+  })
+  .strict();
 
 /** The verdict inputs, without the exactly-one-of rule (so other bodies can extend them). */
 export const VerdictFields = z.object({
@@ -33,7 +35,8 @@ export const VerdictFields = z.object({
   meter: z.object({ percent: Num, counts: Num, countValue: Num, unit: UnitText }).strict().optional(),
 });
 
-export const exactlyOneSpec = (b: { specId?: number; spec?: unknown }) => (b.specId === undefined) !== (b.spec === undefined);
+export const exactlyOneSpec = (b: { specId?: number; spec?: unknown }) =>
+  (b.specId === undefined) !== (b.spec === undefined);
 const ONE_SPEC = { message: 'Give exactly one of specId or spec.', path: ['specId'] };
 
 export const VerdictBody = VerdictFields.strict().refine(exactlyOneSpec, ONE_SPEC);

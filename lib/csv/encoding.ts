@@ -20,7 +20,11 @@ function looksLikeUtf16(bytes: Uint8Array): boolean {
   const sample = bytes.subarray(0, 4096);
   let even = 0;
   let odd = 0;
-  for (let i = 0; i < sample.length; i++) if (sample[i] === 0) (i % 2 === 0 ? even++ : odd++);
+  for (let i = 0; i < sample.length; i++) {
+    if (sample[i] !== 0) continue;
+    if (i % 2 === 0) even++;
+    else odd++;
+  }
   const half = sample.length / 2;
   return Math.max(even, odd) >= half * 0.3 && Math.min(even, odd) <= half * 0.05;
 }
@@ -60,11 +64,17 @@ export function checkCsvBytes(bytes: Uint8Array): RowProblem | null {
   const nul = bytes.indexOf(0);
   if (nul !== -1) {
     if (looksLikeUtf16(bytes)) return fileProblem(`the file is saved as UTF-16 ("Unicode text"); ${SAVE_AS}`);
-    return fileProblem(`the file contains binary data (a NUL byte), so it is not a CSV text file; ${SAVE_AS}`, lineOfOffset(bytes, nul));
+    return fileProblem(
+      `the file contains binary data (a NUL byte), so it is not a CSV text file; ${SAVE_AS}`,
+      lineOfOffset(bytes, nul),
+    );
   }
   const bad = firstInvalidUtf8Line(bytes);
   if (bad !== null) {
-    return fileProblem(`the file is not valid UTF-8 (perhaps saved as Windows-1252 or Latin-1; accented letters and Ω are affected); ${SAVE_AS}`, bad);
+    return fileProblem(
+      `the file is not valid UTF-8 (perhaps saved as Windows-1252 or Latin-1; accented letters and Ω are affected); ${SAVE_AS}`,
+      bad,
+    );
   }
   return null;
 }

@@ -5,8 +5,14 @@
  * toSpecCsv. Pure TypeScript: no React, no Node I/O.
  */
 export {
-  SPEC_CSV_COLUMNS, COLUMN_REFERENCE, REQUIRED_COLUMNS, NUMERIC_COLUMNS, KEY_COLUMNS,
-  type SpecCsvColumn, type SpecCsvRow, type RowProblem,
+  SPEC_CSV_COLUMNS,
+  COLUMN_REFERENCE,
+  REQUIRED_COLUMNS,
+  NUMERIC_COLUMNS,
+  KEY_COLUMNS,
+  type SpecCsvColumn,
+  type SpecCsvRow,
+  type RowProblem,
 } from './columns';
 export { SpecCsvRowSchema, validateSpecRow } from './row-schema';
 export { parseSpecCsv, type ParsedCsv } from './parse';

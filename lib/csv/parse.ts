@@ -11,7 +11,7 @@
 import Papa from 'papaparse';
 import { REQUIRED_COLUMNS, SPEC_CSV_COLUMNS, type RowProblem, type SpecCsvColumn } from './columns';
 
-export type ParsedCsv = { rows: Array<{ line: number; raw: Record<string, string> }>; fileErrors: RowProblem[] };
+export type ParsedCsv = { rows: { line: number; raw: Record<string, string> }[]; fileErrors: RowProblem[] };
 
 /** As ParsedCsv, but problems confined to one record (wrong cell count) kept apart. */
 export type DetailedParse = ParsedCsv & { rowErrors: RowProblem[] };
@@ -20,8 +20,10 @@ type CsvRecord = { line: number; cells: string[]; errors: Papa.ParseError[] };
 
 const LINE_BREAK = /\r\n?|\n/g;
 const QUOTE_REASONS: Record<string, string> = {
-  MissingQuotes: 'a quoted cell that starts on this line is never closed (a closing " is missing), so the rest of the file cannot be read',
-  InvalidQuotes: 'a quoted cell has text after its closing quote; inside a quoted cell write a quote as two quotes ("")',
+  MissingQuotes:
+    'a quoted cell that starts on this line is never closed (a closing " is missing), so the rest of the file cannot be read',
+  InvalidQuotes:
+    'a quoted cell has text after its closing quote; inside a quoted cell write a quote as two quotes ("")',
 };
 
 function readRecords(text: string): CsvRecord[] {
@@ -45,11 +47,19 @@ function readRecords(text: string): CsvRecord[] {
 /** Papaparse's quote errors for one record, one problem per kind. */
 function quoteProblems(record: CsvRecord): RowProblem[] {
   const codes = [...new Set(record.errors.map((e) => e.code as string))];
-  return codes.map((code) => ({ line: record.line, column: null, reason: QUOTE_REASONS[code] ?? `this row could not be read (${code})` }));
+  return codes.map((code) => ({
+    line: record.line,
+    column: null,
+    reason: QUOTE_REASONS[code] ?? `this row could not be read (${code})`,
+  }));
 }
 
 const isBlank = (cells: string[]) => cells.every((c) => c.trim() === '');
-const normaliseHeader = (h: string) => h.trim().toLowerCase().replace(/[\s-]+/g, '_');
+const normaliseHeader = (h: string) =>
+  h
+    .trim()
+    .toLowerCase()
+    .replace(/[\s-]+/g, '_');
 const list = (names: string[]) => names.join(', ');
 
 /** Header problems; an empty list means every column is known, unique, and the required ones are there. */
@@ -57,32 +67,56 @@ function checkHeader(header: string[], raw: string[], line: number): RowProblem[
   const problem = (reason: string, column: SpecCsvColumn | null = null): RowProblem => ({ line, column, reason });
   if (header.length === 1 && /[;\t|]/.test(raw[0])) {
     const sep = raw[0].includes(';') ? 'semicolons' : raw[0].includes('\t') ? 'tabs' : 'bars (|)';
-    return [problem(`the header is one single column separated by ${sep}; use commas between columns (in a spreadsheet: save as "CSV UTF-8 (comma delimited)")`)];
+    return [
+      problem(
+        `the header is one single column separated by ${sep}; use commas between columns (in a spreadsheet: save as "CSV UTF-8 (comma delimited)")`,
+      ),
+    ];
   }
   const problems: RowProblem[] = [];
   const known = SPEC_CSV_COLUMNS as readonly string[];
   const seen = new Set<string>();
   const duplicated = new Set<string>();
   header.forEach((h) => (seen.has(h) ? duplicated.add(h) : seen.add(h)));
-  for (const d of duplicated) problems.push(problem(`column ${d || '(unnamed)'} appears more than once in the header`, known.includes(d) ? (d as SpecCsvColumn) : null));
+  for (const d of duplicated)
+    problems.push(
+      problem(
+        `column ${d || '(unnamed)'} appears more than once in the header`,
+        known.includes(d) ? (d as SpecCsvColumn) : null,
+      ),
+    );
   const unknown = [...seen].filter((h) => !known.includes(h));
   if (unknown.length) {
     const names = unknown.map((h) => (h === '' ? '(an unnamed column)' : h));
-    problems.push(problem(`unknown column${unknown.length > 1 ? 's' : ''}: ${list(names)}; the allowed columns are ${list([...known])}`));
+    problems.push(
+      problem(
+        `unknown column${unknown.length > 1 ? 's' : ''}: ${list(names)}; the allowed columns are ${list([...known])}`,
+      ),
+    );
   }
   const missing = REQUIRED_COLUMNS.filter((c) => !seen.has(c));
-  if (missing.length) problems.push(problem(`missing required column${missing.length > 1 ? 's' : ''}: ${list(missing)}`, missing[0]));
-  if (!['min', 'nominal', 'max'].some((c) => seen.has(c))) problems.push(problem('the header needs at least one of the columns min, nominal or max'));
+  if (missing.length)
+    problems.push(problem(`missing required column${missing.length > 1 ? 's' : ''}: ${list(missing)}`, missing[0]));
+  if (!['min', 'nominal', 'max'].some((c) => seen.has(c)))
+    problems.push(problem('the header needs at least one of the columns min, nominal or max'));
   return problems;
 }
 
 /** Cell-count check; surplus cells that are all empty (trailing commas) are tolerated. */
 function cellCountProblem(cells: string[], width: number, line: number): RowProblem | null {
   if (cells.length > width && !isBlank(cells.slice(width))) {
-    return { line, column: null, reason: `this row has ${cells.length} cells but the header has ${width} columns; a value that contains a comma must be put in double quotes` };
+    return {
+      line,
+      column: null,
+      reason: `this row has ${cells.length} cells but the header has ${width} columns; a value that contains a comma must be put in double quotes`,
+    };
   }
   if (cells.length < width) {
-    return { line, column: null, reason: `this row has ${cells.length} cells but the header has ${width} columns; every row needs a cell (maybe empty) for every column` };
+    return {
+      line,
+      column: null,
+      reason: `this row has ${cells.length} cells but the header has ${width} columns; every row needs a cell (maybe empty) for every column`,
+    };
   }
   return null;
 }
@@ -114,7 +148,8 @@ export function parseSpecCsvDetailed(input: string): DetailedParse {
     header.forEach((column, i) => (raw[column] = record.cells[i]));
     result.rows.push({ line: record.line, raw });
   }
-  if (data.length === 0) result.fileErrors.push({ line: headerRecord.line, column: null, reason: 'the file has a header but no data rows' });
+  if (data.length === 0)
+    result.fileErrors.push({ line: headerRecord.line, column: null, reason: 'the file has a header but no data rows' });
   return result;
 }
 

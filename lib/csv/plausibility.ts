@@ -9,7 +9,7 @@ import type { RowProblem, SpecCsvColumn } from './columns';
 const norm = (s: string) => s.toLowerCase().replace(/\s+/g, ' ').trim();
 
 /** Ordered: the first pattern that matches the parameter decides its quantity kind. */
-const KIND_PATTERNS: Array<[RegExp, QuantityKind]> = [
+const KIND_PATTERNS: [RegExp, QuantityKind][] = [
   [/resistance|\bohms?\b|impedance/, 'resistance'],
   [/\bgap\b|clearance|thickness|length/, 'length'],
   [/voltage|\bvolts?\b|\bemf\b/, 'voltage'],
@@ -39,7 +39,12 @@ export function defaultMaterial(parameter: string, kind: QuantityKind): 'copper'
   return /winding|coil|stator|pulser|pulse generator|pickup|pick-up/.test(p) ? 'copper' : 'none';
 }
 
-type Range = { label: string; test: (component: string, parameter: string) => boolean; lowOhm: number; highOhm: number };
+type Range = {
+  label: string;
+  test: (component: string, parameter: string) => boolean;
+  lowOhm: number;
+  highOhm: number;
+};
 
 /**
  * From memory, low confidence (REFERENCES.md §7 gives primary ≈ 0.2–3 Ω, secondary ≈ 5–30 kΩ,
@@ -58,8 +63,11 @@ const RESISTANCE_RANGES: Range[] = [
 ];
 
 type WarnInput = {
-  component: string; parameter: string; unit: CanonicalUnit; kind: QuantityKind;
-  values: Array<[SpecCsvColumn, number | null]>;
+  component: string;
+  parameter: string;
+  unit: CanonicalUnit;
+  kind: QuantityKind;
+  values: [SpecCsvColumn, number | null][];
 };
 
 /** Warnings (not errors) for resistance values far outside what such a winding usually measures. */

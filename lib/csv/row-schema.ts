@@ -22,15 +22,18 @@ const ACCEPTED_UNITS = 'Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mi
  * displayed, never evaluated, and neutralised again on export.
  */
 const text = (column: SpecCsvColumn, max: number, { required = false, multiline = false } = {}) =>
-  z.string().optional().transform((value, ctx) => {
-    const s = cleanCell(value);
-    const fail = (message: string) => ctx.addIssue({ code: 'custom', message });
-    if (required && s === '') fail(`${column} is required`);
-    else if (s.length > max) fail(`${column} is ${s.length} characters long; the limit is ${max}`);
-    else if (CONTROL_CHARS.test(s)) fail(`${column} contains an invisible control character; retype the cell`);
-    else if (!multiline && /[\r\n]/.test(s)) fail(`${column} must fit on one line; remove the line break`);
-    return s;
-  });
+  z
+    .string()
+    .optional()
+    .transform((value, ctx) => {
+      const s = cleanCell(value);
+      const fail = (message: string) => ctx.addIssue({ code: 'custom', message });
+      if (required && s === '') fail(`${column} is required`);
+      else if (s.length > max) fail(`${column} is ${s.length} characters long; the limit is ${max}`);
+      else if (CONTROL_CHARS.test(s)) fail(`${column} contains an invisible control character; retype the cell`);
+      else if (!multiline && /[\r\n]/.test(s)) fail(`${column} must fit on one line; remove the line break`);
+      return s;
+    });
 
 const PLAIN_NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
 const DECIMAL_COMMA = /^[+-]?\d*,\d+$/;
@@ -38,9 +41,11 @@ const NOT_FINITE = /^[+-]?(nan|inf|infinity|∞)$/i;
 
 /** Parses a plain decimal number (dot separator); returns the reason when it is not one. */
 function readNumber(column: SpecCsvColumn, s: string): number | string {
-  if (DECIMAL_COMMA.test(s)) return `${column} "${s}" has a decimal comma; use a dot as the decimal separator (${s.replace(',', '.')})`;
+  if (DECIMAL_COMMA.test(s))
+    return `${column} "${s}" has a decimal comma; use a dot as the decimal separator (${s.replace(',', '.')})`;
   if (NOT_FINITE.test(s)) return `${column} "${s}" is not a finite number`;
-  if (!PLAIN_NUMBER.test(s)) return `${column} "${s}" is not a number; write a plain number such as 3.5 and put the unit in the unit column`;
+  if (!PLAIN_NUMBER.test(s))
+    return `${column} "${s}" is not a number; write a plain number such as 3.5 and put the unit in the unit column`;
   const n = Number(s);
   return Number.isFinite(n) ? n : `${column} "${s}" is too large: not a finite number`;
 }
@@ -49,42 +54,61 @@ type NumberRule = { required?: boolean; integer?: boolean; range?: [number, numb
 
 /** Empty → null; a problem → NaN plus an issue (NaN never reaches a valid row). */
 const number = (column: SpecCsvColumn, rule: NumberRule = {}) =>
-  z.string().optional().transform((value, ctx): number | null => {
+  z
+    .string()
+    .optional()
+    .transform((value, ctx): number | null => {
+      const s = cleanCell(value);
+      const fail = (message: string) => (ctx.addIssue({ code: 'custom', message }), NaN);
+      if (s === '') return rule.required ? fail(`${column} is required`) : null;
+      const n = readNumber(column, s);
+      if (typeof n === 'string')
+        return fail(rule.integer ? `${column} "${s}" is not a year; write a whole year such as 2016` : n);
+      if (rule.integer && !Number.isInteger(n)) return fail(`${column} ${s} is not a whole year`);
+      if (rule.range && (n < rule.range[0] || n > rule.range[1])) {
+        return fail(`${column} ${s} is outside ${rule.range[0]} to ${rule.range[1]}${rule.what ?? ''}`);
+      }
+      return n;
+    });
+
+const unit = z
+  .string()
+  .optional()
+  .transform((value, ctx) => {
     const s = cleanCell(value);
-    const fail = (message: string) => (ctx.addIssue({ code: 'custom', message }), NaN);
-    if (s === '') return rule.required ? fail(`${column} is required`) : null;
-    const n = readNumber(column, s);
-    if (typeof n === 'string') return fail(rule.integer ? `${column} "${s}" is not a year; write a whole year such as 2016` : n);
-    if (rule.integer && !Number.isInteger(n)) return fail(`${column} ${s} is not a whole year`);
-    if (rule.range && (n < rule.range[0] || n > rule.range[1])) {
-      return fail(`${column} ${s} is outside ${rule.range[0]} to ${rule.range[1]}${rule.what ?? ''}`);
-    }
-    return n;
+    if (s === '') return (ctx.addIssue({ code: 'custom', message: 'unit is required' }), null);
+    const parsed = parseUnit(s);
+    if (!parsed)
+      ctx.addIssue({ code: 'custom', message: `unit "${s}" is not recognised; use one of ${ACCEPTED_UNITS}` });
+    return parsed;
   });
 
-const unit = z.string().optional().transform((value, ctx) => {
-  const s = cleanCell(value);
-  if (s === '') return (ctx.addIssue({ code: 'custom', message: 'unit is required' }), null);
-  const parsed = parseUnit(s);
-  if (!parsed) ctx.addIssue({ code: 'custom', message: `unit "${s}" is not recognised; use one of ${ACCEPTED_UNITS}` });
-  return parsed;
-});
+const material = z
+  .string()
+  .optional()
+  .transform((value, ctx): 'copper' | 'none' | null => {
+    const s = cleanCell(value).toLowerCase();
+    if (s === '') return null;
+    if (s === 'copper' || s === 'none') return s;
+    ctx.addIssue({
+      code: 'custom',
+      message: `material "${cleanCell(value)}" is not allowed; use copper, none, or leave it empty`,
+    });
+    return null;
+  });
 
-const material = z.string().optional().transform((value, ctx): 'copper' | 'none' | null => {
-  const s = cleanCell(value).toLowerCase();
-  if (s === '') return null;
-  if (s === 'copper' || s === 'none') return s;
-  ctx.addIssue({ code: 'custom', message: `material "${cleanCell(value)}" is not allowed; use copper, none, or leave it empty` });
-  return null;
-});
-
-const url = z.string().optional().transform((value, ctx) => {
-  const s = cleanCell(value);
-  if (s === '') return null;
-  if (s.length > 500) ctx.addIssue({ code: 'custom', message: `source_url is ${s.length} characters long; the limit is 500` });
-  else if (!/^https?:\/\/[^\s/?#"<>]+[^\s"<>]*$/i.test(s)) ctx.addIssue({ code: 'custom', message: 'source_url must be a web address starting with http:// or https://' });
-  return s;
-});
+const url = z
+  .string()
+  .optional()
+  .transform((value, ctx) => {
+    const s = cleanCell(value);
+    if (s === '') return null;
+    if (s.length > 500)
+      ctx.addIssue({ code: 'custom', message: `source_url is ${s.length} characters long; the limit is 500` });
+    else if (!/^https?:\/\/[^\s/?#"<>]+[^\s"<>]*$/i.test(s))
+      ctx.addIssue({ code: 'custom', message: 'source_url must be a web address starting with http:// or https://' });
+    return s;
+  });
 
 const RawRowSchema = z.object({
   make: text('make', 120, { required: true }),
@@ -110,25 +134,39 @@ const RawRowSchema = z.object({
 });
 type RawRow = z.output<typeof RawRowSchema>;
 
-const KIND_NAME: Record<QuantityKind, string> = { resistance: 'resistance', voltage: 'voltage', current: 'current', length: 'length' };
+const KIND_NAME: Record<QuantityKind, string> = {
+  resistance: 'resistance',
+  voltage: 'voltage',
+  current: 'current',
+  length: 'length',
+};
 const ok = (n: number | null): n is number => n !== null && Number.isFinite(n);
 
 /** Rules between cells. Runs even when some cells failed, skipping the comparisons they spoil. */
 function crossCheck(r: RawRow, ctx: z.RefinementCtx<RawRow>) {
   const issue = (column: SpecCsvColumn | null, message: string) =>
     ctx.addIssue({ code: 'custom', message, path: column ? [column] : [] });
-  const limits: Array<[SpecCsvColumn, number | null]> = [['min', r.min], ['nominal', r.nominal], ['max', r.max]];
+  const limits: [SpecCsvColumn, number | null][] = [
+    ['min', r.min],
+    ['nominal', r.nominal],
+    ['max', r.max],
+  ];
   if (limits.every(([, v]) => v === null)) issue(null, 'give at least one of min, nominal or max');
   if (ok(r.min) && ok(r.max) && r.min > r.max) issue('min', `min ${r.min} is greater than max ${r.max}`);
-  if (ok(r.min) && ok(r.nominal) && r.min > r.nominal) issue('nominal', `nominal ${r.nominal} is less than min ${r.min}`);
-  if (ok(r.nominal) && ok(r.max) && r.nominal > r.max) issue('nominal', `nominal ${r.nominal} is greater than max ${r.max}`);
+  if (ok(r.min) && ok(r.nominal) && r.min > r.nominal)
+    issue('nominal', `nominal ${r.nominal} is less than min ${r.min}`);
+  if (ok(r.nominal) && ok(r.max) && r.nominal > r.max)
+    issue('nominal', `nominal ${r.nominal} is greater than max ${r.max}`);
   if (ok(r.year_from) && ok(r.year_to) && r.year_to < r.year_from) {
     issue('year_to', `year_to ${r.year_to} is before year_from ${r.year_from}`);
   }
   if (!r.unit) return;
   const needed = expectedKindForParameter(r.parameter);
   if (needed && needed !== r.unit.kind) {
-    issue('unit', `unit ${r.unit.unit} is a ${KIND_NAME[r.unit.kind]} unit but parameter '${r.parameter}' needs a ${KIND_NAME[needed]} unit`);
+    issue(
+      'unit',
+      `unit ${r.unit.unit} is a ${KIND_NAME[r.unit.kind]} unit but parameter '${r.parameter}' needs a ${KIND_NAME[needed]} unit`,
+    );
   }
   if (r.unit.kind === 'resistance' || r.unit.kind === 'length') {
     for (const [column, v] of limits) {
@@ -140,18 +178,34 @@ function crossCheck(r: RawRow, ctx: z.RefinementCtx<RawRow>) {
 function toRow(r: RawRow): SpecCsvRow {
   const u = r.unit as { unit: CanonicalUnit; kind: QuantityKind };
   return {
-    make: r.make, model: r.model, yearFrom: r.year_from as number, yearTo: r.year_to, variant: r.variant,
-    component: r.component, parameter: r.parameter, min: r.min, nominal: r.nominal, max: r.max,
-    unit: u.unit, refTempC: r.ref_temp_c, material: r.material ?? defaultMaterial(r.parameter, u.kind),
-    testPoints: r.test_points, conditions: r.conditions, sourceTitle: r.source_title,
-    sourceEdition: r.source_edition, sourcePage: r.source_page, sourceUrl: r.source_url, notes: r.notes,
+    make: r.make,
+    model: r.model,
+    yearFrom: r.year_from as number,
+    yearTo: r.year_to,
+    variant: r.variant,
+    component: r.component,
+    parameter: r.parameter,
+    min: r.min,
+    nominal: r.nominal,
+    max: r.max,
+    unit: u.unit,
+    refTempC: r.ref_temp_c,
+    material: r.material ?? defaultMaterial(r.parameter, u.kind),
+    testPoints: r.test_points,
+    conditions: r.conditions,
+    sourceTitle: r.source_title,
+    sourceEdition: r.source_edition,
+    sourcePage: r.source_page,
+    sourceUrl: r.source_url,
+    notes: r.notes,
   };
 }
 
 /** Raw row (all strings, keyed by CSV column; missing columns count as empty) → SpecCsvRow. */
-export const SpecCsvRowSchema: z.ZodType<SpecCsvRow, Partial<Record<SpecCsvColumn, string>>> = RawRowSchema
-  .superRefine(crossCheck, { when: () => true })
-  .transform(toRow);
+export const SpecCsvRowSchema: z.ZodType<SpecCsvRow, Partial<Record<SpecCsvColumn, string>>> = RawRowSchema.superRefine(
+  crossCheck,
+  { when: () => true },
+).transform(toRow);
 
 const asColumn = (key: unknown): SpecCsvColumn | null =>
   (SPEC_CSV_COLUMNS as readonly unknown[]).includes(key) ? (key as SpecCsvColumn) : null;
@@ -163,10 +217,17 @@ export function validateSpecRow(
 ): { ok: true; row: SpecCsvRow; warnings: RowProblem[] } | { ok: false; errors: RowProblem[] } {
   const result = SpecCsvRowSchema.safeParse(raw);
   if (!result.success) {
-    return { ok: false, errors: result.error.issues.map((i) => ({ line, column: asColumn(i.path[0]), reason: i.message })) };
+    return {
+      ok: false,
+      errors: result.error.issues.map((i) => ({ line, column: asColumn(i.path[0]), reason: i.message })),
+    };
   }
   const row = result.data;
-  const values: Array<[SpecCsvColumn, number | null]> = [['min', row.min], ['nominal', row.nominal], ['max', row.max]];
+  const values: [SpecCsvColumn, number | null][] = [
+    ['min', row.min],
+    ['nominal', row.nominal],
+    ['max', row.max],
+  ];
   const warnings = plausibilityWarnings(
     { component: row.component, parameter: row.parameter, unit: row.unit, kind: unitKind(row.unit), values },
     line,

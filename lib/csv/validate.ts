@@ -2,7 +2,14 @@
  * Whole-file validation: parse, validate every row, then the cross-row rule that a
  * natural key (make + model + years + variant + component + parameter) appears once.
  */
-import { COLUMN_TO_FIELD, KEY_COLUMNS, SPEC_CSV_COLUMNS, type RowProblem, type SpecCsvColumn, type SpecCsvRow } from './columns';
+import {
+  COLUMN_TO_FIELD,
+  KEY_COLUMNS,
+  SPEC_CSV_COLUMNS,
+  type RowProblem,
+  type SpecCsvColumn,
+  type SpecCsvRow,
+} from './columns';
 import { parseSpecCsvDetailed } from './parse';
 import { validateSpecRow } from './row-schema';
 
@@ -15,8 +22,13 @@ const normaliseText = (s: string) =>
 /** Identity of a spec: case-insensitive, whitespace-normalised; an open year_to is ''. */
 export function naturalKey(row: KeyFields): string {
   return [
-    normaliseText(row.make), normaliseText(row.model), String(row.yearFrom), row.yearTo === null ? '' : String(row.yearTo),
-    normaliseText(row.variant), normaliseText(row.component), normaliseText(row.parameter),
+    normaliseText(row.make),
+    normaliseText(row.model),
+    String(row.yearFrom),
+    row.yearTo === null ? '' : String(row.yearTo),
+    normaliseText(row.variant),
+    normaliseText(row.component),
+    normaliseText(row.parameter),
   ].join('\u001f');
 }
 
@@ -28,7 +40,7 @@ function differingColumns(a: SpecCsvRow, b: SpecCsvRow): SpecCsvColumn[] {
 }
 
 export type ValidatedCsv = {
-  accepted: Array<{ line: number; row: SpecCsvRow; warnings: RowProblem[] }>;
+  accepted: { line: number; row: SpecCsvRow; warnings: RowProblem[] }[];
   rejected: RowProblem[];
   fileErrors: RowProblem[];
 };
@@ -60,9 +72,10 @@ export function validateSpecCsv(text: string): ValidatedCsv {
     result.rejected.push({
       line,
       column: differing[0] ?? null,
-      reason: differing.length === 0
-        ? `duplicate of line ${first.line}: the same spec with the same values appears twice`
-        : `conflicts with line ${first.line}: the same spec (make, model, years, variant, component, parameter) with a different ${differing.join(', ')}`,
+      reason:
+        differing.length === 0
+          ? `duplicate of line ${first.line}: the same spec with the same values appears twice`
+          : `conflicts with line ${first.line}: the same spec (make, model, years, variant, component, parameter) with a different ${differing.join(', ')}`,
     });
   }
   result.rejected.sort((a, b) => a.line - b.line);

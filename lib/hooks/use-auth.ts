@@ -5,7 +5,16 @@
  */
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import {
-  changePassword, forgotPassword, listUsers, resetPassword, signIn, signOutEverywhere, signUp, updateUser, userAudit, verifyEmail,
+  changePassword,
+  forgotPassword,
+  listUsers,
+  resetPassword,
+  signIn,
+  signOutEverywhere,
+  signUp,
+  updateUser,
+  userAudit,
+  verifyEmail,
 } from '../api/auth';
 import type { RoleValue } from '../contracts/auth';
 import { useSession } from '../session/session-provider';
@@ -55,17 +64,23 @@ export function useSignOutEverywhereMutation() {
 
 export function useUsersQuery(q: string, enabled = true) {
   const text = q.trim();
-  return useQuery({ queryKey: [...USERS_KEY, text], queryFn: () => listUsers(text), enabled, placeholderData: keepPreviousData });
+  return useQuery({
+    queryKey: [...USERS_KEY, text],
+    queryFn: () => listUsers(text),
+    enabled,
+    placeholderData: keepPreviousData,
+  });
 }
 
 export function useUpdateUserMutation() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ id, ...body }: { id: number; role?: RoleValue; disabled?: boolean }) => updateUser(id, body),
-    onSuccess: (user) => Promise.all([
-      qc.invalidateQueries({ queryKey: USERS_KEY }),
-      qc.invalidateQueries({ queryKey: [...USER_AUDIT_KEY, user.id] }),
-    ]),
+    onSuccess: (user) =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: USERS_KEY }),
+        qc.invalidateQueries({ queryKey: [...USER_AUDIT_KEY, user.id] }),
+      ]),
   });
 }
 

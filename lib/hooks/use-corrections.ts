@@ -1,7 +1,14 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import {
-  acceptCorrection, correctionSummary, editCorrection, getCorrection, listCorrections, proposeCorrection, rejectCorrection,
-  withdrawCorrection, type CorrectionFilter,
+  acceptCorrection,
+  correctionSummary,
+  editCorrection,
+  getCorrection,
+  listCorrections,
+  proposeCorrection,
+  rejectCorrection,
+  withdrawCorrection,
+  type CorrectionFilter,
 } from '../api/corrections';
 import type { EditProposalBody } from '../contracts/corrections';
 import { useSession } from '../session/session-provider';
@@ -11,22 +18,36 @@ export const CORRECTIONS_KEY = ['corrections'] as const;
 
 export function useCorrectionsQuery(filter: CorrectionFilter) {
   const { status } = useSession();
-  return useQuery({ queryKey: [...CORRECTIONS_KEY, 'list', filter], queryFn: () => listCorrections(filter), enabled: status === 'signed-in' });
+  return useQuery({
+    queryKey: [...CORRECTIONS_KEY, 'list', filter],
+    queryFn: () => listCorrections(filter),
+    enabled: status === 'signed-in',
+  });
 }
 
 /** Pending count for the editors' badge; refreshed every minute. */
 export function useCorrectionSummaryQuery() {
   const { status } = useSession();
-  return useQuery({ queryKey: [...CORRECTIONS_KEY, 'summary'], queryFn: correctionSummary, enabled: status === 'signed-in', refetchInterval: 60_000 });
+  return useQuery({
+    queryKey: [...CORRECTIONS_KEY, 'summary'],
+    queryFn: correctionSummary,
+    enabled: status === 'signed-in',
+    refetchInterval: 60_000,
+  });
 }
 
 export function useCorrectionQuery(id: number) {
-  return useQuery({ queryKey: [...CORRECTIONS_KEY, 'one', id], queryFn: () => getCorrection(id), enabled: Number.isInteger(id) && id > 0 });
+  return useQuery({
+    queryKey: [...CORRECTIONS_KEY, 'one', id],
+    queryFn: () => getCorrection(id),
+    enabled: Number.isInteger(id) && id > 0,
+  });
 }
 
 function useInvalidate() {
   const qc = useQueryClient();
-  return () => Promise.all([qc.invalidateQueries({ queryKey: CORRECTIONS_KEY }), qc.invalidateQueries({ queryKey: SPEC_KEY })]);
+  return () =>
+    Promise.all([qc.invalidateQueries({ queryKey: CORRECTIONS_KEY }), qc.invalidateQueries({ queryKey: SPEC_KEY })]);
 }
 
 export function useProposeMutation() {
@@ -48,7 +69,9 @@ export function useDecideMutation(id: number) {
   const invalidate = useInvalidate();
   return useMutation({
     mutationFn: (d: { accept: true; confirmStale?: boolean; note?: string } | { accept: false; note: string }) =>
-      d.accept ? acceptCorrection(id, { confirmStale: d.confirmStale, note: d.note || undefined }) : rejectCorrection(id, d.note),
+      d.accept
+        ? acceptCorrection(id, { confirmStale: d.confirmStale, note: d.note || undefined })
+        : rejectCorrection(id, d.note),
     onSuccess: invalidate,
   });
 }

@@ -6,8 +6,18 @@
 import { useState } from 'react';
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import {
-  commitImport, createSpec, downloadExport, downloadTemplate, getColumnReference, getImport, listImports, listRevisions,
-  revertSpec, updateSpec, uploadImport, type PreviewPage,
+  commitImport,
+  createSpec,
+  downloadExport,
+  downloadTemplate,
+  getColumnReference,
+  getImport,
+  listImports,
+  listRevisions,
+  revertSpec,
+  updateSpec,
+  uploadImport,
+  type PreviewPage,
 } from '../api/curation';
 import type { UploadFile } from '../api/upload';
 import type { RevertSpecBody, UpdateSpecBody } from '../contracts/curation';
@@ -23,7 +33,8 @@ const revisionsKey = (specId: number) => [...SPEC_KEY, specId, 'revisions'] as c
 
 function useInvalidateLibrary() {
   const qc = useQueryClient();
-  return () => Promise.all([SPEC_KEY, MODELS_KEY, SEARCH_KEY, IMPORTS_KEY].map((queryKey) => qc.invalidateQueries({ queryKey })));
+  return () =>
+    Promise.all([SPEC_KEY, MODELS_KEY, SEARCH_KEY, IMPORTS_KEY].map((queryKey) => qc.invalidateQueries({ queryKey })));
 }
 
 export function useImportsQuery() {
@@ -47,7 +58,10 @@ export function useUploadImportMutation() {
   const qc = useQueryClient();
   const [progress, setProgress] = useState(0);
   const mutation = useMutation({
-    mutationFn: (file: UploadFile) => { setProgress(0); return uploadImport(file, { offset: 0, limit: PREVIEW_PAGE_SIZE }, setProgress); },
+    mutationFn: (file: UploadFile) => {
+      setProgress(0);
+      return uploadImport(file, { offset: 0, limit: PREVIEW_PAGE_SIZE }, setProgress);
+    },
     onSuccess: (preview) => {
       qc.setQueryData([...IMPORTS_KEY, 'one', preview.id, 0], preview);
       return qc.invalidateQueries({ queryKey: [...IMPORTS_KEY, 'list'] });
@@ -64,7 +78,12 @@ export function useCommitImportMutation(id: number) {
 
 /** The column reference from the server; the shared table stands in until it answers. */
 export function useColumnReferenceQuery() {
-  return useQuery({ queryKey: [...IMPORTS_KEY, 'columns'], queryFn: getColumnReference, placeholderData: COLUMN_REFERENCE, staleTime: Infinity });
+  return useQuery({
+    queryKey: [...IMPORTS_KEY, 'columns'],
+    queryFn: getColumnReference,
+    placeholderData: COLUMN_REFERENCE,
+    staleTime: Infinity,
+  });
 }
 
 export function useDownloadTemplateMutation() {
@@ -86,7 +105,11 @@ export function useUpdateSpecMutation(id: number) {
 }
 
 export function useRevisionsQuery(specId: number) {
-  return useQuery({ queryKey: revisionsKey(specId), queryFn: () => listRevisions(specId), enabled: Number.isInteger(specId) && specId > 0 });
+  return useQuery({
+    queryKey: revisionsKey(specId),
+    queryFn: () => listRevisions(specId),
+    enabled: Number.isInteger(specId) && specId > 0,
+  });
 }
 
 export function useRevertMutation(specId: number) {

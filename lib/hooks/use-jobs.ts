@@ -8,7 +8,10 @@ export const JOB_KEY = ['job'] as const;
 
 /** After a reading lands or a job changes: the sheet and the lists (their counts) are stale. */
 export function invalidateJob(qc: QueryClient, jobId: number) {
-  return Promise.all([qc.invalidateQueries({ queryKey: [...JOB_KEY, jobId] }), qc.invalidateQueries({ queryKey: JOBS_KEY })]);
+  return Promise.all([
+    qc.invalidateQueries({ queryKey: [...JOB_KEY, jobId] }),
+    qc.invalidateQueries({ queryKey: JOBS_KEY }),
+  ]);
 }
 
 export function useJobsQuery(filter: JobsFilter, enabled = true) {
@@ -22,7 +25,11 @@ export function useJobsQuery(filter: JobsFilter, enabled = true) {
 }
 
 export function useJobQuery(id: number, enabled = true) {
-  return useQuery({ queryKey: [...JOB_KEY, id], queryFn: () => getJob(id), enabled: enabled && Number.isInteger(id) && id > 0 });
+  return useQuery({
+    queryKey: [...JOB_KEY, id],
+    queryFn: () => getJob(id),
+    enabled: enabled && Number.isInteger(id) && id > 0,
+  });
 }
 
 function useStoreJob() {
@@ -40,7 +47,10 @@ export function useCreateJobMutation() {
 
 export function useUpdateJobMutation() {
   const store = useStoreJob();
-  return useMutation({ mutationFn: ({ id, ...body }: UpdateJobBody & { id: number }) => updateJob(id, body), onSuccess: store });
+  return useMutation({
+    mutationFn: ({ id, ...body }: UpdateJobBody & { id: number }) => updateJob(id, body),
+    onSuccess: store,
+  });
 }
 
 export function useDownloadCsvMutation() {

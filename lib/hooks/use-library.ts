@@ -20,7 +20,11 @@ export function useModelsQuery() {
 }
 
 export function useModelQuery(id: number) {
-  return useQuery({ queryKey: [...MODELS_KEY, id], queryFn: () => getModel(id), enabled: Number.isInteger(id) && id > 0 });
+  return useQuery({
+    queryKey: [...MODELS_KEY, id],
+    queryFn: () => getModel(id),
+    enabled: Number.isInteger(id) && id > 0,
+  });
 }
 
 export function useSpecQuery(id: number) {

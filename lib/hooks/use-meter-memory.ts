@@ -11,7 +11,13 @@ export function useMeterMemory(): [MeterMemory | null, (m: MeterMemory) => void]
   const [memory, setMemory] = useState<MeterMemory | null>(null);
   useEffect(() => {
     AsyncStorage.getItem(KEY)
-      .then((text) => setMemory(text ? (JSON.parse(text) as MeterMemory) : { lead: '', meterPercent: '', meterCounts: '', meterCountValue: '' }))
+      .then((text) =>
+        setMemory(
+          text
+            ? (JSON.parse(text) as MeterMemory)
+            : { lead: '', meterPercent: '', meterCounts: '', meterCountValue: '' },
+        ),
+      )
       .catch(() => setMemory({ lead: '', meterPercent: '', meterCounts: '', meterCountValue: '' }));
   }, []);
   const remember = (m: MeterMemory) => {

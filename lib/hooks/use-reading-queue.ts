@@ -20,7 +20,12 @@ const RETRY_EVERY_MS = 10_000;
 const runner = new ReadingQueueRunner(
   { getItem: (k) => AsyncStorage.getItem(k), setItem: (k, v) => AsyncStorage.setItem(k, v) },
   (item) => addReading(item.jobId, item.body, item.key),
-  { describe: (err) => (err instanceof ApiError && err.status === 404 ? 'That job is not among yours (it may have been removed).' : describeError(err)) },
+  {
+    describe: (err) =>
+      err instanceof ApiError && err.status === 404
+        ? 'That job is not among yours (it may have been removed).'
+        : describeError(err),
+  },
 );
 
 export function useReadingQueue() {
@@ -41,16 +46,26 @@ export function useReadingQueueSync() {
   const { status, user } = useSession();
   const userId = status === 'signed-in' ? user?.id : undefined;
 
-  useEffect(() => runner.onSent((item) => { void invalidateJob(qc, item.jobId); }), [qc]);
+  useEffect(
+    () =>
+      runner.onSent((item) => {
+        void invalidateJob(qc, item.jobId);
+      }),
+    [qc],
+  );
 
   useEffect(() => {
     void runner.load();
     if (userId === undefined) return;
-    const flush = () => { void runner.flush(userId); };
+    const flush = () => {
+      void runner.flush(userId);
+    };
     flush();
     const timer = setInterval(flush, RETRY_EVERY_MS);
     // TanStack's online manager follows the browser's online/offline events on web.
-    const unsubscribe = onlineManager.subscribe((online) => { if (online) flush(); });
+    const unsubscribe = onlineManager.subscribe((online) => {
+      if (online) flush();
+    });
     return () => {
       clearInterval(timer);
       unsubscribe();

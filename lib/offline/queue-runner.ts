@@ -11,16 +11,29 @@
  */
 import type { ReadingBody, ReadingDto } from '../contracts/jobs';
 import {
-  EMPTY_QUEUE, STORAGE_KEY, classifyFailure, dismissRejected, enqueue, newIdempotencyKey, parseQueue, recordAttempt,
-  rejectPending, removePending, sendable, type QueueState, type QueuedReading, type ReadingPreview,
+  EMPTY_QUEUE,
+  STORAGE_KEY,
+  classifyFailure,
+  dismissRejected,
+  enqueue,
+  newIdempotencyKey,
+  parseQueue,
+  recordAttempt,
+  rejectPending,
+  removePending,
+  sendable,
+  type QueueState,
+  type QueuedReading,
+  type ReadingPreview,
 } from './reading-queue';
 
-export type QueueStorage = { getItem: (key: string) => Promise<string | null>; setItem: (key: string, value: string) => Promise<void> };
+export type QueueStorage = {
+  getItem: (key: string) => Promise<string | null>;
+  setItem: (key: string, value: string) => Promise<void>;
+};
 export type SendReading = (item: QueuedReading) => Promise<ReadingDto>;
 export type AddOutcome =
-  | { status: 'sent'; reading: ReadingDto }
-  | { status: 'queued'; key: string }
-  | { status: 'rejected'; message: string };
+  { status: 'sent'; reading: ReadingDto } | { status: 'queued'; key: string } | { status: 'rejected'; message: string };
 export type NewReading = { userId: number; jobId: number; body: ReadingBody; preview: ReadingPreview };
 
 export class ReadingQueueRunner {
@@ -40,7 +53,9 @@ export class ReadingQueueRunner {
 
   subscribe = (fn: () => void) => {
     this.listeners.add(fn);
-    return () => { this.listeners.delete(fn); };
+    return () => {
+      this.listeners.delete(fn);
+    };
   };
 
   getSnapshot = () => this.state;
@@ -48,7 +63,9 @@ export class ReadingQueueRunner {
   /** Called after the server has stored a reading (new or a repeat of a known key). */
   onSent(fn: (item: QueuedReading, reading: ReadingDto) => void) {
     this.sentListeners.add(fn);
-    return () => { this.sentListeners.delete(fn); };
+    return () => {
+      this.sentListeners.delete(fn);
+    };
   }
 
   load = () => {
@@ -61,8 +78,12 @@ export class ReadingQueueRunner {
     await this.load();
     const now = (this.options.now ?? (() => new Date()))();
     const item: QueuedReading = {
-      ...reading, key: (this.options.newKey ?? newIdempotencyKey)(), body: { ...reading.body, takenAt: reading.body.takenAt ?? now.toISOString() },
-      queuedAt: now.toISOString(), attempts: 0, lastError: null,
+      ...reading,
+      key: (this.options.newKey ?? newIdempotencyKey)(),
+      body: { ...reading.body, takenAt: reading.body.takenAt ?? now.toISOString() },
+      queuedAt: now.toISOString(),
+      attempts: 0,
+      lastError: null,
     };
     await this.change((s) => enqueue(s, item));
     return this.attempt(item);

@@ -12,18 +12,27 @@ export type ReadingTarget = { specId: number } | { label: string };
 const defined = <T extends object>(o: T) =>
   Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined && v !== null)) as T;
 
-export function toReadingBody(input: VerdictInput, target: ReadingTarget, extra: { retakeOf?: number; takenAt?: string } = {}): ReadingBody {
-  const body: ReadingBody = 'specId' in target
-    ? { specId: target.specId, reading: { ...input.reading } }
-    : {
-      spec: defined({
-        min: input.spec.min ?? undefined, nominal: input.spec.nominal ?? undefined, max: input.spec.max ?? undefined,
-        unit: input.spec.unit, refTempC: input.spec.refTempC ?? undefined, material: input.spec.material ?? undefined,
-        nearLimitPct: input.spec.nearLimitPct ?? undefined,
-      }),
-      label: target.label.trim(),
-      reading: { ...input.reading },
-    };
+export function toReadingBody(
+  input: VerdictInput,
+  target: ReadingTarget,
+  extra: { retakeOf?: number; takenAt?: string } = {},
+): ReadingBody {
+  const body: ReadingBody =
+    'specId' in target
+      ? { specId: target.specId, reading: { ...input.reading } }
+      : {
+          spec: defined({
+            min: input.spec.min ?? undefined,
+            nominal: input.spec.nominal ?? undefined,
+            max: input.spec.max ?? undefined,
+            unit: input.spec.unit,
+            refTempC: input.spec.refTempC ?? undefined,
+            material: input.spec.material ?? undefined,
+            nearLimitPct: input.spec.nearLimitPct ?? undefined,
+          }),
+          label: target.label.trim(),
+          reading: { ...input.reading },
+        };
   if (input.leadResistance) body.leadResistance = { ...input.leadResistance };
   if (input.seriesResistance) body.seriesResistance = defined({ ...input.seriesResistance });
   if (input.temperatureC !== undefined) body.temperatureC = input.temperatureC;

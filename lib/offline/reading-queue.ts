@@ -11,7 +11,13 @@ import { IDEMPOTENCY_KEY, type ReadingBody } from '../contracts/jobs';
 import type { Verdict } from '../verdict';
 
 /** What the job sheet shows for a reading that has not reached the server yet. */
-export type ReadingPreview = { label: string; componentName: string; value: number; unit: string; verdict: Verdict | null };
+export type ReadingPreview = {
+  label: string;
+  componentName: string;
+  value: number;
+  unit: string;
+  verdict: Verdict | null;
+};
 
 export type QueuedReading = {
   key: string;
@@ -33,7 +39,8 @@ export type QueueState = { pending: QueuedReading[]; rejected: RejectedReading[]
 export const EMPTY_QUEUE: QueueState = { pending: [], rejected: [] };
 export const STORAGE_KEY = 'specbench.reading-queue.v1';
 
-type RandomSource = { randomUUID?: () => string; getRandomValues?: <T extends ArrayBufferView | null>(a: T) => T } | undefined;
+type RandomSource =
+  { randomUUID?: () => string; getRandomValues?: <T extends ArrayBufferView | null>(a: T) => T } | undefined;
 const ALPHABET = 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789';
 
 /** A fresh Idempotency-Key: a UUID where the platform has one, else 32 random letters and digits. */
@@ -71,13 +78,19 @@ export function removePending(state: QueueState, key: string): QueueState {
 }
 
 export function recordAttempt(state: QueueState, key: string, error: string): QueueState {
-  return { ...state, pending: state.pending.map((p) => (p.key === key ? { ...p, attempts: p.attempts + 1, lastError: error } : p)) };
+  return {
+    ...state,
+    pending: state.pending.map((p) => (p.key === key ? { ...p, attempts: p.attempts + 1, lastError: error } : p)),
+  };
 }
 
 export function rejectPending(state: QueueState, key: string, status: number, message: string): QueueState {
   const item = state.pending.find((p) => p.key === key);
   if (!item) return state;
-  return { pending: state.pending.filter((p) => p.key !== key), rejected: [...state.rejected, { ...item, status, message }] };
+  return {
+    pending: state.pending.filter((p) => p.key !== key),
+    rejected: [...state.rejected, { ...item, status, message }],
+  };
 }
 
 export function dismissRejected(state: QueueState, key: string): QueueState {
@@ -99,8 +112,12 @@ export function parseQueue(text: string | null): QueueState {
   if (!text) return EMPTY_QUEUE;
   try {
     const raw = JSON.parse(text) as Partial<QueueState>;
-    const ok = (x: unknown): x is QueuedReading => !!x && typeof x === 'object' && typeof (x as QueuedReading).key === 'string'
-      && typeof (x as QueuedReading).jobId === 'number' && typeof (x as QueuedReading).body === 'object';
+    const ok = (x: unknown): x is QueuedReading =>
+      !!x &&
+      typeof x === 'object' &&
+      typeof (x as QueuedReading).key === 'string' &&
+      typeof (x as QueuedReading).jobId === 'number' &&
+      typeof (x as QueuedReading).body === 'object';
     return {
       pending: Array.isArray(raw.pending) ? raw.pending.filter(ok) : [],
       rejected: Array.isArray(raw.rejected) ? (raw.rejected.filter(ok) as RejectedReading[]) : [],

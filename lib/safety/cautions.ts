@@ -5,9 +5,10 @@
  */
 export type CautionNote = { id: string; title: string; lines: string[] };
 
-const DEFER = "Follow the maker's service manual and local codes; Specbench's figures and verdicts assist, they do not replace them.";
+const DEFER =
+  "Follow the maker's service manual and local codes; Specbench's figures and verdicts assist, they do not replace them.";
 
-const RULES: Array<{ test: RegExp; caution: CautionNote }> = [
+const RULES: { test: RegExp; caution: CautionNote }[] = [
   {
     test: /secondary|spark|plug lead|ht lead|plug cap|resistor cap|ignition coil|peak voltage|cdi|plug wire/i,
     caution: {

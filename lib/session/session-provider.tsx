@@ -32,21 +32,29 @@ export function SessionProvider({ children }: { children: ReactNode }) {
     setStatus('signed-out');
   }, []);
 
-  const start = useCallback((session: SessionDto) => {
-    setAccessToken(session.accessToken);
-    setUser(session.user);
-    setStatus('signed-in');
-    if (timer.current) clearTimeout(timer.current);
-    // Renew a minute before the access token expires.
-    timer.current = setTimeout(() => {
-      refreshSession().then(start).catch(end);
-    }, Math.max(10, session.expiresIn - 60) * 1000);
-  }, [end]);
+  const start = useCallback(
+    function start(session: SessionDto) {
+      setAccessToken(session.accessToken);
+      setUser(session.user);
+      setStatus('signed-in');
+      if (timer.current) clearTimeout(timer.current);
+      // Renew a minute before the access token expires.
+      timer.current = setTimeout(
+        () => {
+          refreshSession().then(start).catch(end);
+        },
+        Math.max(10, session.expiresIn - 60) * 1000,
+      );
+    },
+    [end],
+  );
 
   useEffect(() => {
     refreshSession().then(start).catch(end);
     setUnauthorizedHandler(end);
-    return () => { if (timer.current) clearTimeout(timer.current); };
+    return () => {
+      if (timer.current) clearTimeout(timer.current);
+    };
   }, [start, end]);
 
   const signOut = async () => {

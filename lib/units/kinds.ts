@@ -8,9 +8,9 @@ export type QuantityKind = 'resistance' | 'voltage' | 'current' | 'length';
 export type CanonicalUnit = 'Ω' | 'kΩ' | 'MΩ' | 'V' | 'mV' | 'A' | 'mA' | 'mm' | 'in' | 'thou';
 
 const KIND_OF: Readonly<Record<CanonicalUnit, QuantityKind>> = {
-  'Ω': 'resistance',
-  'kΩ': 'resistance',
-  'MΩ': 'resistance',
+  Ω: 'resistance',
+  kΩ: 'resistance',
+  MΩ: 'resistance',
   V: 'voltage',
   mV: 'voltage',
   A: 'current',
@@ -33,7 +33,7 @@ const ALIASES: Readonly<Record<string, CanonicalUnit>> = {
   kOhm: 'kΩ',
   kOhms: 'kΩ',
   // 'K' is not an SI prefix, but 'KΩ' is common on service sheets and cannot mean anything else.
-  'KΩ': 'kΩ',
+  KΩ: 'kΩ',
   Kohm: 'kΩ',
   Mohm: 'MΩ',
   Mohms: 'MΩ',

@@ -22,9 +22,9 @@ const unit = (singular: string, plural: string, toAnchor: Unit['to_anchor']): Un
 export const resistance: Measure<'SI', ResistanceUnit> = {
   systems: {
     SI: {
-      'Ω': unit('Ohm', 'Ohms', 1),
-      'kΩ': unit('Kiloohm', 'Kiloohms', 1e3),
-      'MΩ': unit('Megaohm', 'Megaohms', 1e6),
+      Ω: unit('Ohm', 'Ohms', 1),
+      kΩ: unit('Kiloohm', 'Kiloohms', 1e3),
+      MΩ: unit('Megaohm', 'Megaohms', 1e6),
     },
   },
 };

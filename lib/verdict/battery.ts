@@ -14,8 +14,20 @@ type Row = readonly [volts: number, percent: number];
 
 /** Rows from full to empty: [rest voltage V, state of charge %]. */
 export const SOC_TABLES: Readonly<Record<BatteryType, readonly Row[]>> = {
-  flooded: [[12.65, 100], [12.45, 75], [12.24, 50], [12.06, 25], [11.89, 0]],
-  agm: [[12.8, 100], [12.6, 75], [12.3, 50], [12.0, 25], [11.8, 0]],
+  flooded: [
+    [12.65, 100],
+    [12.45, 75],
+    [12.24, 50],
+    [12.06, 25],
+    [11.89, 0],
+  ],
+  agm: [
+    [12.8, 100],
+    [12.6, 75],
+    [12.3, 50],
+    [12.0, 25],
+    [11.8, 0],
+  ],
 };
 
 const SOURCE: Record<BatteryType, string> = {
@@ -34,10 +46,18 @@ function locate(volts: number, rows: readonly Row[]): { percent: number; interpo
   const exact = rows.find(([rv]) => Math.abs(rv - volts) < ROW_MATCH_V);
   if (exact) return { percent: exact[1], interpolated: false, text: `${v(volts)} matches the ${pct(exact[1])} row.` };
   if (volts > top[0]) {
-    return { percent: 100, interpolated: false, text: `${v(volts)} is above the 100 % row (${v(top[0])}): reported as 100 % (a higher reading soon after charging is surface charge).` };
+    return {
+      percent: 100,
+      interpolated: false,
+      text: `${v(volts)} is above the 100 % row (${v(top[0])}): reported as 100 % (a higher reading soon after charging is surface charge).`,
+    };
   }
   if (volts < bottom[0]) {
-    return { percent: 0, interpolated: false, text: `${v(volts)} is below the 0 % row (${v(bottom[0])}): reported as 0 % (discharged).` };
+    return {
+      percent: 0,
+      interpolated: false,
+      text: `${v(volts)} is below the 0 % row (${v(bottom[0])}): reported as 0 % (discharged).`,
+    };
   }
   const i = rows.findIndex(([rv]) => rv < volts) - 1;
   const [[vHi, pHi], [vLo, pLo]] = [rows[i], rows[i + 1]];

@@ -14,16 +14,30 @@ export type Budget = { U: number | null; steps: VerdictStep[] };
 function meterTerm(what: string, x: number, meter: MeterAccuracy, spec: CheckedSpec, steps: VerdictStep[]): number {
   const a = meterHalfWidth({ value: x, unit: spec.unit }, meter);
   const count = `${meter.counts} × ${q(meter.countValue, meter.unit)}`;
-  steps.push({ label: `Meter half-width on ${what}`, formula: `a = ${meter.percent} % × ${q(Math.abs(x), spec.unit)} + ${count}`, value: a, unit: spec.unit });
+  steps.push({
+    label: `Meter half-width on ${what}`,
+    formula: `a = ${meter.percent} % × ${q(Math.abs(x), spec.unit)} + ${count}`,
+    value: a,
+    unit: spec.unit,
+  });
   const u = rectangularStd(a);
-  steps.push({ label: `Standard uncertainty of ${what} (rectangular)`, formula: `u = a / √3 = ${q(a, spec.unit)} / √3`, value: u, unit: spec.unit });
+  steps.push({
+    label: `Standard uncertainty of ${what} (rectangular)`,
+    formula: `u = a / √3 = ${q(a, spec.unit)} / √3`,
+    value: u,
+    unit: spec.unit,
+  });
   return u;
 }
 
 function seriesTerm(c: Corrected, spec: CheckedSpec, steps: VerdictStep[]): number {
   const series = c.series as number;
   if (c.seriesTolerancePct === undefined) {
-    steps.push({ label: 'Series resistor tolerance not given: treated as exact (no uncertainty added)', value: 0, unit: spec.unit });
+    steps.push({
+      label: 'Series resistor tolerance not given: treated as exact (no uncertainty added)',
+      value: 0,
+      unit: spec.unit,
+    });
     return 0;
   }
   const a = (c.seriesTolerancePct / 100) * series;
@@ -51,10 +65,20 @@ export function uncertaintyBudget(meter: MeterAccuracy | null | undefined, c: Co
   }
   if (c.factor !== 1) {
     uc *= c.factor;
-    steps.push({ label: 'Scaled by the temperature factor', formula: `u_c × ${formatFactor(c.factor)}`, value: uc, unit: spec.unit });
+    steps.push({
+      label: 'Scaled by the temperature factor',
+      formula: `u_c × ${formatFactor(c.factor)}`,
+      value: uc,
+      unit: spec.unit,
+    });
   }
   const U = COVERAGE_FACTOR * uc;
-  steps.push({ label: 'Expanded uncertainty (k = 2, about 95 %)', formula: `U = 2 × ${q(uc, spec.unit)}`, value: U, unit: spec.unit });
+  steps.push({
+    label: 'Expanded uncertainty (k = 2, about 95 %)',
+    formula: `U = 2 × ${q(uc, spec.unit)}`,
+    value: U,
+    unit: spec.unit,
+  });
   return { U, steps };
 }
 

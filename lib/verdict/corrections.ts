@@ -27,7 +27,12 @@ function readRaw(reading: Quantity, spec: CheckedSpec, steps: VerdictStep[]): nu
   const unit = requireUnit(reading.unit, 'reading.unit').unit;
   steps.push({ label: 'Meter reading', value: reading.value, unit });
   if (unit !== spec.unit) {
-    steps.push({ label: `Converted to the spec unit (${spec.unit})`, formula: `${q(reading.value, unit)} = ${q(raw, spec.unit)}`, value: raw, unit: spec.unit });
+    steps.push({
+      label: `Converted to the spec unit (${spec.unit})`,
+      formula: `${q(reading.value, unit)} = ${q(raw, spec.unit)}`,
+      value: raw,
+      unit: spec.unit,
+    });
   }
   if (raw < 0 && spec.kind !== 'voltage' && spec.kind !== 'current') {
     throw new VerdictInputError('reading', `A ${spec.kind} reading cannot be negative (${q(raw, spec.unit)})`);
@@ -47,7 +52,10 @@ function subtraction(field: 'leadResistance' | 'seriesResistance', given: Quanti
 function seriesTolerance(pct: unknown): number | undefined {
   const value = optionalFinite(pct, 'seriesResistance.tolerancePct');
   if (value !== undefined && (value < 0 || value > 100)) {
-    throw new VerdictInputError('seriesResistance.tolerancePct', 'seriesResistance.tolerancePct must be within 0…100 %');
+    throw new VerdictInputError(
+      'seriesResistance.tolerancePct',
+      'seriesResistance.tolerancePct must be within 0…100 %',
+    );
   }
   return value;
 }
@@ -58,29 +66,51 @@ function subtractAll(input: VerdictInput, spec: CheckedSpec, c: Corrected): void
     c.lead = subtraction('leadResistance', input.leadResistance, spec);
     const before = c.value;
     c.value -= c.lead;
-    c.steps.push({ label: 'Test-lead resistance subtracted (probes shorted)', formula: `R = ${q(before, unit)} − ${q(c.lead, unit)}`, value: c.value, unit });
+    c.steps.push({
+      label: 'Test-lead resistance subtracted (probes shorted)',
+      formula: `R = ${q(before, unit)} − ${q(c.lead, unit)}`,
+      value: c.value,
+      unit,
+    });
   }
   if (input.seriesResistance != null) {
     c.series = subtraction('seriesResistance', input.seriesResistance, spec);
     c.seriesTolerancePct = seriesTolerance(input.seriesResistance.tolerancePct);
     const before = c.value;
     c.value -= c.series;
-    c.steps.push({ label: 'Series resistance subtracted (resistor cap or suppressor)', formula: `R = ${q(before, unit)} − ${q(c.series, unit)}`, value: c.value, unit });
+    c.steps.push({
+      label: 'Series resistance subtracted (resistor cap or suppressor)',
+      formula: `R = ${q(before, unit)} − ${q(c.series, unit)}`,
+      value: c.value,
+      unit,
+    });
   }
   if (c.value < 0) {
-    throw new VerdictInputError('reading', `The reading minus the lead and series resistance is negative (${q(c.value, unit)}): re-zero the leads or check the series value`);
+    throw new VerdictInputError(
+      'reading',
+      `The reading minus the lead and series resistance is negative (${q(c.value, unit)}): re-zero the leads or check the series value`,
+    );
   }
 }
 
 function applyTemperature(input: VerdictInput, spec: CheckedSpec, c: Corrected): void {
   const tRef = spec.refTempC;
   if (input.temperatureC == null) {
-    if (spec.copper) c.steps.push({ label: `No winding temperature given: no correction, the reading is taken as at ${tRef} °C`, value: c.value, unit: spec.unit });
+    if (spec.copper)
+      c.steps.push({
+        label: `No winding temperature given: no correction, the reading is taken as at ${tRef} °C`,
+        value: c.value,
+        unit: spec.unit,
+      });
     return;
   }
   const t = requireTemperature(input.temperatureC, 'temperatureC');
   if (!spec.copper) {
-    c.steps.push({ label: 'Temperature recorded; no correction because the part is not a copper winding', value: t, unit: '°C' });
+    c.steps.push({
+      label: 'Temperature recorded; no correction because the part is not a copper winding',
+      value: t,
+      unit: '°C',
+    });
     return;
   }
   c.factor = copperFactor(t, tRef);

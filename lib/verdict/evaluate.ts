@@ -15,10 +15,19 @@ import { VerdictInputError, type VerdictInput, type VerdictResult, type VerdictS
 function probabilityStep(p: number, spec: CheckedSpec): VerdictStep {
   const upper = spec.upper === undefined ? '1' : 'Φ((T_U − y)/u)';
   const lower = spec.lower === undefined ? '' : ' − Φ((T_L − y)/u)';
-  return { label: 'Conformance probability (normal distribution, u = U/2)', formula: `p_c = ${upper}${lower}`, value: p, unit: '' };
+  return {
+    label: 'Conformance probability (normal distribution, u = U/2)',
+    formula: `p_c = ${upper}${lower}`,
+    value: p,
+    unit: '',
+  };
 }
 
-function judgeKnown(x: number, U: number, spec: CheckedSpec): Pick<VerdictResult, 'verdict' | 'reason' | 'zones' | 'conformanceProbability'> & { step: VerdictStep } {
+function judgeKnown(
+  x: number,
+  U: number,
+  spec: CheckedSpec,
+): Pick<VerdictResult, 'verdict' | 'reason' | 'zones' | 'conformanceProbability'> & { step: VerdictStep } {
   const d = decideWithUncertainty(x, U, spec);
   const p = conformanceProbability(x, U / 2, spec.lower, spec.upper);
   return {
@@ -30,19 +39,28 @@ function judgeKnown(x: number, U: number, spec: CheckedSpec): Pick<VerdictResult
   };
 }
 
-function judgeUnknown(x: number, spec: CheckedSpec): Pick<VerdictResult, 'verdict' | 'reason' | 'zones' | 'conformanceProbability'> & { step: VerdictStep } {
+function judgeUnknown(
+  x: number,
+  spec: CheckedSpec,
+): Pick<VerdictResult, 'verdict' | 'reason' | 'zones' | 'conformanceProbability'> & { step: VerdictStep } {
   const bands = nearBands(spec, spec.nearLimitPct);
   const d = decideWithoutUncertainty(x, spec, bands);
   const band = (bands.upper ?? bands.lower) as number;
-  const basis = spec.lower !== undefined && spec.upper !== undefined
-    ? `(${formatNumber(spec.upper, 6)} − ${formatNumber(spec.lower, 6)})`
-    : `|${formatNumber((spec.upper ?? spec.lower) as number, 6)}|`;
+  const basis =
+    spec.lower !== undefined && spec.upper !== undefined
+      ? `(${formatNumber(spec.upper, 6)} − ${formatNumber(spec.lower, 6)})`
+      : `|${formatNumber((spec.upper ?? spec.lower) as number, 6)}|`;
   return {
     verdict: d.verdict,
     reason: reasonWithoutUncertainty(d, x, spec, bands),
     zones: { lower: spec.lower, upper: spec.upper, nearBand: band },
     conformanceProbability: null,
-    step: { label: 'No meter accuracy given: uncertainty unknown, near-limit band used instead', formula: `band = ${spec.nearLimitPct} % × ${basis} = ${q(band, spec.unit)}`, value: band, unit: spec.unit },
+    step: {
+      label: 'No meter accuracy given: uncertainty unknown, near-limit band used instead',
+      formula: `band = ${spec.nearLimitPct} % × ${basis} = ${q(band, spec.unit)}`,
+      value: band,
+      unit: spec.unit,
+    },
   };
 }
 

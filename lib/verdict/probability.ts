@@ -60,12 +60,7 @@ const absent = (v: number | null | undefined): v is null | undefined => v === nu
  * Probability that the true value lies within the limits, given estimate y and standard
  * uncertainty u. Either limit may be omitted (one-sided); with neither it is 1.
  */
-export function conformanceProbability(
-  y: number,
-  u: number,
-  lower?: number | null,
-  upper?: number | null,
-): number {
+export function conformanceProbability(y: number, u: number, lower?: number | null, upper?: number | null): number {
   if (!Number.isFinite(y)) throw new RangeError('y must be a finite number');
   if (!Number.isFinite(u) || u < 0) throw new RangeError('u must be a finite number ≥ 0');
   const below = absent(upper) ? 1 : phiRatio(upper - y, u);

@@ -14,14 +14,21 @@ export type DiodeTest = { forward: DiodeState; reverse: DiodeState };
 export type ContinuityTest = { continuity: boolean; expected?: boolean };
 
 function requireState(value: unknown, field: string): DiodeState {
-  if (value !== 'conducts' && value !== 'open') throw new VerdictInputError(field, `${field} must be 'conducts' or 'open'`);
+  if (value !== 'conducts' && value !== 'open')
+    throw new VerdictInputError(field, `${field} must be 'conducts' or 'open'`);
   return value;
 }
 
-const stateStep = (label: string, state: DiodeState): VerdictStep => ({ label, formula: state, value: state === 'conducts' ? 1 : 0, unit: '' });
+const stateStep = (label: string, state: DiodeState): VerdictStep => ({
+  label,
+  formula: state,
+  value: state === 'conducts' ? 1 : 0,
+  unit: '',
+});
 
 export function evaluateDiode(test: DiodeTest): QualitativeResult {
-  if (!test || typeof test !== 'object') throw new VerdictInputError('input', 'A diode check needs forward and reverse results');
+  if (!test || typeof test !== 'object')
+    throw new VerdictInputError('input', 'A diode check needs forward and reverse results');
   const forward = requireState(test.forward, 'forward');
   const reverse = requireState(test.reverse, 'reverse');
   const steps = [
@@ -39,14 +46,16 @@ export function evaluateDiode(test: DiodeTest): QualitativeResult {
   }
   return {
     verdict: 'marginal',
-    reason: 'Conducts one way only, but in the reverse direction: probes swapped, diode fitted backwards or terminals misidentified? Re-test with red on the anode.',
+    reason:
+      'Conducts one way only, but in the reverse direction: probes swapped, diode fitted backwards or terminals misidentified? Re-test with red on the anode.',
     steps,
   };
 }
 
 /** Fuses and wires expect continuity (the default); a check may also expect an open circuit. */
 export function evaluateContinuity(test: ContinuityTest): QualitativeResult {
-  if (!test || typeof test.continuity !== 'boolean') throw new VerdictInputError('continuity', 'continuity must be true or false');
+  if (!test || typeof test.continuity !== 'boolean')
+    throw new VerdictInputError('continuity', 'continuity must be true or false');
   const expected = test.expected ?? true;
   if (typeof expected !== 'boolean') throw new VerdictInputError('expected', 'expected must be true or false');
   const steps: VerdictStep[] = [
@@ -54,7 +63,9 @@ export function evaluateContinuity(test: ContinuityTest): QualitativeResult {
     { label: 'Continuity measured', formula: test.continuity ? 'yes' : 'no', value: test.continuity ? 1 : 0, unit: '' },
   ];
   if (test.continuity === expected) {
-    const reason = expected ? 'Continuity as expected: the fuse or conductor is intact.' : 'Open as expected: no short.';
+    const reason = expected
+      ? 'Continuity as expected: the fuse or conductor is intact.'
+      : 'Open as expected: no short.';
     return { verdict: 'pass', reason, steps };
   }
   const reason = expected

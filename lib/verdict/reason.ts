@@ -18,7 +18,9 @@ function insideText(spec: CheckedSpec): string {
   if (spec.lower !== undefined && spec.upper !== undefined) {
     return `Inside ${formatRange(spec.lower, null, spec.upper, spec.unit)}`;
   }
-  return spec.upper !== undefined ? `At or below ${limitText(spec, 'upper')}` : `At or above ${limitText(spec, 'lower')}`;
+  return spec.upper !== undefined
+    ? `At or below ${limitText(spec, 'upper')}`
+    : `At or above ${limitText(spec, 'lower')}`;
 }
 
 const outsideText = (spec: CheckedSpec, side: 'lower' | 'upper') =>

@@ -46,7 +46,10 @@ export function checkSpec(spec: SpecLimits | null | undefined): CheckedSpec {
   const upper = optionalFinite(spec.max, 'spec.max');
   const nominal = optionalFinite(spec.nominal, 'spec.nominal');
   if (lower === undefined && upper === undefined) {
-    throw new VerdictInputError('spec', 'The spec needs a min or a max to judge a reading against (a nominal alone has no tolerance)');
+    throw new VerdictInputError(
+      'spec',
+      'The spec needs a min or a max to judge a reading against (a nominal alone has no tolerance)',
+    );
   }
   if (lower !== undefined && upper !== undefined && lower > upper) {
     throw new VerdictInputError('spec.min', `spec.min ${lower} is greater than spec.max ${upper}`);

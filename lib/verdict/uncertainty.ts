@@ -28,7 +28,10 @@ export function meterHalfWidth(reading: Quantity, meter: MeterAccuracy): number 
     d = convert(countValue, meterUnit, readingUnit);
   } catch (err) {
     if (!(err instanceof UnitMismatchError)) throw err;
-    throw new VerdictInputError('meter.unit', `The meter count is in ${meterUnit} but the reading is in ${readingUnit}`);
+    throw new VerdictInputError(
+      'meter.unit',
+      `The meter count is in ${meterUnit} but the reading is in ${readingUnit}`,
+    );
   }
   return (percent / 100) * Math.abs(x) + counts * d;
 }

@@ -33,7 +33,10 @@ export function valueIn(quantity: Quantity | null | undefined, field: string, ta
   const { unit, kind } = requireUnit(quantity.unit, `${field}.unit`);
   const targetKind = requireUnit(target, 'spec.unit').kind;
   if (kind !== targetKind) {
-    throw new VerdictInputError(`${field}.unit`, `${field} is a ${kind} (${unit}) but the spec is a ${targetKind} (${target})`);
+    throw new VerdictInputError(
+      `${field}.unit`,
+      `${field} is a ${kind} (${unit}) but the spec is a ${targetKind} (${target})`,
+    );
   }
   return convert(value, unit, target);
 }

@@ -13,12 +13,16 @@ import { roleAtLeast, type AccessRule } from './roles';
 type CompiledRule = { method: string; pattern: RegExp; rule: AccessRule; specificity: number; key: string };
 
 export function compileRules(rules: Record<string, AccessRule>): CompiledRule[] {
-  return Object.entries(rules).map(([key, rule]) => {
-    const [method, path] = key.split(' ');
-    const parts = path.split('/');
-    const pattern = new RegExp(`^${parts.map((p) => (p.startsWith(':') ? '[^/]+' : p.replace(/[.*+?^${}()|[\]\\]/g, '\\$&'))).join('/')}/?$`);
-    return { method, pattern, rule, key, specificity: parts.filter((p) => !p.startsWith(':')).length };
-  }).sort((a, b) => b.specificity - a.specificity);
+  return Object.entries(rules)
+    .map(([key, rule]) => {
+      const [method, path] = key.split(' ');
+      const parts = path.split('/');
+      const pattern = new RegExp(
+        `^${parts.map((p) => (p.startsWith(':') ? '[^/]+' : p.replace(/[.*+?^${}()|[\]\\]/g, '\\$&'))).join('/')}/?$`,
+      );
+      return { method, pattern, rule, key, specificity: parts.filter((p) => !p.startsWith(':')).length };
+    })
+    .sort((a, b) => b.specificity - a.specificity);
 }
 
 const COMPILED = compileRules(ROUTE_RULES);

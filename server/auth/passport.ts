@@ -10,21 +10,27 @@ import { AppDataSource } from '../db/data-source';
 import { User } from '../modules/users/user.entity';
 import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER } from './tokens';
 
-passport.use(new JwtStrategy({
-  jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-  secretOrKey: config.jwtSecret,
-  algorithms: [JWT_ALGORITHM],
-  issuer: JWT_ISSUER,
-  audience: JWT_AUDIENCE,
-}, (payload: { sub?: string }, done) => {
-  const id = Number(payload.sub);
-  if (!Number.isInteger(id)) return done(null, false);
-  AppDataSource.getRepository(User).findOneBy({ id })
-    .then((user) => {
-      if (!user || user.disabledAt || !user.emailVerifiedAt) return done(null, false);
-      done(null, { id: user.id, email: user.email, displayName: user.displayName, role: user.role });
-    })
-    .catch((err) => done(err));
-}));
+passport.use(
+  new JwtStrategy(
+    {
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      secretOrKey: config.jwtSecret,
+      algorithms: [JWT_ALGORITHM],
+      issuer: JWT_ISSUER,
+      audience: JWT_AUDIENCE,
+    },
+    (payload: { sub?: string }, done) => {
+      const id = Number(payload.sub);
+      if (!Number.isInteger(id)) return done(null, false);
+      AppDataSource.getRepository(User)
+        .findOneBy({ id })
+        .then((user) => {
+          if (!user || user.disabledAt || !user.emailVerifiedAt) return done(null, false);
+          done(null, { id: user.id, email: user.email, displayName: user.displayName, role: user.role });
+        })
+        .catch((err) => done(err));
+    },
+  ),
+);
 
 export { passport };

@@ -15,6 +15,7 @@ declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     // passport sets req.user to the signed-in account.
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type -- declaration merging needs an interface
     interface User extends SignedInUser {}
   }
 }

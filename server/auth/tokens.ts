@@ -13,8 +13,11 @@ export const JWT_AUDIENCE = 'specbench-app';
 
 export function signAccessToken(user: Pick<SignedInUser, 'id' | 'role'>): string {
   return jwt.sign({ role: user.role }, config.jwtSecret, {
-    algorithm: JWT_ALGORITHM, issuer: JWT_ISSUER, audience: JWT_AUDIENCE,
-    subject: String(user.id), expiresIn: config.ACCESS_TOKEN_TTL_S,
+    algorithm: JWT_ALGORITHM,
+    issuer: JWT_ISSUER,
+    audience: JWT_AUDIENCE,
+    subject: String(user.id),
+    expiresIn: config.ACCESS_TOKEN_TTL_S,
   });
 }
 

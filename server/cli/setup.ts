@@ -16,13 +16,20 @@ async function main() {
   console.log(`[specbench] migrations: ${ran.length ? ran.map((m) => m.name).join(', ') : 'up to date'}`);
   for (const s of await loadDemoLibrary()) {
     const { created, updated, unchanged, rejected } = s.counts;
-    console.log(`[specbench] demo library: ${created} created, ${updated} updated, ${unchanged} unchanged, ${rejected} rejected`);
+    console.log(
+      `[specbench] demo library: ${created} created, ${updated} updated, ${unchanged} unchanged, ${rejected} rejected`,
+    );
   }
   const created = await ensureDemoAccounts();
   await AppDataSource.destroy();
-  console.log(`[specbench] demo accounts${created ? ` (${created} created)` : ''}, password "${config.DEMO_PASSWORD}" (DEMO_PASSWORD):`);
+  console.log(
+    `[specbench] demo accounts${created ? ` (${created} created)` : ''}, password "${config.DEMO_PASSWORD}" (DEMO_PASSWORD):`,
+  );
   for (const a of DEMO_ACCOUNTS) console.log(`[specbench]   ${a.role.padEnd(11)} ${a.email}`);
   console.log(`[specbench] open http://localhost:${config.PORT}`);
 }
 
-main().catch((err) => { console.error('[specbench] set-up failed:', err); process.exit(1); });
+main().catch((err) => {
+  console.error('[specbench] set-up failed:', err);
+  process.exit(1);
+});

@@ -18,7 +18,23 @@ import { Job } from '../modules/jobs/job.entity';
 import { Reading } from '../modules/jobs/reading.entity';
 import { Correction } from '../modules/corrections/correction.entity';
 
-export const ENTITIES = [Make, VehicleModel, Component, Source, Spec, SpecRevision, ImportBatch, User, UserAudit, RefreshToken, EmailToken, OutboxMessage, Job, Reading, Correction];
+export const ENTITIES = [
+  Make,
+  VehicleModel,
+  Component,
+  Source,
+  Spec,
+  SpecRevision,
+  ImportBatch,
+  User,
+  UserAudit,
+  RefreshToken,
+  EmailToken,
+  OutboxMessage,
+  Job,
+  Reading,
+  Correction,
+];
 
 export function dataSourceOptions(database = config.DB_NAME): DataSourceOptions {
   return {

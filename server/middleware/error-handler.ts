@@ -2,9 +2,17 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../errors/app-error';
 
 const TITLES: Record<number, string> = {
-  400: 'Bad request', 401: 'Unauthorized', 403: 'Forbidden', 404: 'Not found', 409: 'Conflict',
-  413: 'Payload too large', 415: 'Unsupported media type', 422: 'Unprocessable content',
-  429: 'Too many requests', 500: 'Internal server error', 503: 'Service unavailable',
+  400: 'Bad request',
+  401: 'Unauthorized',
+  403: 'Forbidden',
+  404: 'Not found',
+  409: 'Conflict',
+  413: 'Payload too large',
+  415: 'Unsupported media type',
+  422: 'Unprocessable content',
+  429: 'Too many requests',
+  500: 'Internal server error',
+  503: 'Service unavailable',
 };
 
 type Problem = { status: number; code: string; detail: string; [key: string]: unknown };
@@ -12,14 +20,17 @@ type Problem = { status: number; code: string; detail: string; [key: string]: un
 export function sendProblem(res: Parameters<RequestHandler>[1], problem: Problem) {
   const { status, code, detail, ...extras } = problem;
   // Extras come first so they can never overwrite the standard members.
-  res.status(status).type('application/problem+json').json({
-    ...extras,
-    type: `https://specbench.example/problems/${code}`,
-    title: TITLES[status] ?? 'Error',
-    status,
-    detail,
-    code,
-  });
+  res
+    .status(status)
+    .type('application/problem+json')
+    .json({
+      ...extras,
+      type: `https://specbench.example/problems/${code}`,
+      title: TITLES[status] ?? 'Error',
+      status,
+      detail,
+      code,
+    });
 }
 
 export const notFoundHandler: RequestHandler = (req, res) => {
@@ -27,11 +38,21 @@ export const notFoundHandler: RequestHandler = (req, res) => {
 };
 
 /** Database connection failures become 503 so clients retry instead of giving up. */
-const DB_DOWN = new Set(['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ER_CON_COUNT_ERROR', 'ECONNRESET', 'EPIPE']);
+const DB_DOWN = new Set([
+  'ECONNREFUSED',
+  'PROTOCOL_CONNECTION_LOST',
+  'ETIMEDOUT',
+  'ER_CON_COUNT_ERROR',
+  'ECONNRESET',
+  'EPIPE',
+]);
 function isDatabaseDown(err: unknown): boolean {
   const e = err as { code?: string; driverError?: { code?: string }; message?: string };
   const code = e?.code ?? e?.driverError?.code;
-  return (code !== undefined && DB_DOWN.has(code)) || /Connection lost|connect ECONNREFUSED|Pool is closed/i.test(e?.message ?? '');
+  return (
+    (code !== undefined && DB_DOWN.has(code)) ||
+    /Connection lost|connect ECONNREFUSED|Pool is closed/i.test(e?.message ?? '')
+  );
 }
 
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
@@ -40,16 +61,28 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     return sendProblem(res, { status: err.status, code: err.code, detail: err.message, ...err.extras });
   }
   // body-parser and multer errors carry an HTTP status of their own.
-  const status = (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
+  const status =
+    (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
   if (typeof status === 'number' && status >= 400 && status < 500) {
     const code = (err as { type?: string }).type === 'entity.too.large' ? 'payload_too_large' : 'bad_request';
-    const detail = code === 'payload_too_large' ? 'The request body is too large.' : 'The request body could not be read (malformed JSON?).';
+    const detail =
+      code === 'payload_too_large'
+        ? 'The request body is too large.'
+        : 'The request body could not be read (malformed JSON?).';
     return sendProblem(res, { status, code, detail });
   }
   if (isDatabaseDown(err)) {
     res.setHeader('Retry-After', '2');
-    return sendProblem(res, { status: 503, code: 'unavailable', detail: 'The database is not reachable right now. Try again in a moment.' });
+    return sendProblem(res, {
+      status: 503,
+      code: 'unavailable',
+      detail: 'The database is not reachable right now. Try again in a moment.',
+    });
   }
   console.error(`${req.method} ${req.originalUrl} failed:`, err);
-  sendProblem(res, { status: 500, code: 'internal', detail: 'Something went wrong on the server. It has been logged.' });
+  sendProblem(res, {
+    status: 500,
+    code: 'internal',
+    detail: 'Something went wrong on the server. It has been logged.',
+  });
 };

@@ -8,13 +8,23 @@ import { sendProblem } from './error-handler';
  */
 export function limiter(name: string, limit: number, windowMs: number, key?: (req: Request) => string) {
   return rateLimit({
-    windowMs, limit, standardHeaders: 'draft-8', legacyHeaders: false,
+    windowMs,
+    limit,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
     keyGenerator: (req) => `${name}:${ipKeyGenerator(req.ip ?? '')}${key ? `:${key(req)}` : ''}`,
     handler: (req, res) => {
       const reset = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-      const seconds = reset ? Math.max(1, Math.ceil((reset.getTime() - Date.now()) / 1000)) : Math.ceil(windowMs / 1000);
+      const seconds = reset
+        ? Math.max(1, Math.ceil((reset.getTime() - Date.now()) / 1000))
+        : Math.ceil(windowMs / 1000);
       res.setHeader('Retry-After', String(seconds));
-      sendProblem(res, { status: 429, code: 'rate_limited', detail: `Too many attempts. Try again in ${seconds} seconds.`, retryAfter: seconds });
+      sendProblem(res, {
+        status: 429,
+        code: 'rate_limited',
+        detail: `Too many attempts. Try again in ${seconds} seconds.`,
+        retryAfter: seconds,
+      });
     },
   });
 }

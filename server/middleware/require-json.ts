@@ -8,7 +8,9 @@ import { AppError } from '../errors/app-error';
 export const requireJson: RequestHandler = (req, _res, next) => {
   const hasBody = req.headers['transfer-encoding'] !== undefined || Number(req.headers['content-length'] ?? 0) > 0;
   if (hasBody && !req.is('application/json')) {
-    return next(new AppError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'));
+    return next(
+      new AppError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'),
+    );
   }
   next();
 };

@@ -16,7 +16,10 @@ export function validate<S extends z.ZodType>(part: Part, schema: S): RequestHan
   return (req, res, next) => {
     const result = schema.safeParse(req[part] ?? {});
     if (!result.success) {
-      throw AppError.badRequest(`The request ${part === 'body' ? 'body' : part} is not valid.`, issuesToErrors(result.error));
+      throw AppError.badRequest(
+        `The request ${part === 'body' ? 'body' : part} is not valid.`,
+        issuesToErrors(result.error),
+      );
     }
     res.locals[part] = result.data;
     next();

@@ -1,19 +1,19 @@
 import { useState } from 'react';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
-import { EditorGate } from '../../../components/curation/editor-gate';
-import { SpecEditForm } from '../../../components/curation/spec-edit-form';
-import { specToForm, type SpecFormValues } from '../../../components/curation/spec-form-values';
-import { StaleEditView } from '../../../components/curation/stale-edit-view';
-import { Screen } from '../../../components/ui/screen';
-import { Text } from '../../../components/ui/text';
-import { ErrorState, LoadingState } from '../../../components/ui/states';
-import { ApiError } from '../../../lib/api/client';
-import { staleCurrent } from '../../../lib/api/curation';
-import { describeError } from '../../../lib/api/describe-error';
-import type { UpdateSpecBody } from '../../../lib/contracts/curation';
-import type { SpecDetailDto } from '../../../lib/contracts/library';
-import { useUpdateSpecMutation } from '../../../lib/hooks/use-curation';
-import { useSpecQuery } from '../../../lib/hooks/use-library';
+import { EditorGate } from '@/components/curation/editor-gate';
+import { SpecEditForm } from '@/components/curation/spec-edit-form';
+import { specToForm, type SpecFormValues } from '@/components/curation/spec-form-values';
+import { StaleEditView } from '@/components/curation/stale-edit-view';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { ErrorState, LoadingState } from '@/components/ui/states';
+import { ApiError } from '@/lib/api/client';
+import { staleCurrent } from '@/lib/api/curation';
+import { describeError } from '@/lib/api/describe-error';
+import type { UpdateSpecBody } from '@/lib/contracts/curation';
+import type { SpecDetailDto } from '@/lib/contracts/library';
+import { useUpdateSpecMutation } from '@/lib/hooks/use-curation';
+import { useSpecQuery } from '@/lib/hooks/use-library';
 
 /** What the form edits: the spec as loaded (frozen, so a background refetch cannot hide a conflict) and the first values shown. */
 type Basis = { spec: SpecDetailDto; initial?: SpecFormValues };
@@ -32,15 +32,20 @@ export default function EditSpecScreen() {
   // Start from a fresh copy, not a cached one that may already be out of date.
   if (spec.data && !basis && !spec.isFetching) setBasis({ spec: spec.data });
 
-  const save = (body: UpdateSpecBody, mine: SpecFormValues) => update.mutate(body, {
-    // Back to the spec card the edit was opened from, or to it in place of the editor.
-    onSuccess: (saved) => router.dismissTo(`/specs/${saved.id}`),
-    onError: (err) => {
-      const current = staleCurrent(err);
-      if (current) setConflict({ current, body, mine });
-    },
-  });
-  const restart = (next: Basis) => { update.reset(); setConflict(null); setBasis(next); };
+  const save = (body: UpdateSpecBody, mine: SpecFormValues) =>
+    update.mutate(body, {
+      // Back to the spec card the edit was opened from, or to it in place of the editor.
+      onSuccess: (saved) => router.dismissTo(`/specs/${saved.id}`),
+      onError: (err) => {
+        const current = staleCurrent(err);
+        if (current) setConflict({ current, body, mine });
+      },
+    });
+  const restart = (next: Basis) => {
+    update.reset();
+    setConflict(null);
+    setBasis(next);
+  };
 
   const body = () => {
     if (spec.isPending) return <LoadingState label="Loading the spec" />;
@@ -55,18 +60,37 @@ export default function EditSpecScreen() {
         restart({ spec: current, initial: { ...now, ...carried, reason: mine.reason } });
       };
       return (
-        <StaleEditView current={current} base={specToForm(basis.spec)} baseVersion={basis.spec.version} mine={mine} changed={changed}
-          busy={update.isPending} error={update.error && !staleCurrent(update.error) ? describeError(update.error) : null}
+        <StaleEditView
+          current={current}
+          base={specToForm(basis.spec)}
+          baseVersion={basis.spec.version}
+          mine={mine}
+          changed={changed}
+          busy={update.isPending}
+          error={update.error && !staleCurrent(update.error) ? describeError(update.error) : null}
           onReapply={() => save({ ...mineBody, version: current.version }, mine)}
-          onEditMine={onEditMine} onDiscard={() => restart({ spec: current })} />
+          onEditMine={onEditMine}
+          onDiscard={() => restart({ spec: current })}
+        />
       );
     }
     const serverErrors = update.error instanceof ApiError ? update.error.errors : undefined;
     return (
       <>
-        {update.error ? <Text color="fail" accessibilityRole="alert">{describeError(update.error)}</Text> : null}
-        <SpecEditForm key={basis.spec.version} base={specToForm(basis.spec)} version={basis.spec.version} initial={basis.initial}
-          submitting={update.isPending} serverErrors={serverErrors} onSubmit={save} />
+        {update.error ? (
+          <Text color="fail" accessibilityRole="alert">
+            {describeError(update.error)}
+          </Text>
+        ) : null}
+        <SpecEditForm
+          key={basis.spec.version}
+          base={specToForm(basis.spec)}
+          version={basis.spec.version}
+          initial={basis.initial}
+          submitting={update.isPending}
+          serverErrors={serverErrors}
+          onSubmit={save}
+        />
       </>
     );
   };
@@ -75,7 +99,11 @@ export default function EditSpecScreen() {
     <Screen testID="edit-spec-screen">
       <Stack.Screen options={{ title: basis ? `Edit: ${basis.spec.parameter}` : 'Edit spec' }} />
       <EditorGate reason="to edit specs">
-        {basis ? <Text variant="title">{basis.spec.component.name} — {basis.spec.parameter}</Text> : null}
+        {basis ? (
+          <Text variant="title">
+            {basis.spec.component.name} — {basis.spec.parameter}
+          </Text>
+        ) : null}
         {body()}
       </EditorGate>
     </Screen>

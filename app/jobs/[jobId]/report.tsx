@@ -1,20 +1,20 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Stack, useLocalSearchParams } from 'expo-router';
-import { groupByComponent, sentenceCase } from '../../../components/jobs/job-format';
-import { LiabilityNote } from '../../../components/jobs/liability-note';
-import { PrintButton } from '../../../components/jobs/print-button';
-import { ReportHeader } from '../../../components/jobs/report-header';
-import { ReportReading } from '../../../components/jobs/report-reading';
-import { SignInPrompt } from '../../../components/jobs/sign-in-prompt';
-import { SupersededList } from '../../../components/jobs/superseded-list';
-import { Screen } from '../../../components/ui/screen';
-import { EmptyState, ErrorState, LoadingState } from '../../../components/ui/states';
-import { Text } from '../../../components/ui/text';
-import { describeError } from '../../../lib/api/describe-error';
-import { useJobQuery } from '../../../lib/hooks/use-jobs';
-import { useSession } from '../../../lib/session/session-provider';
-import { Spacing } from '../../../lib/theme';
+import { groupByComponent, sentenceCase } from '@/components/jobs/job-format';
+import { LiabilityNote } from '@/components/jobs/liability-note';
+import { PrintButton } from '@/components/jobs/print-button';
+import { ReportHeader } from '@/components/jobs/report-header';
+import { ReportReading } from '@/components/jobs/report-reading';
+import { SignInPrompt } from '@/components/jobs/sign-in-prompt';
+import { SupersededList } from '@/components/jobs/superseded-list';
+import { Screen } from '@/components/ui/screen';
+import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
+import { Text } from '@/components/ui/text';
+import { describeError } from '@/lib/api/describe-error';
+import { useJobQuery } from '@/lib/hooks/use-jobs';
+import { useSession } from '@/lib/session/session-provider';
+import { Spacing } from '@/lib/theme';
 
 export default function JobReportScreen() {
   const { jobId } = useLocalSearchParams<{ jobId: string }>();
@@ -23,11 +23,36 @@ export default function JobReportScreen() {
   const job = useJobQuery(id, session.status === 'signed-in');
   const [printedAt] = useState(() => new Date().toISOString());
 
-  if (session.status === 'restoring') return <Screen><LoadingState label="Checking your session" /></Screen>;
-  if (session.status !== 'signed-in') return <Screen testID="job-report"><SignInPrompt /></Screen>;
-  if (!(id > 0)) return <Screen><ErrorState message="This address does not name a job." /></Screen>;
-  if (job.isPending) return <Screen><LoadingState label="Preparing the report" /></Screen>;
-  if (job.error) return <Screen><ErrorState message={describeError(job.error)} onRetry={job.refetch} /></Screen>;
+  if (session.status === 'restoring')
+    return (
+      <Screen>
+        <LoadingState label="Checking your session" />
+      </Screen>
+    );
+  if (session.status !== 'signed-in')
+    return (
+      <Screen testID="job-report">
+        <SignInPrompt />
+      </Screen>
+    );
+  if (!(id > 0))
+    return (
+      <Screen>
+        <ErrorState message="This address does not name a job." />
+      </Screen>
+    );
+  if (job.isPending)
+    return (
+      <Screen>
+        <LoadingState label="Preparing the report" />
+      </Screen>
+    );
+  if (job.error)
+    return (
+      <Screen>
+        <ErrorState message={describeError(job.error)} onRetry={job.refetch} />
+      </Screen>
+    );
 
   const j = job.data;
   const current = j.readings.filter((r) => r.supersededBy === null);
@@ -42,8 +67,12 @@ export default function JobReportScreen() {
         {current.length === 0 ? <EmptyState message="No readings on this job yet." /> : null}
         {groupByComponent(current).map((g) => (
           <View key={g.component} style={styles.group}>
-            <Text variant="label" color="textMuted">{sentenceCase(g.component)}</Text>
-            {g.readings.map((r) => <ReportReading key={r.id} reading={r} index={++n} />)}
+            <Text variant="label" color="textMuted">
+              {sentenceCase(g.component)}
+            </Text>
+            {g.readings.map((r) => (
+              <ReportReading key={r.id} reading={r} index={++n} />
+            ))}
           </View>
         ))}
         <SupersededList readings={j.readings.filter((r) => r.supersededBy !== null)} />

@@ -2,14 +2,14 @@
  * One verified demo account per role, created when missing (running again changes
  * nothing). The password comes from DEMO_PASSWORD.
  */
-import { config } from '../../config';
+import { config } from '@/server/config';
 import { AppDataSource } from '../data-source';
-import type { Role } from '../../auth/roles';
-import { User } from '../../modules/users/user.entity';
-import { emailKey } from '../../modules/users/user.mapper';
-import { hashPassword } from '../../modules/auth/passwords';
+import type { Role } from '@/server/auth/roles';
+import { User } from '@/server/modules/users/user.entity';
+import { emailKey } from '@/server/modules/users/user.mapper';
+import { hashPassword } from '@/server/modules/auth/passwords';
 
-export const DEMO_ACCOUNTS: Array<{ email: string; displayName: string; role: Role }> = [
+export const DEMO_ACCOUNTS: { email: string; displayName: string; role: Role }[] = [
   { email: 'admin@specbench.example', displayName: 'Ada Quenby (admin)', role: 'admin' },
   { email: 'editor@specbench.example', displayName: 'Elin Marsh (editor)', role: 'editor' },
   { email: 'contributor@specbench.example', displayName: 'Cato Ruddle (contributor)', role: 'contributor' },
@@ -20,7 +20,12 @@ export async function ensureDemoAccounts(): Promise<number> {
   let created = 0;
   for (const a of DEMO_ACCOUNTS) {
     if (await repo.existsBy({ emailKey: emailKey(a.email) })) continue;
-    await repo.insert({ ...a, emailKey: emailKey(a.email), passwordHash: await hashPassword(config.DEMO_PASSWORD), emailVerifiedAt: new Date() });
+    await repo.insert({
+      ...a,
+      emailKey: emailKey(a.email),
+      passwordHash: await hashPassword(config.DEMO_PASSWORD),
+      emailVerifiedAt: new Date(),
+    });
     created += 1;
   }
   return created;

@@ -5,8 +5,8 @@
  */
 import fs from 'node:fs';
 import path from 'node:path';
-import { config } from '../../config';
-import { importCsvNow, type ImportSummary } from '../../modules/imports/import.service';
+import { config } from '@/server/config';
+import { importCsvNow, type ImportSummary } from '@/server/modules/imports/import.service';
 
 export const DEMO_FILES = ['demo-library.csv'];
 export const DEMO_ACTOR = { id: null, name: 'Specbench demo loader' };
@@ -15,7 +15,11 @@ export async function loadDemoLibrary(dataDir = path.join(config.rootDir, 'data'
   const summaries: ImportSummary[] = [];
   for (const file of DEMO_FILES) {
     const text = fs.readFileSync(path.join(dataDir, file), 'utf8');
-    summaries.push(await importCsvNow(text, file, DEMO_ACTOR, 'Demo library (invented makes, models and sources)', { createOnly: true }));
+    summaries.push(
+      await importCsvNow(text, file, DEMO_ACTOR, 'Demo library (invented makes, models and sources)', {
+        createOnly: true,
+      }),
+    );
   }
   return summaries;
 }

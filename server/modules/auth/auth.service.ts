@@ -3,11 +3,11 @@
  * and changed passwords. Answers that could reveal whether an address has an account
  * (sign-up, forgot) are the same either way.
  */
-import type { ChangePasswordBody, ResetBody, SessionDto, SignInBody, SignUpBody, UserDto } from '../../../lib/contracts/auth';
-import { config } from '../../config';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
-import { signAccessToken } from '../../auth/tokens';
+import type { ChangePasswordBody, ResetBody, SessionDto, SignInBody, SignUpBody, UserDto } from '@/lib/contracts/auth';
+import { config } from '@/server/config';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
+import { signAccessToken } from '@/server/auth/tokens';
 import { enqueue } from '../mail/mailer';
 import { User } from '../users/user.entity';
 import { emailKey, toUserDto } from '../users/user.mapper';
@@ -28,7 +28,13 @@ export async function signUp(body: SignUpBody): Promise<void> {
   await AppDataSource.transaction(async (m) => {
     const existing = await m.getRepository(User).findOneBy({ emailKey: emailKey(body.email) });
     if (existing) return enqueue(m, existingAccountMail(existing.email));
-    const user = await m.getRepository(User).save({ email: body.email.trim(), emailKey: emailKey(body.email), displayName: body.displayName, passwordHash, role: 'contributor' });
+    const user = await m.getRepository(User).save({
+      email: body.email.trim(),
+      emailKey: emailKey(body.email),
+      displayName: body.displayName,
+      passwordHash,
+      role: 'contributor',
+    });
     await enqueue(m, verifyMail(user.email, user.displayName, await createLink(m, user.id, 'verify')));
   });
 }
@@ -45,8 +51,10 @@ export async function signIn(body: SignInBody): Promise<SessionResult> {
   const user = await AppDataSource.getRepository(User).findOneBy({ emailKey: emailKey(body.email) });
   const ok = await verifyPassword(body.password, user?.passwordHash ?? DUMMY_HASH);
   if (!user || !ok) throw new AppError(401, 'invalid_credentials', 'The e-mail address or the password is wrong.');
-  if (user.disabledAt) throw new AppError(403, 'account_disabled', 'This account has been disabled. Ask an administrator.');
-  if (!user.emailVerifiedAt) throw new AppError(403, 'email_not_verified', 'Confirm your e-mail address first: follow the link we sent you.');
+  if (user.disabledAt)
+    throw new AppError(403, 'account_disabled', 'This account has been disabled. Ask an administrator.');
+  if (!user.emailVerifiedAt)
+    throw new AppError(403, 'email_not_verified', 'Confirm your e-mail address first: follow the link we sent you.');
   return session(user, await AppDataSource.transaction((m) => issueRefreshToken(m, user.id)));
 }
 
@@ -55,7 +63,8 @@ export async function refresh(token: string | undefined): Promise<SessionResult>
   const rotation = await AppDataSource.transaction((m) => rotateRefreshToken(m, token));
   if (!rotation.ok) throw rotation.error;
   const user = await AppDataSource.getRepository(User).findOneBy({ id: rotation.userId });
-  if (!user || user.disabledAt) throw new AppError(403, 'account_disabled', 'This account has been disabled. Ask an administrator.');
+  if (!user || user.disabledAt)
+    throw new AppError(403, 'account_disabled', 'This account has been disabled. Ask an administrator.');
   return session(user, rotation.token);
 }
 
@@ -82,7 +91,9 @@ export async function resetPassword(body: ResetBody): Promise<void> {
     const user = await m.getRepository(User).findOneByOrFail({ id: userId });
     checkPasswordStrength(body.password, user.email);
     // The link proves the address, so it also counts as verification.
-    await m.getRepository(User).update({ id: userId }, { passwordHash, emailVerifiedAt: user.emailVerifiedAt ?? new Date() });
+    await m
+      .getRepository(User)
+      .update({ id: userId }, { passwordHash, emailVerifiedAt: user.emailVerifiedAt ?? new Date() });
     await revokeAllFor(m, userId);
   });
 }
@@ -90,7 +101,9 @@ export async function resetPassword(body: ResetBody): Promise<void> {
 export async function changePassword(userId: number, body: ChangePasswordBody): Promise<SessionResult> {
   const user = await AppDataSource.getRepository(User).findOneByOrFail({ id: userId });
   if (!(await verifyPassword(body.currentPassword, user.passwordHash))) {
-    throw AppError.unprocessable('The current password is wrong.', [{ path: 'currentPassword', message: 'Wrong password' }]);
+    throw AppError.unprocessable('The current password is wrong.', [
+      { path: 'currentPassword', message: 'Wrong password' },
+    ]);
   }
   checkPasswordStrength(body.newPassword, user.email);
   const passwordHash = await hashPassword(body.newPassword);

@@ -1,16 +1,18 @@
 /** Single-use e-mail links: create (hashed), consume (once, before expiry), and the messages. */
 import type { EntityManager } from 'typeorm';
 import { IsNull } from 'typeorm';
-import { config } from '../../config';
-import { AppError } from '../../errors/app-error';
-import { randomToken, sha256Hex } from '../../auth/tokens';
+import { config } from '@/server/config';
+import { AppError } from '@/server/errors/app-error';
+import { randomToken, sha256Hex } from '@/server/auth/tokens';
 import { EmailToken } from './email-token.entity';
 
 const TTL_MS = { verify: 24 * 3_600_000, reset: 30 * 60_000 } as const;
 
 export async function createLink(m: EntityManager, userId: number, purpose: 'verify' | 'reset'): Promise<string> {
   const token = randomToken();
-  await m.getRepository(EmailToken).insert({ userId, purpose, tokenHash: sha256Hex(token), expiresAt: new Date(Date.now() + TTL_MS[purpose]) });
+  await m
+    .getRepository(EmailToken)
+    .insert({ userId, purpose, tokenHash: sha256Hex(token), expiresAt: new Date(Date.now() + TTL_MS[purpose]) });
   const page = purpose === 'verify' ? 'verify' : 'reset';
   return `${config.appUrl}/${page}?token=${encodeURIComponent(token)}`;
 }
@@ -18,12 +20,16 @@ export async function createLink(m: EntityManager, userId: number, purpose: 'ver
 /** Marks the link used and returns its user; a used, expired or unknown link is refused. */
 export async function consumeLink(m: EntityManager, token: string, purpose: 'verify' | 'reset'): Promise<number> {
   const repo = m.getRepository(EmailToken);
-  const row = await repo.createQueryBuilder('t').setLock('pessimistic_write')
-    .where('t.tokenHash = :h AND t.purpose = :p', { h: sha256Hex(token), p: purpose }).getOne();
+  const row = await repo
+    .createQueryBuilder('t')
+    .setLock('pessimistic_write')
+    .where('t.tokenHash = :h AND t.purpose = :p', { h: sha256Hex(token), p: purpose })
+    .getOne();
   const what = purpose === 'verify' ? 'verification' : 'password reset';
   if (!row) throw new AppError(400, 'invalid_token', `This ${what} link is not valid. Ask for a new one.`);
   if (row.usedAt) throw new AppError(400, 'token_used', `This ${what} link has already been used. Ask for a new one.`);
-  if (row.expiresAt.getTime() <= Date.now()) throw new AppError(400, 'token_expired', `This ${what} link has expired. Ask for a new one.`);
+  if (row.expiresAt.getTime() <= Date.now())
+    throw new AppError(400, 'token_expired', `This ${what} link has expired. Ask for a new one.`);
   await repo.update(row.id, { usedAt: new Date() });
   // Older links of the same kind stop working too.
   await repo.update({ userId: row.userId, purpose, usedAt: IsNull() }, { usedAt: new Date() });
@@ -31,16 +37,19 @@ export async function consumeLink(m: EntityManager, token: string, purpose: 'ver
 }
 
 export const verifyMail = (to: string, name: string, link: string) => ({
-  to, subject: 'Confirm your Specbench e-mail address',
+  to,
+  subject: 'Confirm your Specbench e-mail address',
   text: `Hello ${name},\n\nConfirm your e-mail address to finish setting up your Specbench account:\n\n${link}\n\nThe link works once and expires in 24 hours. If you did not sign up, ignore this message.\n`,
 });
 
 export const resetMail = (to: string, name: string, link: string) => ({
-  to, subject: 'Reset your Specbench password',
+  to,
+  subject: 'Reset your Specbench password',
   text: `Hello ${name},\n\nSomeone (hopefully you) asked to reset the password of this Specbench account. Choose a new password here:\n\n${link}\n\nThe link works once and expires in 30 minutes. If you did not ask, ignore this message: your password stays as it is.\n`,
 });
 
 export const existingAccountMail = (to: string) => ({
-  to, subject: 'Sign-up attempt with your Specbench address',
+  to,
+  subject: 'Sign-up attempt with your Specbench address',
   text: `Someone tried to create a Specbench account with this e-mail address, which already has one.\nIf it was you, sign in instead, or use "Forgot password" at ${config.appUrl}/forgot.\n`,
 });

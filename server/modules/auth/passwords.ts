@@ -3,24 +3,52 @@
  * not one of the commonest passwords, not the e-mail address; bcryptjs hashes.
  */
 import bcrypt from 'bcryptjs';
-import { config } from '../../config';
-import { AppError } from '../../errors/app-error';
+import { config } from '@/server/config';
+import { AppError } from '@/server/errors/app-error';
 
 // A short list of the passwords (and patterns) most often seen in breach corpora, 12+ characters.
 const COMMON = new Set([
-  'password1234', '123456789012', '1234567890123', 'qwertyuiop12', 'qwertyuiopasdf', 'iloveyou1234', 'passwordpassword',
-  'password12345', 'password123456', 'administrator', 'letmein12345', 'welcome12345', 'abc123456789', '111111111111',
-  '000000000000', 'aaaaaaaaaaaa', 'qwerty123456', '1q2w3e4r5t6y', 'football1234', 'baseball1234', 'sunshine1234',
-  'princess1234', 'trustno11234', 'changeme1234', 'specbench123', 'specbench1234', 'motorcycle123', 'qazwsxedcrfv',
+  'password1234',
+  '123456789012',
+  '1234567890123',
+  'qwertyuiop12',
+  'qwertyuiopasdf',
+  'iloveyou1234',
+  'passwordpassword',
+  'password12345',
+  'password123456',
+  'administrator',
+  'letmein12345',
+  'welcome12345',
+  'abc123456789',
+  '111111111111',
+  '000000000000',
+  'aaaaaaaaaaaa',
+  'qwerty123456',
+  '1q2w3e4r5t6y',
+  'football1234',
+  'baseball1234',
+  'sunshine1234',
+  'princess1234',
+  'trustno11234',
+  'changeme1234',
+  'specbench123',
+  'specbench1234',
+  'motorcycle123',
+  'qazwsxedcrfv',
 ]);
 
 export function checkPasswordStrength(password: string, email: string) {
   const lower = password.toLowerCase();
   if (COMMON.has(lower) || /^(.)\1+$/.test(password) || /^(0123456789|1234567890)+\d*$/.test(password)) {
-    throw AppError.unprocessable('That password is too common. Choose a longer phrase nobody would guess.', [{ path: 'password', message: 'Too common' }]);
+    throw AppError.unprocessable('That password is too common. Choose a longer phrase nobody would guess.', [
+      { path: 'password', message: 'Too common' },
+    ]);
   }
   if (lower.includes(email.toLowerCase().split('@')[0]) && email.split('@')[0].length >= 4) {
-    throw AppError.unprocessable('The password must not contain your e-mail name.', [{ path: 'password', message: 'Contains your e-mail name' }]);
+    throw AppError.unprocessable('The password must not contain your e-mail name.', [
+      { path: 'password', message: 'Contains your e-mail name' },
+    ]);
   }
 }
 

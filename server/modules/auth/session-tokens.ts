@@ -2,15 +2,21 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import { IsNull } from 'typeorm';
-import { config } from '../../config';
-import { AppError } from '../../errors/app-error';
-import { randomToken, sha256Hex } from '../../auth/tokens';
+import { config } from '@/server/config';
+import { AppError } from '@/server/errors/app-error';
+import { randomToken, sha256Hex } from '@/server/auth/tokens';
 import { RefreshToken } from './refresh-token.entity';
 
-export async function issueRefreshToken(m: EntityManager, userId: number, familyId: string = randomUUID()): Promise<string> {
+export async function issueRefreshToken(
+  m: EntityManager,
+  userId: number,
+  familyId: string = randomUUID(),
+): Promise<string> {
   const token = randomToken();
   await m.getRepository(RefreshToken).insert({
-    userId, familyId, tokenHash: sha256Hex(token),
+    userId,
+    familyId,
+    tokenHash: sha256Hex(token),
     expiresAt: new Date(Date.now() + config.REFRESH_TOKEN_TTL_DAYS * 86_400_000),
   });
   return token;
@@ -36,8 +42,11 @@ export type Rotation = { ok: true; userId: number; token: string } | { ok: false
 /** Returns instead of throwing, so a revocation commits before the caller answers 401. */
 export async function rotateRefreshToken(m: EntityManager, token: string): Promise<Rotation> {
   const repo = m.getRepository(RefreshToken);
-  const row = await repo.createQueryBuilder('r').setLock('pessimistic_write')
-    .where('r.tokenHash = :h', { h: sha256Hex(token) }).getOne();
+  const row = await repo
+    .createQueryBuilder('r')
+    .setLock('pessimistic_write')
+    .where('r.tokenHash = :h', { h: sha256Hex(token) })
+    .getOne();
   if (!row || row.revokedAt || row.expiresAt.getTime() <= Date.now()) {
     return { ok: false, error: new AppError(401, 'session_ended', 'Your session has ended. Sign in again.') };
   }
@@ -48,7 +57,14 @@ export async function rotateRefreshToken(m: EntityManager, token: string): Promi
   }
   if (row.replacedAt) {
     await revokeFamily(m, row.familyId);
-    return { ok: false, error: new AppError(401, 'session_reused', 'This session was used from somewhere else and has been closed. Sign in again.') };
+    return {
+      ok: false,
+      error: new AppError(
+        401,
+        'session_reused',
+        'This session was used from somewhere else and has been closed. Sign in again.',
+      ),
+    };
   }
   await repo.update(row.id, { replacedAt: new Date() });
   return { ok: true, userId: row.userId, token: await issueRefreshToken(m, row.userId, row.familyId) };

@@ -4,10 +4,10 @@
  * the revision's origin is 'correction', credited to the proposer.
  */
 import type { EntityManager } from 'typeorm';
-import type { CreateSpecBody } from '../../../lib/contracts/curation';
-import { parseUnit, type CanonicalUnit } from '../../../lib/units';
-import { AppError } from '../../errors/app-error';
-import type { SignedInUser } from '../../auth/roles';
+import type { CreateSpecBody } from '@/lib/contracts/curation';
+import { parseUnit, type CanonicalUnit } from '@/lib/units';
+import { AppError } from '@/server/errors/app-error';
+import type { SignedInUser } from '@/server/auth/roles';
 import { VehicleModel } from '../library/vehicle-model.entity';
 import { Component } from '../library/component.entity';
 import { Spec } from '../specs/spec.entity';
@@ -18,8 +18,18 @@ import { User } from '../users/user.entity';
 import type { Correction } from './correction.entity';
 import { toReview } from './correction.view';
 
-type Proposed = { min: number | null; nominal: number | null; max: number | null; unit: string; refTempC: number | null;
-  material?: 'copper' | 'none'; testPoints: string; conditions: string; parameter: string; component?: string };
+type Proposed = {
+  min: number | null;
+  nominal: number | null;
+  max: number | null;
+  unit: string;
+  refTempC: number | null;
+  material?: 'copper' | 'none';
+  testPoints: string;
+  conditions: string;
+  parameter: string;
+  component?: string;
+};
 
 async function credit(m: EntityManager, c: Correction, editor: SignedInUser) {
   const proposer = await m.getRepository(User).findOneByOrFail({ id: c.proposerId });
@@ -30,20 +40,40 @@ async function credit(m: EntityManager, c: Correction, editor: SignedInUser) {
   };
 }
 
-async function applyChange(m: EntityManager, c: Correction, editor: SignedInUser, confirmStale: boolean): Promise<number> {
-  const current = await m.getRepository(Spec).findOne({ where: { id: c.specId! }, lock: { mode: 'pessimistic_write' } });
+async function applyChange(
+  m: EntityManager,
+  c: Correction,
+  editor: SignedInUser,
+  confirmStale: boolean,
+): Promise<number> {
+  const current = await m
+    .getRepository(Spec)
+    .findOne({ where: { id: c.specId! }, lock: { mode: 'pessimistic_write' } });
   if (!current) throw AppError.notFound('spec', c.specId!);
   if (current.version !== c.baseVersion && !confirmStale) {
-    throw new AppError(409, 'stale_proposal',
+    throw new AppError(
+      409,
+      'stale_proposal',
       `The spec changed after this proposal was made (version ${c.baseVersion} → ${current.version}). Compare the three and accept again with confirmStale: true.`,
-      { review: await toReview(c) });
+      { review: await toReview(c) },
+    );
   }
   const { spec, source } = await lockSpec(m, current.id, current.version);
   const p = c.proposed as Proposed;
   const values: SpecValues = {
-    parameter: spec.parameter, min: p.min, nominal: p.nominal, max: p.max, unit: parseUnit(p.unit)!.unit as CanonicalUnit,
-    refTempC: p.refTempC, material: p.material ?? spec.material, testPoints: p.testPoints || null, conditions: p.conditions || null,
-    notes: spec.notes, sourceId: await ensureSource(m, { ...c.citation }), sourcePage: c.citation.page, status: spec.status,
+    parameter: spec.parameter,
+    min: p.min,
+    nominal: p.nominal,
+    max: p.max,
+    unit: parseUnit(p.unit)!.unit as CanonicalUnit,
+    refTempC: p.refTempC,
+    material: p.material ?? spec.material,
+    testPoints: p.testPoints || null,
+    conditions: p.conditions || null,
+    notes: spec.notes,
+    sourceId: await ensureSource(m, { ...c.citation }),
+    sourcePage: c.citation.page,
+    status: spec.status,
   };
   checkValues(values);
   const { actor, reason, originRef } = await credit(m, c, editor);
@@ -52,20 +82,44 @@ async function applyChange(m: EntityManager, c: Correction, editor: SignedInUser
 }
 
 async function applyNew(m: EntityManager, c: Correction, editor: SignedInUser): Promise<number> {
-  const model = await m.getRepository(VehicleModel).findOneOrFail({ where: { id: c.modelId }, relations: { make: true } });
+  const model = await m
+    .getRepository(VehicleModel)
+    .findOneOrFail({ where: { id: c.modelId }, relations: { make: true } });
   const p = c.proposed as Proposed;
-  const component = c.componentId ? (await m.getRepository(Component).findOneByOrFail({ id: c.componentId })).name : p.component!;
+  const component = c.componentId
+    ? (await m.getRepository(Component).findOneByOrFail({ id: c.componentId })).name
+    : p.component!;
   const { actor, reason, originRef } = await credit(m, c, editor);
   const body: CreateSpecBody = {
-    make: model.make.name, model: model.name, yearFrom: model.yearFrom, yearTo: model.yearTo, variant: model.variant, component,
-    parameter: p.parameter, min: p.min, nominal: p.nominal, max: p.max, unit: parseUnit(p.unit)!.unit, refTempC: p.refTempC,
-    material: p.material, testPoints: p.testPoints, conditions: p.conditions, notes: '', status: 'published', reason,
+    make: model.make.name,
+    model: model.name,
+    yearFrom: model.yearFrom,
+    yearTo: model.yearTo,
+    variant: model.variant,
+    component,
+    parameter: p.parameter,
+    min: p.min,
+    nominal: p.nominal,
+    max: p.max,
+    unit: parseUnit(p.unit)!.unit,
+    refTempC: p.refTempC,
+    material: p.material,
+    testPoints: p.testPoints,
+    conditions: p.conditions,
+    notes: '',
+    status: 'published',
+    reason,
     source: { title: c.citation.title, edition: c.citation.edition, page: c.citation.page, url: c.citation.url },
   };
   return insertNewSpec(m, body, actor, { origin: 'correction', originRef });
 }
 
 /** Applies the correction inside the caller's transaction; returns the spec it wrote. */
-export function applyCorrection(m: EntityManager, c: Correction, editor: SignedInUser, confirmStale: boolean): Promise<number> {
+export function applyCorrection(
+  m: EntityManager,
+  c: Correction,
+  editor: SignedInUser,
+  confirmStale: boolean,
+): Promise<number> {
   return c.kind === 'change' ? applyChange(m, c, editor, confirmStale) : applyNew(m, c, editor);
 }

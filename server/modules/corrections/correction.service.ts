@@ -5,12 +5,12 @@
  * and two editors deciding at once cannot both win.
  */
 import type { EntityManager } from 'typeorm';
-import type { AcceptBody, CorrectionReviewDto, EditProposalBody, ProposeBody } from '../../../lib/contracts/corrections';
+import type { AcceptBody, CorrectionReviewDto, EditProposalBody, ProposeBody } from '@/lib/contracts/corrections';
 import type { z } from 'zod';
-import { specValueIssues } from '../../../lib/contracts/curation';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
-import { roleAtLeast, type SignedInUser } from '../../auth/roles';
+import { specValueIssues } from '@/lib/contracts/curation';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
+import { roleAtLeast, type SignedInUser } from '@/server/auth/roles';
 import { Component } from '../library/component.entity';
 import { VehicleModel } from '../library/vehicle-model.entity';
 import { Spec } from '../specs/spec.entity';
@@ -27,7 +27,13 @@ async function target(m: EntityManager, b: ProposeBody) {
   if (b.kind === 'change') {
     const spec = await m.getRepository(Spec).findOne({ where: { id: b.specId }, relations: { component: true } });
     if (!spec) throw AppError.notFound('spec', b.specId);
-    return { modelId: spec.component.modelId, specId: spec.id, componentId: spec.componentId, parameter: spec.parameter, what: `${spec.component.name} — ${spec.parameter}` };
+    return {
+      modelId: spec.component.modelId,
+      specId: spec.id,
+      componentId: spec.componentId,
+      parameter: spec.parameter,
+      what: `${spec.component.name} — ${spec.parameter}`,
+    };
   }
   if (b.kind === 'new_spec') {
     const comp = await m.getRepository(Component).findOneBy({ id: b.componentId });
@@ -35,25 +41,52 @@ async function target(m: EntityManager, b: ProposeBody) {
     if (await m.getRepository(Spec).existsBy({ componentId: comp.id, parameterKey: foldKey(b.parameter) })) {
       throw AppError.conflict(`${comp.name} already has a spec for '${b.parameter}': propose a change to it instead.`);
     }
-    return { modelId: comp.modelId, specId: null, componentId: comp.id, parameter: b.parameter, what: `${comp.name} — ${b.parameter} (new spec)` };
+    return {
+      modelId: comp.modelId,
+      specId: null,
+      componentId: comp.id,
+      parameter: b.parameter,
+      what: `${comp.name} — ${b.parameter} (new spec)`,
+    };
   }
   if (!(await m.getRepository(VehicleModel).existsBy({ id: b.modelId }))) throw AppError.notFound('model', b.modelId);
-  return { modelId: b.modelId, specId: null, componentId: null, parameter: b.parameter, what: `${b.component} — ${b.parameter} (new component)` };
+  return {
+    modelId: b.modelId,
+    specId: null,
+    componentId: null,
+    parameter: b.parameter,
+    what: `${b.component} — ${b.parameter} (new component)`,
+  };
 }
 
 function checkAgainst(parameter: string, values: ProposeBody['values']) {
   const issues = specValueIssues({ parameter, ...values });
-  if (issues.length) throw AppError.unprocessable(`The proposal is not valid: ${issues[0].message}.`, issues.map((i) => ({ path: `values.${i.path}`, message: i.message })));
+  if (issues.length)
+    throw AppError.unprocessable(
+      `The proposal is not valid: ${issues[0].message}.`,
+      issues.map((i) => ({ path: `values.${i.path}`, message: i.message })),
+    );
 }
 
 export async function propose(user: SignedInUser, b: ProposeBody): Promise<CorrectionReviewDto> {
   const saved = await AppDataSource.transaction(async (m) => {
     const t = await target(m, b);
     checkAgainst(t.parameter, b.values);
-    const proposed = { ...b.values, parameter: t.parameter, ...(b.kind === 'new_component' ? { component: b.component } : {}) };
+    const proposed = {
+      ...b.values,
+      parameter: t.parameter,
+      ...(b.kind === 'new_component' ? { component: b.component } : {}),
+    };
     const c = await m.getRepository(Correction).save({
-      kind: b.kind, specId: t.specId, componentId: t.componentId, modelId: t.modelId, proposerId: user.id, proposed,
-      citation: { ...b.citation, url: b.citation.url ?? null }, rationale: b.rationale, status: 'pending',
+      kind: b.kind,
+      specId: t.specId,
+      componentId: t.componentId,
+      modelId: t.modelId,
+      proposerId: user.id,
+      proposed,
+      citation: { ...b.citation, url: b.citation.url ?? null },
+      rationale: b.rationale,
+      status: 'pending',
       baseVersion: b.kind === 'change' ? b.version : null,
     });
     await notifyEditors(m, c, user.displayName, t.what);
@@ -71,7 +104,13 @@ export async function findVisible(user: SignedInUser, id: number): Promise<Corre
 async function lockPending(m: EntityManager, id: number): Promise<Correction> {
   const c = await m.getRepository(Correction).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
   if (!c) throw AppError.notFound('correction', id);
-  if (c.status !== 'pending') throw new AppError(409, 'already_decided', `Correction #${id} is already ${c.status}${c.reviewerName ? ` (by ${c.reviewerName})` : ''}.`, { currentStatus: c.status });
+  if (c.status !== 'pending')
+    throw new AppError(
+      409,
+      'already_decided',
+      `Correction #${id} is already ${c.status}${c.reviewerName ? ` (by ${c.reviewerName})` : ''}.`,
+      { currentStatus: c.status },
+    );
   return c;
 }
 
@@ -81,7 +120,11 @@ export async function editProposal(user: SignedInUser, id: number, b: EditPropos
     if (c.proposerId !== user.id) throw AppError.notFound('correction', id);
     if (b.values) {
       checkAgainst(String(c.proposed.parameter), b.values);
-      c.proposed = { ...b.values, parameter: c.proposed.parameter, ...(c.proposed.component ? { component: c.proposed.component } : {}) };
+      c.proposed = {
+        ...b.values,
+        parameter: c.proposed.parameter,
+        ...(c.proposed.component ? { component: c.proposed.component } : {}),
+      };
     }
     if (b.citation) c.citation = { ...b.citation, url: b.citation.url ?? null };
     if (b.rationale) c.rationale = b.rationale;
@@ -101,16 +144,27 @@ export async function withdraw(user: SignedInUser, id: number): Promise<Correcti
   return toReview(saved);
 }
 
-export async function decide(editor: SignedInUser, id: number, decision: { accept: true; body: z.infer<typeof AcceptBody> } | { accept: false; note: string }): Promise<CorrectionReviewDto> {
+export async function decide(
+  editor: SignedInUser,
+  id: number,
+  decision: { accept: true; body: z.infer<typeof AcceptBody> } | { accept: false; note: string },
+): Promise<CorrectionReviewDto> {
   const saved = await AppDataSource.transaction(async (m) => {
     const c = await lockPending(m, id);
     if (decision.accept) c.specId = await applyCorrection(m, c, editor, decision.body.confirmStale === true);
     Object.assign(c, {
-      status: decision.accept ? 'accepted' : 'rejected', reviewerId: editor.id, reviewerName: editor.displayName,
-      decisionNote: decision.accept ? decision.body.note ?? null : decision.note, decidedAt: new Date(),
+      status: decision.accept ? 'accepted' : 'rejected',
+      reviewerId: editor.id,
+      reviewerName: editor.displayName,
+      decisionNote: decision.accept ? (decision.body.note ?? null) : decision.note,
+      decidedAt: new Date(),
     });
     await m.getRepository(Correction).save(c);
-    await notifyProposer(m, c, `${String(c.proposed.component ?? '')}${c.proposed.component ? ' — ' : ''}${String(c.proposed.parameter)}`);
+    await notifyProposer(
+      m,
+      c,
+      `${String(c.proposed.component ?? '')}${c.proposed.component ? ' — ' : ''}${String(c.proposed.parameter)}`,
+    );
     return c;
   });
   if (decision.accept) markLibraryChanged();

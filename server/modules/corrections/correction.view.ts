@@ -1,8 +1,8 @@
 /** Corrections → DTOs: names, the proposer's record, and the three-way field view for review. */
 import { In } from 'typeorm';
-import type { CorrectionDto, CorrectionReviewDto, ProposedValues } from '../../../lib/contracts/corrections';
-import { modelTitle } from '../../../lib/format/model-title';
-import { AppDataSource } from '../../db/data-source';
+import type { CorrectionDto, CorrectionReviewDto, ProposedValues } from '@/lib/contracts/corrections';
+import { modelTitle } from '@/lib/format/model-title';
+import { AppDataSource } from '@/server/db/data-source';
 import { Component } from '../library/component.entity';
 import { VehicleModel } from '../library/vehicle-model.entity';
 import { Spec } from '../specs/spec.entity';
@@ -11,32 +11,86 @@ import { Source } from '../library/source.entity';
 import { User } from '../users/user.entity';
 import type { Correction } from './correction.entity';
 
-export const COMPARED = ['min', 'nominal', 'max', 'unit', 'refTempC', 'material', 'testPoints', 'conditions', 'source'] as const;
+export const COMPARED = [
+  'min',
+  'nominal',
+  'max',
+  'unit',
+  'refTempC',
+  'material',
+  'testPoints',
+  'conditions',
+  'source',
+] as const;
 
-export const citationText = (c: Correction['citation']) => `${c.title}${c.edition ? `, ${c.edition}` : ''}, p. ${c.page}`;
+export const citationText = (c: Correction['citation']) =>
+  `${c.title}${c.edition ? `, ${c.edition}` : ''}, p. ${c.page}`;
 
 export async function toDtos(rows: Correction[]): Promise<CorrectionDto[]> {
   if (rows.length === 0) return [];
   const repo = <T extends object>(e: new () => T) => AppDataSource.getRepository(e);
-  const models = await repo(VehicleModel).find({ where: { id: In([...new Set(rows.map((r) => r.modelId))]) }, relations: { make: true } });
-  const specs = await repo(Spec).find({ where: { id: In(rows.map((r) => r.specId).filter((x): x is number => x !== null).concat(0)) }, relations: { component: true } });
-  const comps = await repo(Component).find({ where: { id: In(rows.map((r) => r.componentId).filter((x): x is number => x !== null).concat(0)) } });
+  const models = await repo(VehicleModel).find({
+    where: { id: In([...new Set(rows.map((r) => r.modelId))]) },
+    relations: { make: true },
+  });
+  const specs = await repo(Spec).find({
+    where: {
+      id: In(
+        rows
+          .map((r) => r.specId)
+          .filter((x): x is number => x !== null)
+          .concat(0),
+      ),
+    },
+    relations: { component: true },
+  });
+  const comps = await repo(Component).find({
+    where: {
+      id: In(
+        rows
+          .map((r) => r.componentId)
+          .filter((x): x is number => x !== null)
+          .concat(0),
+      ),
+    },
+  });
   const proposerIds = [...new Set(rows.map((r) => r.proposerId))];
   const users = await repo(User).find({ where: { id: In(proposerIds) } });
-  const records: Array<{ proposerId: number; status: string; n: string }> = await AppDataSource.query(
-    `SELECT proposer_id AS proposerId, status, COUNT(*) AS n FROM corrections WHERE proposer_id IN (?) AND status IN ('accepted','rejected') GROUP BY proposer_id, status`, [proposerIds]);
-  const count = (id: number, status: string) => Number(records.find((r) => Number(r.proposerId) === id && r.status === status)?.n ?? 0);
+  const records: { proposerId: number; status: string; n: string }[] = await AppDataSource.query(
+    `SELECT proposer_id AS proposerId, status, COUNT(*) AS n FROM corrections WHERE proposer_id IN (?) AND status IN ('accepted','rejected') GROUP BY proposer_id, status`,
+    [proposerIds],
+  );
+  const count = (id: number, status: string) =>
+    Number(records.find((r) => Number(r.proposerId) === id && r.status === status)?.n ?? 0);
   return rows.map((r) => {
     const spec = specs.find((s) => s.id === r.specId);
     const model = models.find((m) => m.id === r.modelId);
     return {
-      id: r.id, kind: r.kind, status: r.status, specId: r.specId, componentId: r.componentId, modelId: r.modelId,
-      modelTitle: model ? modelTitle(model) : '', componentName: spec?.component.name ?? comps.find((c) => c.id === r.componentId)?.name ?? String(r.proposed.component ?? ''),
-      parameter: spec?.parameter ?? String(r.proposed.parameter ?? ''), proposed: r.proposed as ProposedValues, citation: r.citation,
-      rationale: r.rationale, baseVersion: r.baseVersion,
-      proposer: { id: r.proposerId, name: users.find((u) => u.id === r.proposerId)?.displayName ?? 'unknown', accepted: count(r.proposerId, 'accepted'), rejected: count(r.proposerId, 'rejected') },
-      reviewerName: r.reviewerName, decisionNote: r.decisionNote, decidedAt: r.decidedAt?.toISOString() ?? null,
-      createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString(),
+      id: r.id,
+      kind: r.kind,
+      status: r.status,
+      specId: r.specId,
+      componentId: r.componentId,
+      modelId: r.modelId,
+      modelTitle: model ? modelTitle(model) : '',
+      componentName:
+        spec?.component.name ?? comps.find((c) => c.id === r.componentId)?.name ?? String(r.proposed.component ?? ''),
+      parameter: spec?.parameter ?? String(r.proposed.parameter ?? ''),
+      proposed: r.proposed as ProposedValues,
+      citation: r.citation,
+      rationale: r.rationale,
+      baseVersion: r.baseVersion,
+      proposer: {
+        id: r.proposerId,
+        name: users.find((u) => u.id === r.proposerId)?.displayName ?? 'unknown',
+        accepted: count(r.proposerId, 'accepted'),
+        rejected: count(r.proposerId, 'rejected'),
+      },
+      reviewerName: r.reviewerName,
+      decisionNote: r.decisionNote,
+      decidedAt: r.decidedAt?.toISOString() ?? null,
+      createdAt: r.createdAt.toISOString(),
+      updatedAt: r.updatedAt.toISOString(),
     };
   });
 }
@@ -45,8 +99,19 @@ type Values = Record<(typeof COMPARED)[number], unknown>;
 
 async function valuesOfSpec(spec: Spec): Promise<Values> {
   const source = spec.sourceId ? await AppDataSource.getRepository(Source).findOneBy({ id: spec.sourceId }) : null;
-  return { min: spec.min, nominal: spec.nominal, max: spec.max, unit: spec.unit, refTempC: spec.refTempC, material: spec.material,
-    testPoints: spec.testPoints ?? '', conditions: spec.conditions ?? '', source: source ? `${source.title}${source.edition ? `, ${source.edition}` : ''}, p. ${spec.sourcePage ?? ''}` : null };
+  return {
+    min: spec.min,
+    nominal: spec.nominal,
+    max: spec.max,
+    unit: spec.unit,
+    refTempC: spec.refTempC,
+    material: spec.material,
+    testPoints: spec.testPoints ?? '',
+    conditions: spec.conditions ?? '',
+    source: source
+      ? `${source.title}${source.edition ? `, ${source.edition}` : ''}, p. ${spec.sourcePage ?? ''}`
+      : null,
+  };
 }
 
 /** The spec's values at the version the proposal was made against, from its revision snapshot. */
@@ -55,20 +120,48 @@ async function valuesAt(specId: number, version: number | null): Promise<Values 
   const rev = await AppDataSource.getRepository(SpecRevision).findOneBy({ specId, version });
   if (!rev) return null;
   const s = rev.snapshot;
-  return { min: s.min, nominal: s.nominal, max: s.max, unit: s.unit, refTempC: s.refTempC, material: s.material, testPoints: s.testPoints ?? '',
-    conditions: s.conditions ?? '', source: s.sourceTitle ? `${s.sourceTitle}${s.sourceEdition ? `, ${s.sourceEdition}` : ''}, p. ${s.sourcePage ?? ''}` : null };
+  return {
+    min: s.min,
+    nominal: s.nominal,
+    max: s.max,
+    unit: s.unit,
+    refTempC: s.refTempC,
+    material: s.material,
+    testPoints: s.testPoints ?? '',
+    conditions: s.conditions ?? '',
+    source: s.sourceTitle
+      ? `${s.sourceTitle}${s.sourceEdition ? `, ${s.sourceEdition}` : ''}, p. ${s.sourcePage ?? ''}`
+      : null,
+  };
 }
 
 export async function toReview(r: Correction): Promise<CorrectionReviewDto> {
   const [dto] = await toDtos([r]);
-  const spec = r.specId && r.kind === 'change' ? await AppDataSource.getRepository(Spec).findOneBy({ id: r.specId }) : null;
+  const spec =
+    r.specId && r.kind === 'change' ? await AppDataSource.getRepository(Spec).findOneBy({ id: r.specId }) : null;
   const current = spec ? await valuesOfSpec(spec) : null;
   const before = spec ? await valuesAt(spec.id, r.baseVersion) : null;
   const p = r.proposed as Record<string, unknown>;
-  const proposed: Values = { min: p.min, nominal: p.nominal, max: p.max, unit: p.unit, refTempC: p.refTempC, material: p.material ?? current?.material ?? null,
-    testPoints: p.testPoints ?? '', conditions: p.conditions ?? '', source: citationText(r.citation) };
+  const proposed: Values = {
+    min: p.min,
+    nominal: p.nominal,
+    max: p.max,
+    unit: p.unit,
+    refTempC: p.refTempC,
+    material: p.material ?? current?.material ?? null,
+    testPoints: p.testPoints ?? '',
+    conditions: p.conditions ?? '',
+    source: citationText(r.citation),
+  };
   return {
-    ...dto, stale: !!spec && spec.version !== r.baseVersion, currentVersion: spec?.version ?? null,
-    fields: COMPARED.map((field) => ({ field, proposedAgainst: before?.[field] ?? null, current: current?.[field] ?? null, proposed: proposed[field] ?? null })),
+    ...dto,
+    stale: !!spec && spec.version !== r.baseVersion,
+    currentVersion: spec?.version ?? null,
+    fields: COMPARED.map((field) => ({
+      field,
+      proposedAgainst: before?.[field] ?? null,
+      current: current?.[field] ?? null,
+      proposed: proposed[field] ?? null,
+    })),
   };
 }

@@ -5,7 +5,11 @@ import type { CsvDownload } from './export.service';
 async function send(res: Response, chunk: string): Promise<void> {
   if (res.write(chunk)) return;
   await new Promise<void>((resolve) => {
-    const done = () => { res.off('drain', done); res.off('close', done); resolve(); };
+    const done = () => {
+      res.off('drain', done);
+      res.off('close', done);
+      resolve();
+    };
     res.on('drain', done).on('close', done);
   });
 }

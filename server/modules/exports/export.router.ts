@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { ExportQuery } from '../../../lib/contracts/imports';
-import { validate } from '../../middleware/validate';
+import { ExportQuery } from '@/lib/contracts/imports';
+import { validate } from '@/server/middleware/validate';
 import { openSpecsExport } from './export.service';
 import { sendCsv } from './csv-download';
 

@@ -3,11 +3,11 @@
  * formula-like text neutralised), produced in chunks of 1000 specs so memory stays flat
  * however large the library. Exported and imported again, every row comes back "unchanged".
  */
-import type { ExportQuery } from '../../../lib/contracts/imports';
-import { toSpecCsv, type SpecCsvRow } from '../../../lib/csv';
-import type { CanonicalUnit } from '../../../lib/units';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
+import type { ExportQuery } from '@/lib/contracts/imports';
+import { toSpecCsv, type SpecCsvRow } from '@/lib/csv';
+import type { CanonicalUnit } from '@/lib/units';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
 import { foldKey } from '../library/keys';
 
 const CHUNK = 1000;
@@ -35,9 +35,11 @@ const FROM = `FROM specs s JOIN components c ON c.id = s.component_id
   LEFT JOIN sources src ON src.id = s.source_id`;
 
 async function orderedIds(filter: Filter): Promise<number[]> {
-  const rows: Array<{ id: number }> = await AppDataSource.query(
+  const rows: { id: number }[] = await AppDataSource.query(
     `SELECT s.id ${FROM} WHERE s.status = 'published' ${filter.where}
-      ORDER BY mk.name, vm.name, vm.year_from, vm.variant, c.name, s.parameter, s.id`, filter.params);
+      ORDER BY mk.name, vm.name, vm.year_from, vm.variant, c.name, s.parameter, s.id`,
+    filter.params,
+  );
   return rows.map((r) => r.id);
 }
 
@@ -51,7 +53,9 @@ async function rowsFor(ids: number[]): Promise<SpecCsvRow[]> {
             COALESCE(s.conditions, '') AS conditions, COALESCE(src.title, '') AS sourceTitle,
             COALESCE(src.edition, '') AS sourceEdition, COALESCE(s.source_page, '') AS sourcePage,
             src.url AS sourceUrl, COALESCE(s.notes, '') AS notes
-       ${FROM} WHERE s.id IN (?)`, [ids]);
+       ${FROM} WHERE s.id IN (?)`,
+    [ids],
+  );
   const byId = new Map(rows.map(({ id, ...row }) => [id, { ...row, unit: row.unit as CanonicalUnit }]));
   return ids.map((id) => byId.get(id)).filter((r): r is SpecCsvRow => r !== undefined);
 }

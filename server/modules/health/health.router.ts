@@ -1,7 +1,7 @@
 import { Router } from 'express';
-import type { HealthDto } from '../../../lib/contracts/library';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
+import type { HealthDto } from '@/lib/contracts/library';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
 
 export const healthRouter = Router();
 

@@ -9,11 +9,11 @@
  * is applied on top of a change nobody saw.
  */
 import type { EntityManager } from 'typeorm';
-import { AppError } from '../../errors/app-error';
-import type { Actor } from '../../auth/actor';
+import { AppError } from '@/server/errors/app-error';
+import type { Actor } from '@/server/auth/actor';
 import { FIRST } from './import-stage';
 
-export type { Actor } from '../../auth/actor';
+export type { Actor } from '@/server/auth/actor';
 
 const STAGED = 'import_batch_rows st';
 /**
@@ -23,7 +23,10 @@ const STAGED = 'import_batch_rows st';
 const FIRSTS = 'import_batch_rows st FORCE INDEX (idx_import_batch_rows_firsts)';
 const CREATED = "st.batch_id = ? AND st.action = 'create'";
 /** `firsts` values with the bit set, so the index (batch_id, firsts) reads only those rows, not the whole batch. */
-const firstOf = (bit: number) => `st.firsts IN (${Array.from({ length: 16 }, (_, v) => v).filter((v) => v & bit).join(', ')})`;
+const firstOf = (bit: number) =>
+  `st.firsts IN (${Array.from({ length: 16 }, (_, v) => v)
+    .filter((v) => v & bit)
+    .join(', ')})`;
 /** A key that MariaDB's collation finds equal to one already inserted this statement is the same row. */
 const sameRow = (table: string) => `ON DUPLICATE KEY UPDATE ${table}.id = ${table}.id`;
 /** Batch number → library id, per connection, for this commit only. */
@@ -37,8 +40,14 @@ async function checkNotStale(m: EntityManager, batchId: number) {
   const [moved] = await m.query(
     `SELECT st.line, st.spec_id AS specId FROM ${STAGED} LEFT JOIN specs s ON s.id = st.spec_id
       WHERE st.batch_id = ? AND st.action IN ('update', 'unchanged') AND (s.id IS NULL OR s.version <> st.base_version)
-      ORDER BY st.line LIMIT 1`, [batchId]);
-  if (moved) throw stale(`The spec on line ${moved.line} was changed by someone else after this preview.`, { line: moved.line, specId: moved.specId });
+      ORDER BY st.line LIMIT 1`,
+    [batchId],
+  );
+  if (moved)
+    throw stale(`The spec on line ${moved.line} was changed by someone else after this preview.`, {
+      line: moved.line,
+      specId: moved.specId,
+    });
 }
 
 async function dropMaps(m: EntityManager) {
@@ -63,38 +72,60 @@ async function highestId(m: EntityManager, table: string): Promise<number> {
  */
 async function ensureModelsAndComponents(m: EntityManager, b: number) {
   const models = await highestId(m, 'vehicle_models');
-  await m.query(`INSERT INTO import_model_ids SELECT STRAIGHT_JOIN st.model_ord, COALESCE(vm.id, ? + st.model_ord)
+  await m.query(
+    `INSERT INTO import_model_ids SELECT STRAIGHT_JOIN st.model_ord, COALESCE(vm.id, ? + st.model_ord)
       FROM ${FIRSTS} LEFT JOIN vehicle_models vm ON vm.model_key = st.model_key
-     WHERE ${CREATED} AND ${firstOf(FIRST.model)}`, [models, b]);
-  await m.query(`INSERT INTO vehicle_models (id, make_id, name, year_from, year_to, variant, model_key)
+     WHERE ${CREATED} AND ${firstOf(FIRST.model)}`,
+    [models, b],
+  );
+  await m.query(
+    `INSERT INTO vehicle_models (id, make_id, name, year_from, year_to, variant, model_key)
     SELECT STRAIGHT_JOIN mi.id, mk.id, st.model, st.year_from, st.year_to, st.variant, st.model_key
       FROM ${FIRSTS} JOIN import_model_ids mi ON mi.ord = st.model_ord JOIN makes mk ON mk.name_key = st.make_key
-     WHERE ${CREATED} AND ${firstOf(FIRST.model)} AND mi.id > ?`, [b, models]);
+     WHERE ${CREATED} AND ${firstOf(FIRST.model)} AND mi.id > ?`,
+    [b, models],
+  );
   const components = await highestId(m, 'components');
-  await m.query(`INSERT INTO import_component_ids SELECT STRAIGHT_JOIN st.component_ord, COALESCE(c.id, ? + st.component_ord)
+  await m.query(
+    `INSERT INTO import_component_ids SELECT STRAIGHT_JOIN st.component_ord, COALESCE(c.id, ? + st.component_ord)
       FROM ${STAGED} JOIN import_model_ids mi ON mi.ord = st.model_ord
       LEFT JOIN components c ON c.model_id = mi.id AND c.name_key = st.component_key
-     WHERE ${CREATED} AND ${firstOf(FIRST.component)}`, [components, b]);
-  await m.query(`INSERT INTO components (id, model_id, name, name_key)
+     WHERE ${CREATED} AND ${firstOf(FIRST.component)}`,
+    [components, b],
+  );
+  await m.query(
+    `INSERT INTO components (id, model_id, name, name_key)
     SELECT STRAIGHT_JOIN ci.id, mi.id, st.component, st.component_key
       FROM ${STAGED} JOIN import_component_ids ci ON ci.ord = st.component_ord JOIN import_model_ids mi ON mi.ord = st.model_ord
-     WHERE ${CREATED} AND ${firstOf(FIRST.component)} AND ci.id > ?`, [b, components]);
+     WHERE ${CREATED} AND ${firstOf(FIRST.component)} AND ci.id > ?`,
+    [b, components],
+  );
 }
 
 /** Makes, models, components and sources the batch needs and the library lacks, and their ids by batch number. */
 async function ensureLibrary(m: EntityManager, b: number) {
-  for (const map of MAPS) await m.query(`CREATE TEMPORARY TABLE ${map} (ord int PRIMARY KEY, id int NOT NULL) ENGINE=MEMORY`);
-  await m.query(`INSERT INTO makes (name, name_key) SELECT STRAIGHT_JOIN st.make, st.make_key
+  for (const map of MAPS)
+    await m.query(`CREATE TEMPORARY TABLE ${map} (ord int PRIMARY KEY, id int NOT NULL) ENGINE=MEMORY`);
+  await m.query(
+    `INSERT INTO makes (name, name_key) SELECT STRAIGHT_JOIN st.make, st.make_key
       FROM ${FIRSTS} LEFT JOIN makes mk ON mk.name_key = st.make_key
-     WHERE ${CREATED} AND ${firstOf(FIRST.make)} AND mk.id IS NULL ${sameRow('makes')}`, [b]);
+     WHERE ${CREATED} AND ${firstOf(FIRST.make)} AND mk.id IS NULL ${sameRow('makes')}`,
+    [b],
+  );
   await ensureModelsAndComponents(m, b);
-  await m.query(`INSERT INTO sources (title, edition, url, kind, source_key)
+  await m.query(
+    `INSERT INTO sources (title, edition, url, kind, source_key)
     SELECT STRAIGHT_JOIN st.source_title, st.source_edition, st.source_url, 'service_manual', st.source_key
       FROM ${FIRSTS} LEFT JOIN sources src ON src.source_key = st.source_key
-     WHERE st.batch_id = ? AND ${firstOf(FIRST.source)} AND src.id IS NULL ${sameRow('sources')}`, [b]);
-  await m.query(`INSERT INTO import_source_ids SELECT STRAIGHT_JOIN st.source_ord, src.id
+     WHERE st.batch_id = ? AND ${firstOf(FIRST.source)} AND src.id IS NULL ${sameRow('sources')}`,
+    [b],
+  );
+  await m.query(
+    `INSERT INTO import_source_ids SELECT STRAIGHT_JOIN st.source_ord, src.id
       FROM ${FIRSTS} JOIN sources src ON src.source_key = st.source_key
-     WHERE st.batch_id = ? AND ${firstOf(FIRST.source)}`, [b]);
+     WHERE st.batch_id = ? AND ${firstOf(FIRST.source)}`,
+    [b],
+  );
 }
 
 const isDuplicate = (err: unknown) => (err as { driverError?: { code?: string } }).driverError?.code === 'ER_DUP_ENTRY';
@@ -108,12 +139,15 @@ async function insertSpecs(m: EntityManager, batchId: number, expected: number):
   const base = await highestId(m, 'specs');
   let result: { affectedRows: number };
   try {
-    result = await m.query(`INSERT INTO specs (id, component_id, parameter, parameter_key, quantity_kind, min_value, nominal_value,
+    result = await m.query(
+      `INSERT INTO specs (id, component_id, parameter, parameter_key, quantity_kind, min_value, nominal_value,
         max_value, unit, ref_temp_c, material, test_points, conditions, notes, source_id, source_page, status, version)
       SELECT STRAIGHT_JOIN ? + st.create_ord, ci.id, st.parameter, st.parameter_key, st.quantity_kind, st.min_value, st.nominal_value, st.max_value,
              st.unit, st.ref_temp_c, st.material, st.test_points, st.conditions, st.notes, si.id, st.source_page, 'published', 1
         FROM ${STAGED} JOIN import_component_ids ci ON ci.ord = st.component_ord JOIN import_source_ids si ON si.ord = st.source_ord
-       WHERE ${CREATED}`, [base, batchId]);
+       WHERE ${CREATED}`,
+      [base, batchId],
+    );
   } catch (err) {
     if (isDuplicate(err)) throw stale('A spec this file would create was created by someone else after this preview.');
     throw err;
@@ -124,37 +158,60 @@ async function insertSpecs(m: EntityManager, batchId: number, expected: number):
 
 /** Each update names the version it was planned on; any other version means a lost update. */
 async function updateSpecs(m: EntityManager, batchId: number, expected: number) {
-  const result = await m.query(`UPDATE ${STAGED} STRAIGHT_JOIN specs s ON s.id = st.spec_id STRAIGHT_JOIN import_source_ids si ON si.ord = st.source_ord
+  const result = await m.query(
+    `UPDATE ${STAGED} STRAIGHT_JOIN specs s ON s.id = st.spec_id STRAIGHT_JOIN import_source_ids si ON si.ord = st.source_ord
        SET s.parameter = st.parameter, s.quantity_kind = st.quantity_kind, s.min_value = st.min_value,
            s.nominal_value = st.nominal_value, s.max_value = st.max_value, s.unit = st.unit, s.ref_temp_c = st.ref_temp_c,
            s.material = st.material, s.test_points = st.test_points, s.conditions = st.conditions, s.notes = st.notes,
            s.source_id = si.id, s.source_page = st.source_page, s.version = s.version + 1
-     WHERE st.batch_id = ? AND st.action = 'update' AND s.version = st.base_version`, [batchId]);
-  if (result.affectedRows !== expected) throw stale('A spec this file would update was changed by someone else after this preview.');
+     WHERE st.batch_id = ? AND st.action = 'update' AND s.version = st.base_version`,
+    [batchId],
+  );
+  if (result.affectedRows !== expected)
+    throw stale('A spec this file would update was changed by someone else after this preview.');
 }
 
-const REVISION = 'INSERT INTO spec_revisions (spec_id, version, snapshot, changed_fields, author_id, author_name, reason, origin, origin_ref)';
+const REVISION =
+  'INSERT INTO spec_revisions (spec_id, version, snapshot, changed_fields, author_id, author_name, reason, origin, origin_ref)';
 /** The revision snapshot (the SpecSnapshot of spec-snapshot.ts) built from the staged values and the cited source. */
-const snapshot = (status: string) => `JSON_OBJECT('parameter', st.parameter, 'min', st.min_value, 'nominal', st.nominal_value,
+const snapshot = (
+  status: string,
+) => `JSON_OBJECT('parameter', st.parameter, 'min', st.min_value, 'nominal', st.nominal_value,
   'max', st.max_value, 'unit', st.unit, 'refTempC', st.ref_temp_c, 'material', st.material, 'testPoints', st.test_points,
   'conditions', st.conditions, 'notes', st.notes, 'sourcePage', st.source_page, 'sourceId', src.id, 'sourceTitle', src.title,
   'sourceEdition', src.edition, 'status', ${status})`;
 const CITED = 'JOIN import_source_ids si ON si.ord = st.source_ord JOIN sources src ON src.id = si.id';
 
-async function insertRevisions(m: EntityManager, batchId: number, base: number, author: unknown[], counts: { created: number; updated: number }) {
+async function insertRevisions(
+  m: EntityManager,
+  batchId: number,
+  base: number,
+  author: unknown[],
+  counts: { created: number; updated: number },
+) {
   if (counts.created > 0) {
-    await m.query(`${REVISION} SELECT STRAIGHT_JOIN ? + st.create_ord, 1, ${snapshot("'published'")}, '["created"]', ?, ?, ?, 'import', ?
-        FROM ${STAGED} ${CITED} WHERE ${CREATED}`, [base, ...author, batchId]);
+    await m.query(
+      `${REVISION} SELECT STRAIGHT_JOIN ? + st.create_ord, 1, ${snapshot("'published'")}, '["created"]', ?, ?, ?, 'import', ?
+        FROM ${STAGED} ${CITED} WHERE ${CREATED}`,
+      [base, ...author, batchId],
+    );
   }
   if (counts.updated > 0) {
-    await m.query(`${REVISION} SELECT STRAIGHT_JOIN s.id, s.version, ${snapshot('s.status')}, JSON_EXTRACT(st.changes, '$[*].field'), ?, ?, ?, 'import', ?
-        FROM ${STAGED} JOIN specs s ON s.id = st.spec_id ${CITED} WHERE st.batch_id = ? AND st.action = 'update'`, [...author, batchId]);
+    await m.query(
+      `${REVISION} SELECT STRAIGHT_JOIN s.id, s.version, ${snapshot('s.status')}, JSON_EXTRACT(st.changes, '$[*].field'), ?, ?, ?, 'import', ?
+        FROM ${STAGED} JOIN specs s ON s.id = st.spec_id ${CITED} WHERE st.batch_id = ? AND st.action = 'update'`,
+      [...author, batchId],
+    );
   }
 }
 
 /** Applies a staged batch; the caller holds the transaction and has locked the batch row. */
 export async function applyImport(
-  m: EntityManager, batchId: number, actor: Actor, reason: string, counts: { created: number; updated: number },
+  m: EntityManager,
+  batchId: number,
+  actor: Actor,
+  reason: string,
+  counts: { created: number; updated: number },
 ): Promise<void> {
   await checkNotStale(m, batchId);
   if (counts.created + counts.updated === 0) return;
@@ -162,7 +219,9 @@ export async function applyImport(
   try {
     await ensureLibrary(m, batchId).catch((err) => {
       if (!isDuplicate(err)) throw err;
-      throw stale('Another import or edit created the same make, model or component meanwhile, or this file spells one of them in two ways the library treats as the same (e.g. with and without accents).');
+      throw stale(
+        'Another import or edit created the same make, model or component meanwhile, or this file spells one of them in two ways the library treats as the same (e.g. with and without accents).',
+      );
     });
     const base = counts.created > 0 ? await insertSpecs(m, batchId, counts.created) : 0;
     if (counts.updated > 0) await updateSpecs(m, batchId, counts.updated);

@@ -33,7 +33,7 @@ export class ImportBatch {
 
   /** File-level problems (a failed batch), or rows rejected by the demo loader: line, column and a plain reason. */
   @Column({ name: 'row_errors', type: 'json' })
-  rowErrors: Array<{ line: number; column: string | null; reason: string }>;
+  rowErrors: { line: number; column: string | null; reason: string }[];
 
   @Column({ type: 'enum', enum: ['previewed', 'committed', 'failed'] })
   status: ImportStatus;

@@ -4,7 +4,7 @@
  * left unchanged. Reads only; the commit (import-apply.ts) writes.
  */
 import type { EntityManager } from 'typeorm';
-import type { SpecCsvRow } from '../../../lib/csv';
+import type { SpecCsvRow } from '@/lib/csv';
 import type { Spec } from '../specs/spec.entity';
 import { foldKey, modelKey, sourceKey } from '../library/keys';
 
@@ -24,23 +24,52 @@ type Comparable = Record<string, string | number | null>;
 /** The spec fields a CSV row sets, in the form both sides are compared in. */
 export function rowFields(row: SpecCsvRow): Comparable {
   return {
-    min: row.min, nominal: row.nominal, max: row.max, unit: row.unit, refTempC: row.refTempC,
-    material: row.material, testPoints: row.testPoints || null, conditions: row.conditions || null,
-    notes: row.notes || null, source: sourceKey({ title: row.sourceTitle, edition: row.sourceEdition }),
+    min: row.min,
+    nominal: row.nominal,
+    max: row.max,
+    unit: row.unit,
+    refTempC: row.refTempC,
+    material: row.material,
+    testPoints: row.testPoints || null,
+    conditions: row.conditions || null,
+    notes: row.notes || null,
+    source: sourceKey({ title: row.sourceTitle, edition: row.sourceEdition }),
     sourcePage: row.sourcePage || null,
   };
 }
 
 /** What the plan needs of an existing spec (read with plain SQL: 50 000 entities hydrate slowly). */
-type ExistingSpec = Pick<Spec, 'id' | 'version' | 'min' | 'nominal' | 'max' | 'unit' | 'refTempC' | 'material' | 'testPoints' | 'conditions' | 'notes' | 'sourcePage'> & {
+type ExistingSpec = Pick<
+  Spec,
+  | 'id'
+  | 'version'
+  | 'min'
+  | 'nominal'
+  | 'max'
+  | 'unit'
+  | 'refTempC'
+  | 'material'
+  | 'testPoints'
+  | 'conditions'
+  | 'notes'
+  | 'sourcePage'
+> & {
   source: { title: string; edition: string } | null;
 };
 
 function specFields(spec: ExistingSpec): Comparable {
   return {
-    min: spec.min, nominal: spec.nominal, max: spec.max, unit: spec.unit, refTempC: spec.refTempC,
-    material: spec.material, testPoints: spec.testPoints, conditions: spec.conditions, notes: spec.notes,
-    source: spec.source ? sourceKey(spec.source) : null, sourcePage: spec.sourcePage,
+    min: spec.min,
+    nominal: spec.nominal,
+    max: spec.max,
+    unit: spec.unit,
+    refTempC: spec.refTempC,
+    material: spec.material,
+    testPoints: spec.testPoints,
+    conditions: spec.conditions,
+    notes: spec.notes,
+    source: spec.source ? sourceKey(spec.source) : null,
+    sourcePage: spec.sourcePage,
   };
 }
 
@@ -52,7 +81,11 @@ export function diffFields(before: Comparable, after: Comparable): FieldChange[]
 
 export const specRowKey = (row: SpecCsvRow) => `${modelKey(row)}|${foldKey(row.component)}|${foldKey(row.parameter)}`;
 
-type ExistingRow = Omit<ExistingSpec, 'source'> & { key: string; sourceTitle: string | null; sourceEdition: string | null };
+type ExistingRow = Omit<ExistingSpec, 'source'> & {
+  key: string;
+  sourceTitle: string | null;
+  sourceEdition: string | null;
+};
 
 /** Loads the existing specs of the models the rows name, keyed like specRowKey. */
 async function loadExisting(m: EntityManager, rows: SpecCsvRow[]): Promise<Map<string, ExistingSpec>> {
@@ -65,28 +98,48 @@ async function loadExisting(m: EntityManager, rows: SpecCsvRow[]): Promise<Map<s
               src.title AS sourceTitle, src.edition AS sourceEdition, CONCAT(vm.model_key, '|', c.name_key, '|', s.parameter_key) AS \`key\`
          FROM vehicle_models vm JOIN components c ON c.model_id = vm.id JOIN specs s ON s.component_id = c.id
          LEFT JOIN sources src ON src.id = s.source_id
-        WHERE vm.model_key IN (?)`, [modelKeys.slice(i, i + 500)]);
+        WHERE vm.model_key IN (?)`,
+      [modelKeys.slice(i, i + 500)],
+    );
     for (const { key, sourceTitle, sourceEdition, ...spec } of found) {
-      existing.set(key, { ...spec, source: sourceTitle === null ? null : { title: sourceTitle, edition: sourceEdition ?? '' } });
+      existing.set(key, {
+        ...spec,
+        source: sourceTitle === null ? null : { title: sourceTitle, edition: sourceEdition ?? '' },
+      });
     }
   }
   return existing;
 }
 
 /** Sources compare by natural key (case and spacing ignored) but show as the editor wrote them. */
-const sourceLabel = (s: { title: string; edition: string }) => (s.edition.trim() ? `${s.title.trim()}, ${s.edition.trim()}` : s.title.trim());
+const sourceLabel = (s: { title: string; edition: string }) =>
+  s.edition.trim() ? `${s.title.trim()}, ${s.edition.trim()}` : s.title.trim();
 
 function readable(change: FieldChange, spec: ExistingSpec, row: SpecCsvRow): FieldChange {
   if (change.field !== 'source') return change;
-  return { field: 'source', before: spec.source ? sourceLabel(spec.source) : null, after: sourceLabel({ title: row.sourceTitle, edition: row.sourceEdition }) };
+  return {
+    field: 'source',
+    before: spec.source ? sourceLabel(spec.source) : null,
+    after: sourceLabel({ title: row.sourceTitle, edition: row.sourceEdition }),
+  };
 }
 
-export async function planImport(m: EntityManager, rows: Array<{ line: number; row: SpecCsvRow }>): Promise<PlannedRow[]> {
-  const existing = await loadExisting(m, rows.map((r) => r.row));
+export async function planImport(m: EntityManager, rows: { line: number; row: SpecCsvRow }[]): Promise<PlannedRow[]> {
+  const existing = await loadExisting(
+    m,
+    rows.map((r) => r.row),
+  );
   return rows.map(({ line, row }) => {
     const spec = existing.get(specRowKey(row));
     if (!spec) return { line, row, action: 'create', specId: null, baseVersion: null, changes: [] };
     const changes = diffFields(specFields(spec), rowFields(row)).map((c) => readable(c, spec, row));
-    return { line, row, action: changes.length ? 'update' : 'unchanged', specId: spec.id, baseVersion: spec.version, changes };
+    return {
+      line,
+      row,
+      action: changes.length ? 'update' : 'unchanged',
+      specId: spec.id,
+      baseVersion: spec.version,
+      changes,
+    };
   });
 }

@@ -3,26 +3,49 @@
  * created / updated (with field diffs) / unchanged / rejected, one page of each group.
  */
 import type {
-  ImportBatchSummaryDto, ImportPreviewDto, ImportPreviewQuery, ImportProblemDto, ImportRowDto, ImportUpdatedRowDto,
-} from '../../../lib/contracts/imports';
-import type { FieldChangeDto } from '../../../lib/contracts/curation';
-import { formatRange, type CanonicalUnit } from '../../../lib/units';
+  ImportBatchSummaryDto,
+  ImportPreviewDto,
+  ImportPreviewQuery,
+  ImportProblemDto,
+  ImportRowDto,
+  ImportUpdatedRowDto,
+} from '@/lib/contracts/imports';
+import type { FieldChangeDto } from '@/lib/contracts/curation';
+import { formatRange, type CanonicalUnit } from '@/lib/units';
 import type { EntityManager } from 'typeorm';
 import type { ImportBatch } from './import-batch.entity';
 
 type StagedRow = {
-  line: number; specId: number | null; make: string; model: string; yearFrom: number; yearTo: number | null;
-  variant: string; component: string; parameter: string; min: number | null; nominal: number | null;
-  max: number | null; unit: string; changes: string | null; problems: string | null;
+  line: number;
+  specId: number | null;
+  make: string;
+  model: string;
+  yearFrom: number;
+  yearTo: number | null;
+  variant: string;
+  component: string;
+  parameter: string;
+  min: number | null;
+  nominal: number | null;
+  max: number | null;
+  unit: string;
+  changes: string | null;
+  problems: string | null;
 };
 type Note = { column: string | null; reason: string };
 
 export function toBatchSummary(b: ImportBatch): ImportBatchSummaryDto {
   return {
-    id: b.id, fileName: b.fileName, sha256: b.sha256, fileSize: b.fileSize, status: b.status,
+    id: b.id,
+    fileName: b.fileName,
+    sha256: b.sha256,
+    fileSize: b.fileSize,
+    status: b.status,
     counts: { warnings: 0, ...b.counts },
-    uploaderName: b.uploaderName, createdAt: b.createdAt.toISOString(),
-    committedAt: b.committedAt ? b.committedAt.toISOString() : null, committedByName: b.committedByName,
+    uploaderName: b.uploaderName,
+    createdAt: b.createdAt.toISOString(),
+    committedAt: b.committedAt ? b.committedAt.toISOString() : null,
+    committedByName: b.committedByName,
   };
 }
 
@@ -30,8 +53,15 @@ const parse = <T>(text: string | null): T[] => (text ? (JSON.parse(text) as T[])
 
 function toRow(r: StagedRow): ImportRowDto {
   return {
-    line: r.line, specId: r.specId, make: r.make, model: r.model, yearFrom: r.yearFrom, yearTo: r.yearTo,
-    variant: r.variant, component: r.component, parameter: r.parameter,
+    line: r.line,
+    specId: r.specId,
+    make: r.make,
+    model: r.model,
+    yearFrom: r.yearFrom,
+    yearTo: r.yearTo,
+    variant: r.variant,
+    component: r.component,
+    parameter: r.parameter,
     display: formatRange(r.min, r.nominal, r.max, r.unit as CanonicalUnit),
     warnings: parse<Note>(r.problems).map((n) => ({ line: r.line, ...n })),
   };
@@ -45,7 +75,12 @@ const CREATED_SPEC = `LEFT JOIN vehicle_models vm ON vm.model_key = st.model_key
   LEFT JOIN components c ON c.model_id = vm.id AND c.name_key = st.component_key
   LEFT JOIN specs s ON s.component_id = c.id AND s.parameter_key = st.parameter_key`;
 
-async function group(m: EntityManager, batch: ImportBatch, action: string, page: ImportPreviewQuery): Promise<StagedRow[]> {
+async function group(
+  m: EntityManager,
+  batch: ImportBatch,
+  action: string,
+  page: ImportPreviewQuery,
+): Promise<StagedRow[]> {
   const created = action === 'create' && batch.status === 'committed';
   return m.query(
     `SELECT ${COLUMNS}, ${created ? 's.id' : 'st.spec_id'} AS specId FROM import_batch_rows st ${created ? CREATED_SPEC : ''}
@@ -54,7 +89,11 @@ async function group(m: EntityManager, batch: ImportBatch, action: string, page:
   );
 }
 
-export async function buildPreview(m: EntityManager, batch: ImportBatch, page: ImportPreviewQuery): Promise<ImportPreviewDto> {
+export async function buildPreview(
+  m: EntityManager,
+  batch: ImportBatch,
+  page: ImportPreviewQuery,
+): Promise<ImportPreviewDto> {
   const [created, updated, unchanged, rejected] = await Promise.all(
     ['create', 'update', 'unchanged', 'rejected'].map((action) => group(m, batch, action, page)),
   );

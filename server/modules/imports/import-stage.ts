@@ -5,8 +5,8 @@
  * works on this table set-based, see import-apply.ts).
  */
 import type { EntityManager } from 'typeorm';
-import type { RowProblem } from '../../../lib/csv';
-import { unitKind } from '../../../lib/units';
+import type { RowProblem } from '@/lib/csv';
+import { unitKind } from '@/lib/units';
 import { foldKey, makeKey, modelKey, sourceKey } from '../library/keys';
 import type { PlannedRow } from './import-plan';
 
@@ -14,11 +14,44 @@ import type { PlannedRow } from './import-plan';
 const CHUNK = 1000;
 
 const COLUMNS = [
-  'batch_id', 'line', 'action', 'spec_id', 'base_version', 'make', 'model', 'year_from', 'year_to', 'variant',
-  'component', 'parameter', 'make_key', 'model_key', 'component_key', 'parameter_key', 'source_key',
-  'model_ord', 'component_ord', 'source_ord', 'firsts', 'create_ord',
-  'quantity_kind', 'min_value', 'nominal_value', 'max_value', 'unit', 'ref_temp_c', 'material', 'test_points',
-  'conditions', 'notes', 'source_title', 'source_edition', 'source_page', 'source_url', 'changes', 'problems',
+  'batch_id',
+  'line',
+  'action',
+  'spec_id',
+  'base_version',
+  'make',
+  'model',
+  'year_from',
+  'year_to',
+  'variant',
+  'component',
+  'parameter',
+  'make_key',
+  'model_key',
+  'component_key',
+  'parameter_key',
+  'source_key',
+  'model_ord',
+  'component_ord',
+  'source_ord',
+  'firsts',
+  'create_ord',
+  'quantity_kind',
+  'min_value',
+  'nominal_value',
+  'max_value',
+  'unit',
+  'ref_temp_c',
+  'material',
+  'test_points',
+  'conditions',
+  'notes',
+  'source_title',
+  'source_edition',
+  'source_page',
+  'source_url',
+  'changes',
+  'problems',
 ];
 const INSERT = `INSERT INTO import_batch_rows (${COLUMNS.map((c) => `\`${c}\``).join(', ')}) VALUES ?`;
 
@@ -62,28 +95,66 @@ class Numbering {
 function keyCells(p: PlannedRow, n: Numbering): Cell[] {
   const r = p.row;
   const keys = {
-    make: makeKey(r.make), model: modelKey(r), component: foldKey(r.component), parameter: foldKey(r.parameter),
+    make: makeKey(r.make),
+    model: modelKey(r),
+    component: foldKey(r.component),
+    parameter: foldKey(r.parameter),
     source: sourceKey({ title: r.sourceTitle, edition: r.sourceEdition }),
   };
   const componentKey = `${keys.model}|${keys.component}`;
   const creates = p.action === 'create';
   const bit = (needed: boolean, key: string, value: number) => (needed && n.first(key) ? value : 0);
-  const firsts = bit(creates, `m:${keys.make}`, FIRST.make) | bit(creates, `v:${keys.model}`, FIRST.model)
-    | bit(creates, `c:${componentKey}`, FIRST.component) | bit(p.action !== 'unchanged', `s:${keys.source}`, FIRST.source);
+  const firsts =
+    bit(creates, `m:${keys.make}`, FIRST.make) |
+    bit(creates, `v:${keys.model}`, FIRST.model) |
+    bit(creates, `c:${componentKey}`, FIRST.component) |
+    bit(p.action !== 'unchanged', `s:${keys.source}`, FIRST.source);
   return [
-    keys.make, keys.model, keys.component, keys.parameter, keys.source,
-    n.ord(`v:${keys.model}`), n.ord(`c:${componentKey}`), n.ord(`s:${keys.source}`), firsts, creates ? n.nextCreated() : null,
+    keys.make,
+    keys.model,
+    keys.component,
+    keys.parameter,
+    keys.source,
+    n.ord(`v:${keys.model}`),
+    n.ord(`c:${componentKey}`),
+    n.ord(`s:${keys.source}`),
+    firsts,
+    creates ? n.nextCreated() : null,
   ];
 }
 
 function plannedCells(batchId: number, p: PlannedRow, warnings: RowProblem[], n: Numbering): Cell[] {
   const r = p.row;
   return [
-    batchId, p.line, p.action, p.specId, p.baseVersion, r.make.trim(), r.model.trim(), r.yearFrom, r.yearTo, r.variant.trim(),
-    r.component.trim(), r.parameter.trim(), ...keyCells(p, n),
-    unitKind(r.unit), r.min, r.nominal, r.max, r.unit, r.refTempC, r.material, r.testPoints || null,
-    r.conditions || null, r.notes || null, r.sourceTitle.trim(), r.sourceEdition.trim(), r.sourcePage || null, r.sourceUrl,
-    json(p.changes), json(problemsOf(warnings)),
+    batchId,
+    p.line,
+    p.action,
+    p.specId,
+    p.baseVersion,
+    r.make.trim(),
+    r.model.trim(),
+    r.yearFrom,
+    r.yearTo,
+    r.variant.trim(),
+    r.component.trim(),
+    r.parameter.trim(),
+    ...keyCells(p, n),
+    unitKind(r.unit),
+    r.min,
+    r.nominal,
+    r.max,
+    r.unit,
+    r.refTempC,
+    r.material,
+    r.testPoints || null,
+    r.conditions || null,
+    r.notes || null,
+    r.sourceTitle.trim(),
+    r.sourceEdition.trim(),
+    r.sourcePage || null,
+    r.sourceUrl,
+    json(p.changes),
+    json(problemsOf(warnings)),
   ];
 }
 
@@ -109,7 +180,11 @@ export function byLine(problems: RowProblem[]): Map<number, RowProblem[]> {
 }
 
 export async function stageRows(
-  m: EntityManager, batchId: number, plan: PlannedRow[], warnings: Map<number, RowProblem[]>, rejected: Map<number, RowProblem[]>,
+  m: EntityManager,
+  batchId: number,
+  plan: PlannedRow[],
+  warnings: Map<number, RowProblem[]>,
+  rejected: Map<number, RowProblem[]>,
 ) {
   const rows: Cell[][] = [];
   const numbering = new Numbering();

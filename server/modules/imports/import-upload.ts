@@ -6,7 +6,7 @@
  */
 import type { Request, RequestHandler } from 'express';
 import multer from 'multer';
-import { AppError } from '../../errors/app-error';
+import { AppError } from '@/server/errors/app-error';
 import type { Upload } from './import.service';
 
 export const MAX_UPLOAD_BYTES = 10 * 1024 * 1024;
@@ -19,7 +19,11 @@ const upload = multer({
   limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10, parts: 12, fieldSize: 10_000 },
   fileFilter: (_req, file, accept) => {
     if (/\.csv$/i.test(file.originalname) || file.mimetype === 'text/csv') return accept(null, true);
-    accept(unsupported(`${file.originalname} is not a CSV file: upload a .csv file (text/csv) saved as "CSV UTF-8 (comma delimited)".`));
+    accept(
+      unsupported(
+        `${file.originalname} is not a CSV file: upload a .csv file (text/csv) saved as "CSV UTF-8 (comma delimited)".`,
+      ),
+    );
   },
 });
 
@@ -31,7 +35,12 @@ const MULTER_MESSAGES: Record<string, string> = {
 function toProblem(err: unknown): unknown {
   if (err instanceof AppError) return err;
   if (err instanceof multer.MulterError) {
-    if (err.code === 'LIMIT_FILE_SIZE') return new AppError(413, 'payload_too_large', 'The file is larger than 10 MB. Split it into smaller files and import them one after another.');
+    if (err.code === 'LIMIT_FILE_SIZE')
+      return new AppError(
+        413,
+        'payload_too_large',
+        'The file is larger than 10 MB. Split it into smaller files and import them one after another.',
+      );
     return AppError.badRequest(MULTER_MESSAGES[err.code] ?? `The upload form is not valid (${err.message}).`);
   }
   // busboy: a truncated or malformed multipart body.
@@ -47,6 +56,9 @@ export const uploadCsv: RequestHandler = (req, res, next) => {
 
 /** The uploaded file; 400 when the form has no file field. */
 export function uploadedFile(req: Request): Upload {
-  if (!req.file) throw AppError.badRequest('No file: send the CSV in the form field named "file".', [{ path: 'file', message: 'required' }]);
+  if (!req.file)
+    throw AppError.badRequest('No file: send the CSV in the form field named "file".', [
+      { path: 'file', message: 'required' },
+    ]);
   return { fileName: req.file.originalname || 'upload.csv', bytes: req.file.buffer };
 }

@@ -1,12 +1,12 @@
 import path from 'node:path';
 import { Router } from 'express';
-import { COLUMN_REFERENCE } from '../../../lib/csv';
-import { IdParams } from '../../../lib/contracts/library';
-import { ImportCommitBody, ImportListQuery, ImportPreviewQuery } from '../../../lib/contracts/imports';
-import { actorOf } from '../../auth/actor';
-import { config } from '../../config';
-import { requireJson } from '../../middleware/require-json';
-import { validate } from '../../middleware/validate';
+import { COLUMN_REFERENCE } from '@/lib/csv';
+import { IdParams } from '@/lib/contracts/library';
+import { ImportCommitBody, ImportListQuery, ImportPreviewQuery } from '@/lib/contracts/imports';
+import { actorOf } from '@/server/auth/actor';
+import { config } from '@/server/config';
+import { requireJson } from '@/server/middleware/require-json';
+import { validate } from '@/server/middleware/validate';
 import { commitImport, getImportPreview, listImports, previewImport } from './import.service';
 import { uploadCsv, uploadedFile } from './import-upload';
 
@@ -34,6 +34,12 @@ importRouter.get('/:id', validate('params', IdParams), validate('query', ImportP
   res.json(await getImportPreview(res.locals.params.id, res.locals.query));
 });
 
-importRouter.post('/:id/commit', validate('params', IdParams), requireJson, validate('body', ImportCommitBody), async (req, res) => {
-  res.json(await commitImport(res.locals.params.id, actorOf(req), res.locals.body.reason));
-});
+importRouter.post(
+  '/:id/commit',
+  validate('params', IdParams),
+  requireJson,
+  validate('body', ImportCommitBody),
+  async (req, res) => {
+    res.json(await commitImport(res.locals.params.id, actorOf(req), res.locals.body.reason));
+  },
+);

@@ -5,10 +5,10 @@
  */
 import { createHash } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import { checkCsvBytes, decodeCsv, validateSpecCsv, type RowProblem, type ValidatedCsv } from '../../../lib/csv';
-import type { ImportBatchSummaryDto, ImportPreviewDto, ImportPreviewQuery } from '../../../lib/contracts/imports';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
+import { checkCsvBytes, decodeCsv, validateSpecCsv, type RowProblem, type ValidatedCsv } from '@/lib/csv';
+import type { ImportBatchSummaryDto, ImportPreviewDto, ImportPreviewQuery } from '@/lib/contracts/imports';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
 import { markLibraryChanged } from '../search/search.service';
 import { ImportBatch, type ImportCounts } from './import-batch.entity';
 import { planImport, type PlannedRow } from './import-plan';
@@ -35,23 +35,35 @@ export function validateUpload(bytes: Uint8Array): ValidatedCsv {
 function countsOf(plan: PlannedRow[], checked: ValidatedCsv): ImportCounts {
   const n = (action: PlannedRow['action']) => plan.filter((p) => p.action === action).length;
   return {
-    created: n('create'), updated: n('update'), unchanged: n('unchanged'),
+    created: n('create'),
+    updated: n('update'),
+    unchanged: n('unchanged'),
     rejected: new Set(checked.rejected.map((r) => r.line)).size,
     warnings: checked.accepted.reduce((sum, a) => sum + a.warnings.length, 0),
   };
 }
 
 /** Stores the planned rows with a new batch, inside the caller's transaction. */
-async function stageBatch(m: EntityManager, checked: ValidatedCsv, plan: PlannedRow[], fields: Partial<ImportBatch>): Promise<ImportBatch> {
-  const batch = await m.getRepository(ImportBatch).save({ ...fields, counts: countsOf(plan, checked), rowErrors: [], status: 'previewed' as const });
+async function stageBatch(
+  m: EntityManager,
+  checked: ValidatedCsv,
+  plan: PlannedRow[],
+  fields: Partial<ImportBatch>,
+): Promise<ImportBatch> {
+  const batch = await m
+    .getRepository(ImportBatch)
+    .save({ ...fields, counts: countsOf(plan, checked), rowErrors: [], status: 'previewed' as const });
   const warnings = new Map(checked.accepted.map((a) => [a.line, a.warnings]));
   await stageRows(m, batch.id, plan, warnings, byLine(checked.rejected));
   return batch;
 }
 
 const uploaderOf = (upload: Upload, actor: Actor) => ({
-  fileName: upload.fileName.slice(0, 255), sha256: sha256(upload.bytes), fileSize: upload.bytes.byteLength,
-  uploaderId: actor.id, uploaderName: actor.name,
+  fileName: upload.fileName.slice(0, 255),
+  sha256: sha256(upload.bytes),
+  fileSize: upload.bytes.byteLength,
+  uploaderId: actor.id,
+  uploaderName: actor.name,
 });
 
 /** Problems kept and answered for a file that cannot be read (one per line at most; the first ones say enough). */
@@ -61,12 +73,18 @@ const MAX_FILE_ERRORS = 200;
 async function rejectFile(upload: Upload, actor: Actor, fileErrors: RowProblem[]): Promise<never> {
   const kept = fileErrors.slice(0, MAX_FILE_ERRORS);
   const batch = await AppDataSource.getRepository(ImportBatch).save({
-    ...uploaderOf(upload, actor), counts: { created: 0, updated: 0, unchanged: 0, rejected: 0, warnings: 0 },
-    rowErrors: kept, status: 'failed',
+    ...uploaderOf(upload, actor),
+    counts: { created: 0, updated: 0, unchanged: 0, rejected: 0, warnings: 0 },
+    rowErrors: kept,
+    status: 'failed',
   });
-  const more = fileErrors.length > kept.length ? ` (${fileErrors.length} problems; the first ${kept.length} are listed)` : '';
+  const more =
+    fileErrors.length > kept.length ? ` (${fileErrors.length} problems; the first ${kept.length} are listed)` : '';
   const errors = kept.map((e) => ({ path: problemPath(e), message: e.reason }));
-  throw new AppError(422, 'unprocessable', `${upload.fileName} cannot be imported: ${fileErrors[0].reason}${more}.`, { errors, batchId: batch.id });
+  throw new AppError(422, 'unprocessable', `${upload.fileName} cannot be imported: ${fileErrors[0].reason}${more}.`, {
+    errors,
+    batchId: batch.id,
+  });
 }
 
 /** Upload → preview. Nothing is written but the batch and its staged rows. */
@@ -75,9 +93,16 @@ export async function previewImport(upload: Upload, actor: Actor, page = FIRST_P
 }
 
 /** The preview of an upload already validated (the benchmark times the two steps apart). */
-export async function previewValidated(upload: Upload, checked: ValidatedCsv, actor: Actor, page = FIRST_PAGE): Promise<ImportPreviewDto> {
+export async function previewValidated(
+  upload: Upload,
+  checked: ValidatedCsv,
+  actor: Actor,
+  page = FIRST_PAGE,
+): Promise<ImportPreviewDto> {
   if (checked.fileErrors.length) return rejectFile(upload, actor, checked.fileErrors);
-  const batch = await AppDataSource.transaction(async (m) => stageBatch(m, checked, await planImport(m, checked.accepted), uploaderOf(upload, actor)));
+  const batch = await AppDataSource.transaction(async (m) =>
+    stageBatch(m, checked, await planImport(m, checked.accepted), uploaderOf(upload, actor)),
+  );
   return buildPreview(AppDataSource.manager, batch, page);
 }
 
@@ -88,20 +113,39 @@ export async function getImportPreview(id: number, page: ImportPreviewQuery): Pr
 }
 
 export async function listImports(limit: number): Promise<ImportBatchSummaryDto[]> {
-  const batches = await AppDataSource.getRepository(ImportBatch).find({ order: { createdAt: 'DESC', id: 'DESC' }, take: limit });
+  const batches = await AppDataSource.getRepository(ImportBatch).find({
+    order: { createdAt: 'DESC', id: 'DESC' },
+    take: limit,
+  });
   return batches.map(toBatchSummary);
 }
 
-async function commitLocked(m: EntityManager, id: number, actor: Actor, reason: string | undefined): Promise<ImportBatch> {
+async function commitLocked(
+  m: EntityManager,
+  id: number,
+  actor: Actor,
+  reason: string | undefined,
+): Promise<ImportBatch> {
   const batch = await m.getRepository(ImportBatch).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
   if (!batch) throw AppError.notFound('import', id);
   if (batch.status === 'committed') {
-    throw AppError.conflict(`Import #${id} was already committed${batch.committedByName ? ` by ${batch.committedByName}` : ''}; a batch commits once.`, { batch: toBatchSummary(batch) });
+    throw AppError.conflict(
+      `Import #${id} was already committed${batch.committedByName ? ` by ${batch.committedByName}` : ''}; a batch commits once.`,
+      { batch: toBatchSummary(batch) },
+    );
   }
-  if (batch.status === 'failed') throw AppError.unprocessable(`Import #${id} failed validation, so there is nothing to commit. Fix the file and upload it again.`);
+  if (batch.status === 'failed')
+    throw AppError.unprocessable(
+      `Import #${id} failed validation, so there is nothing to commit. Fix the file and upload it again.`,
+    );
   batch.reason = reason ?? `CSV import of ${batch.fileName}`;
   await applyImport(m, id, actor, batch.reason, batch.counts);
-  Object.assign(batch, { status: 'committed', committedAt: new Date(), committedById: actor.id, committedByName: actor.name });
+  Object.assign(batch, {
+    status: 'committed',
+    committedAt: new Date(),
+    committedById: actor.id,
+    committedByName: actor.name,
+  });
   return m.getRepository(ImportBatch).save(batch);
 }
 
@@ -119,20 +163,36 @@ export async function commitImport(id: number, actor: Actor, reason?: string): P
  * already has are left as they are (the demo loader must not undo editors' changes).
  */
 export async function importCsvNow(
-  text: string, fileName: string, actor: Actor, reason: string, options: { createOnly?: boolean } = {},
+  text: string,
+  fileName: string,
+  actor: Actor,
+  reason: string,
+  options: { createOnly?: boolean } = {},
 ): Promise<ImportSummary> {
   const checked = validateSpecCsv(text);
   if (checked.fileErrors.length) {
-    throw AppError.unprocessable(`${fileName}: ${checked.fileErrors[0].reason}`, checked.fileErrors.map((e) => ({ path: problemPath(e), message: e.reason })));
+    throw AppError.unprocessable(
+      `${fileName}: ${checked.fileErrors[0].reason}`,
+      checked.fileErrors.map((e) => ({ path: problemPath(e), message: e.reason })),
+    );
   }
   const summary = await AppDataSource.transaction(async (m): Promise<ImportSummary> => {
-    const plan = (await planImport(m, checked.accepted))
-      .map((p) => (options.createOnly && p.action === 'update' ? { ...p, action: 'unchanged' as const, changes: [] } : p));
+    const plan = (await planImport(m, checked.accepted)).map((p) =>
+      options.createOnly && p.action === 'update' ? { ...p, action: 'unchanged' as const, changes: [] } : p,
+    );
     const counts = countsOf(plan, checked);
     if (counts.created + counts.updated === 0) return { batchId: null, counts, rejected: checked.rejected };
-    const batch = await stageBatch(m, checked, plan, { ...uploaderOf({ fileName, bytes: Buffer.from(text, 'utf8') }, actor), reason });
+    const batch = await stageBatch(m, checked, plan, {
+      ...uploaderOf({ fileName, bytes: Buffer.from(text, 'utf8') }, actor),
+      reason,
+    });
     await applyImport(m, batch.id, actor, reason, counts);
-    await m.getRepository(ImportBatch).update(batch.id, { status: 'committed', committedAt: new Date(), committedById: actor.id, committedByName: actor.name });
+    await m.getRepository(ImportBatch).update(batch.id, {
+      status: 'committed',
+      committedAt: new Date(),
+      committedById: actor.id,
+      committedByName: actor.name,
+    });
     return { batchId: batch.id, counts, rejected: checked.rejected };
   });
   if (summary.batchId !== null) markLibraryChanged();

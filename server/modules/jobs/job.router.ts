@@ -1,8 +1,8 @@
 import { Router } from 'express';
-import { CreateJobBody, IDEMPOTENCY_KEY, JobsQuery, ReadingBody, UpdateJobBody } from '../../../lib/contracts/jobs';
-import { IdParams } from '../../../lib/contracts/library';
-import { AppError } from '../../errors/app-error';
-import { validate } from '../../middleware/validate';
+import { CreateJobBody, IDEMPOTENCY_KEY, JobsQuery, ReadingBody, UpdateJobBody } from '@/lib/contracts/jobs';
+import { IdParams } from '@/lib/contracts/library';
+import { AppError } from '@/server/errors/app-error';
+import { validate } from '@/server/middleware/validate';
 import { createJob, getJob, listJobs, updateJob } from './job.service';
 import { addReading } from './reading.service';
 import { readingsCsv } from './readings-csv';
@@ -27,7 +27,8 @@ jobRouter.patch('/:id', validate('params', IdParams), validate('body', UpdateJob
 
 jobRouter.post('/:id/readings', validate('params', IdParams), validate('body', ReadingBody), async (req, res) => {
   const key = req.get('Idempotency-Key');
-  if (key !== undefined && !IDEMPOTENCY_KEY.test(key)) throw AppError.badRequest('Idempotency-Key must be 8–80 letters, digits, or . _ : -');
+  if (key !== undefined && !IDEMPOTENCY_KEY.test(key))
+    throw AppError.badRequest('Idempotency-Key must be 8–80 letters, digits, or . _ : -');
   const { reading, created } = await addReading(req.user!, res.locals.params.id, res.locals.body, key);
   res.status(created ? 201 : 200).json(reading);
 });

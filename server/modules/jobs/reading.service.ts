@@ -5,10 +5,10 @@
  */
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import type { ReadingBody, ReadingDto } from '../../../lib/contracts/jobs';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
-import type { SignedInUser } from '../../auth/roles';
+import type { ReadingBody, ReadingDto } from '@/lib/contracts/jobs';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
+import type { SignedInUser } from '@/server/auth/roles';
 import { Spec } from '../specs/spec.entity';
 import { judge, toVerdictInput } from '../verdicts/verdict.service';
 import { Job } from './job.entity';
@@ -18,20 +18,34 @@ import { toReadingDto } from './job.mapper';
 export type AddedReading = { reading: ReadingDto; created: boolean };
 
 async function describeSpec(m: EntityManager, specId: number) {
-  const spec = await m.getRepository(Spec).findOne({ where: { id: specId }, relations: { component: true, source: true } });
+  const spec = await m
+    .getRepository(Spec)
+    .findOne({ where: { id: specId }, relations: { component: true, source: true } });
   if (!spec) throw AppError.notFound('spec', specId);
-  const citation = spec.source ? `${spec.source.title}${spec.source.edition ? `, ${spec.source.edition}` : ''}${spec.sourcePage ? `, p. ${spec.sourcePage}` : ''}` : null;
+  const citation = spec.source
+    ? `${spec.source.title}${spec.source.edition ? `, ${spec.source.edition}` : ''}${spec.sourcePage ? `, p. ${spec.sourcePage}` : ''}`
+    : null;
   return { label: spec.parameter, componentName: spec.component.name, citation };
 }
 
 async function lockOpenJob(m: EntityManager, user: SignedInUser, jobId: number): Promise<Job> {
-  const job = await m.getRepository(Job).createQueryBuilder('j').setLock('pessimistic_write').where('j.id = :id', { id: jobId }).getOne();
+  const job = await m
+    .getRepository(Job)
+    .createQueryBuilder('j')
+    .setLock('pessimistic_write')
+    .where('j.id = :id', { id: jobId })
+    .getOne();
   if (!job || (job.ownerId !== user.id && user.role !== 'admin')) throw AppError.notFound('job', jobId);
   if (job.status === 'closed') throw AppError.conflict('This job is closed. Reopen it to add readings.');
   return job;
 }
 
-export async function addReading(user: SignedInUser, jobId: number, body: ReadingBody, key: string | undefined): Promise<AddedReading> {
+export async function addReading(
+  user: SignedInUser,
+  jobId: number,
+  body: ReadingBody,
+  key: string | undefined,
+): Promise<AddedReading> {
   const idempotencyKey = key ?? randomUUID();
   try {
     return await AppDataSource.transaction(async (m) => {
@@ -40,13 +54,28 @@ export async function addReading(user: SignedInUser, jobId: number, body: Readin
       if (existing) return { reading: toReadingDto(existing, existing.specVersion), created: false };
       const { input, specVersion } = await toVerdictInput(body);
       const result = judge(input);
-      const about = body.specId !== undefined ? await describeSpec(m, body.specId) : { label: body.label!, componentName: '', citation: null };
+      const about =
+        body.specId !== undefined
+          ? await describeSpec(m, body.specId)
+          : { label: body.label!, componentName: '', citation: null };
       const saved = await m.getRepository(Reading).save({
-        jobId, specId: body.specId ?? null, specVersion: specVersion ?? null, label: about.label, componentName: about.componentName,
-        specLimits: { ...input.spec, citation: about.citation }, inputs: { ...body, label: undefined, retakeOf: undefined, takenAt: undefined },
-        value: result.value, unit: result.unit, expandedUncertainty: result.expandedUncertainty,
-        conformanceProbability: result.conformanceProbability, verdict: result.verdict, reason: result.reason,
-        steps: result.steps, zones: result.zones, idempotencyKey, supersededBy: null,
+        jobId,
+        specId: body.specId ?? null,
+        specVersion: specVersion ?? null,
+        label: about.label,
+        componentName: about.componentName,
+        specLimits: { ...input.spec, citation: about.citation },
+        inputs: { ...body, label: undefined, retakeOf: undefined, takenAt: undefined },
+        value: result.value,
+        unit: result.unit,
+        expandedUncertainty: result.expandedUncertainty,
+        conformanceProbability: result.conformanceProbability,
+        verdict: result.verdict,
+        reason: result.reason,
+        steps: result.steps,
+        zones: result.zones,
+        idempotencyKey,
+        supersededBy: null,
         takenAt: body.takenAt ? new Date(body.takenAt) : new Date(),
       });
       if (body.retakeOf !== undefined) await supersede(m, jobId, body.retakeOf, saved.id);
@@ -62,7 +91,10 @@ export async function addReading(user: SignedInUser, jobId: number, body: Readin
 
 async function supersede(m: EntityManager, jobId: number, oldId: number, newId: number) {
   const old = await m.getRepository(Reading).findOneBy({ id: oldId, jobId });
-  if (!old) throw AppError.unprocessable(`Reading ${oldId} is not on this job.`, [{ path: 'retakeOf', message: 'Not on this job' }]);
+  if (!old)
+    throw AppError.unprocessable(`Reading ${oldId} is not on this job.`, [
+      { path: 'retakeOf', message: 'Not on this job' },
+    ]);
   if (old.supersededBy !== null) throw AppError.conflict(`Reading ${oldId} has already been re-taken.`);
   await m.getRepository(Reading).update(old.id, { supersededBy: newId });
 }

@@ -8,7 +8,13 @@ export function foldKey(text: string): string {
 
 export const makeKey = (make: string) => foldKey(make);
 
-export const modelKey = (m: { make: string; model: string; yearFrom: number; yearTo: number | null; variant: string }) =>
+export const modelKey = (m: {
+  make: string;
+  model: string;
+  yearFrom: number;
+  yearTo: number | null;
+  variant: string;
+}) =>
   [m.make, m.model, String(m.yearFrom), m.yearTo === null ? '' : String(m.yearTo), m.variant].map(foldKey).join('|');
 
 export const sourceKey = (s: { title: string; edition: string }) => `${foldKey(s.title)}|${foldKey(s.edition)}`;

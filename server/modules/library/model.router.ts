@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { IdParams, ModelsQuery } from '../../../lib/contracts/library';
-import { validate } from '../../middleware/validate';
+import { IdParams, ModelsQuery } from '@/lib/contracts/library';
+import { validate } from '@/server/middleware/validate';
 import { getModel, listModels } from './model.service';
 
 export const modelRouter = Router();

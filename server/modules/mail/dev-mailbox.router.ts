@@ -6,7 +6,7 @@
  * the like are never believed), and a proxied request is refused outright.
  */
 import { Router, type NextFunction, type Request, type Response } from 'express';
-import { AppError } from '../../errors/app-error';
+import { AppError } from '@/server/errors/app-error';
 import { fakeSmtp } from './fake-smtp';
 
 const LOOPBACK = /^(127\.\d{1,3}\.\d{1,3}\.\d{1,3}|::1|::ffff:127\.\d{1,3}\.\d{1,3}\.\d{1,3})$/;
@@ -24,7 +24,8 @@ function loopbackOnly(req: Request, _res: Response, next: NextFunction) {
   next();
 }
 
-const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+const escape = (s: string) =>
+  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 const linkify = (s: string) => escape(s).replace(/(https?:\/\/[^\s<]+)/g, '<a href="$1">$1</a>');
 
 export const devMailboxRouter = Router();
@@ -35,12 +36,16 @@ devMailboxRouter.get('/mailbox.json', (_req, res) => {
 });
 
 devMailboxRouter.get('/mailbox', (_req, res) => {
-  const items = fakeSmtp.messages.map((m) => `
+  const items = fakeSmtp.messages
+    .map(
+      (m) => `
     <article data-testid="mail-${m.id}">
       <h2>${escape(m.subject)}</h2>
       <p class="meta">To ${escape(m.to)} · ${escape(m.receivedAt)}</p>
       <pre>${linkify(m.text)}</pre>
-    </article>`).join('');
+    </article>`,
+    )
+    .join('');
   res.type('html').send(`<!doctype html><html lang="en"><head><meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1"><title>Specbench development mailbox</title>
 <style>body{font-family:system-ui,sans-serif;max-width:760px;margin:0 auto;padding:16px;background:#f6f7f9;color:#17202a}

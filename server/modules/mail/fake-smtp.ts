@@ -14,7 +14,10 @@ export class FakeSmtpServer {
   async start(port: number): Promise<number> {
     if (this.server) return this.port;
     const server = new SMTPServer({
-      secure: false, authOptional: true, disabledCommands: ['STARTTLS'], logger: false,
+      secure: false,
+      authOptional: true,
+      disabledCommands: ['STARTTLS'],
+      logger: false,
       onData: (stream, _session, callback) => {
         const chunks: Buffer[] = [];
         stream.on('data', (c: Buffer) => chunks.push(c));

@@ -5,8 +5,8 @@
  */
 import nodemailer, { type Transporter } from 'nodemailer';
 import type { EntityManager } from 'typeorm';
-import { config } from '../../config';
-import { AppDataSource } from '../../db/data-source';
+import { config } from '@/server/config';
+import { AppDataSource } from '@/server/db/data-source';
 import { fakeSmtp } from './fake-smtp';
 import { OutboxMessage } from './outbox-message.entity';
 
@@ -20,7 +20,14 @@ let transporter: Transporter | null = null;
 function transport(): Transporter {
   transporter ??= config.SMTP_URL
     ? nodemailer.createTransport(config.SMTP_URL)
-    : nodemailer.createTransport({ host: '127.0.0.1', port: fakeSmtp.port || config.FAKE_SMTP_PORT, secure: false, ignoreTLS: true, connectionTimeout: 3000, greetingTimeout: 3000 });
+    : nodemailer.createTransport({
+        host: '127.0.0.1',
+        port: fakeSmtp.port || config.FAKE_SMTP_PORT,
+        secure: false,
+        ignoreTLS: true,
+        connectionTimeout: 3000,
+        greetingTimeout: 3000,
+      });
   return transporter;
 }
 export function resetTransport() {
@@ -35,18 +42,28 @@ export const backoffMs = (attempts: number) => Math.min(600_000, 1000 * 2 ** att
 export async function deliverDue(limit = 20): Promise<number> {
   let sent = 0;
   await AppDataSource.transaction(async (m) => {
-    const due: OutboxMessage[] = await m.getRepository(OutboxMessage).createQueryBuilder('o')
+    const due: OutboxMessage[] = await m
+      .getRepository(OutboxMessage)
+      .createQueryBuilder('o')
       .where('o.sentAt IS NULL AND o.nextAttemptAt <= :now', { now: new Date() })
-      .orderBy('o.id', 'ASC').limit(limit).setLock('pessimistic_write').setOnLocked('skip_locked').getMany();
+      .orderBy('o.id', 'ASC')
+      .limit(limit)
+      .setLock('pessimistic_write')
+      .setOnLocked('skip_locked')
+      .getMany();
     for (const msg of due) {
       try {
         await transport().sendMail({ from: config.MAIL_FROM, to: msg.to, subject: msg.subject, text: msg.text });
-        await m.getRepository(OutboxMessage).update(msg.id, { sentAt: new Date(), attempts: msg.attempts + 1, lastError: null });
+        await m
+          .getRepository(OutboxMessage)
+          .update(msg.id, { sentAt: new Date(), attempts: msg.attempts + 1, lastError: null });
         sent += 1;
       } catch (err) {
         const attempts = msg.attempts + 1;
         await m.getRepository(OutboxMessage).update(msg.id, {
-          attempts, lastError: String((err as Error).message).slice(0, 500), nextAttemptAt: new Date(Date.now() + backoffMs(attempts)),
+          attempts,
+          lastError: String((err as Error).message).slice(0, 500),
+          nextAttemptAt: new Date(Date.now() + backoffMs(attempts)),
         });
       }
     }
@@ -61,7 +78,11 @@ export function startOutboxWorker(intervalMs = config.OUTBOX_POLL_MS) {
   timer = setInterval(() => {
     if (running || !AppDataSource.isInitialized) return;
     running = true;
-    deliverDue().catch((err) => console.error('outbox:', (err as Error).message)).finally(() => { running = false; });
+    deliverDue()
+      .catch((err) => console.error('outbox:', (err as Error).message))
+      .finally(() => {
+        running = false;
+      });
   }, intervalMs);
   (timer as unknown as { unref?: () => void }).unref?.();
 }

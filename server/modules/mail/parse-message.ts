@@ -2,13 +2,18 @@
 export type KeptMessage = { id: number; to: string; subject: string; text: string; receivedAt: string };
 
 function decodeQuotedPrintable(text: string): string {
-  const bytes = text.replace(/=\r?\n/g, '').replace(/=([0-9A-F]{2})/gi, (_m, h: string) => String.fromCharCode(parseInt(h, 16)));
+  const bytes = text
+    .replace(/=\r?\n/g, '')
+    .replace(/=([0-9A-F]{2})/gi, (_m, h: string) => String.fromCharCode(parseInt(h, 16)));
   return Buffer.from(bytes, 'latin1').toString('utf8');
 }
 
 function decodeHeader(value: string): string {
   return value.replace(/=\?utf-8\?([QB])\?([^?]*)\?=/gi, (_m, enc: string, data: string) =>
-    enc.toUpperCase() === 'B' ? Buffer.from(data, 'base64').toString('utf8') : decodeQuotedPrintable(data.replace(/_/g, ' ')));
+    enc.toUpperCase() === 'B'
+      ? Buffer.from(data, 'base64').toString('utf8')
+      : decodeQuotedPrintable(data.replace(/_/g, ' ')),
+  );
 }
 
 export function simpleParse(raw: string, id: number): KeptMessage {
@@ -17,7 +22,11 @@ export function simpleParse(raw: string, id: number): KeptMessage {
   const body = raw.slice(split).replace(/^\r?\n\r?\n/, '');
   const header = (name: string) => decodeHeader(new RegExp(`^${name}:\\s*(.*)$`, 'im').exec(head)?.[1]?.trim() ?? '');
   const encoding = header('Content-Transfer-Encoding').toLowerCase();
-  const text = encoding === 'quoted-printable' ? decodeQuotedPrintable(body)
-    : encoding === 'base64' ? Buffer.from(body, 'base64').toString('utf8') : body;
+  const text =
+    encoding === 'quoted-printable'
+      ? decodeQuotedPrintable(body)
+      : encoding === 'base64'
+        ? Buffer.from(body, 'base64').toString('utf8')
+        : body;
   return { id, to: header('To'), subject: header('Subject'), text: text.trim(), receivedAt: new Date().toISOString() };
 }

@@ -9,8 +9,15 @@ import Fuse from 'fuse.js';
 import { SYNONYM_GROUPS } from './synonyms';
 
 export type SearchDoc = {
-  specId: number; modelId: number; make: string; model: string; yearFrom: number; yearTo: number | null;
-  variant: string; component: string; parameter: string;
+  specId: number;
+  modelId: number;
+  make: string;
+  model: string;
+  yearFrom: number;
+  yearTo: number | null;
+  variant: string;
+  component: string;
+  parameter: string;
 };
 
 export type SearchMatch = { doc: SearchDoc; score: number };
@@ -19,12 +26,17 @@ const STOP_WORDS = new Set(['the', 'of', 'for', 'and', 'a', 'an', 'to', 'on', 'a
 const FIELD_WEIGHT = { parameter: 1.2, component: 1.1, model: 1.0, make: 0.9, variant: 0.8, synonym: 1.1 } as const;
 
 export function tokenize(text: string): string[] {
-  return text.toLowerCase().split(/[^\p{L}\p{N}]+/u).filter((t) => t.length > 0);
+  return text
+    .toLowerCase()
+    .split(/[^\p{L}\p{N}]+/u)
+    .filter((t) => t.length > 0);
 }
 
 function synonymTokens(text: string): string[] {
   const lower = ` ${tokenize(text).join(' ')} `;
-  return SYNONYM_GROUPS.filter((g) => g.some((p) => lower.includes(` ${tokenize(p).join(' ')} `))).flat().flatMap(tokenize);
+  return SYNONYM_GROUPS.filter((g) => g.some((p) => lower.includes(` ${tokenize(p).join(' ')} `)))
+    .flat()
+    .flatMap(tokenize);
 }
 
 export class SearchIndex {
@@ -43,7 +55,12 @@ export class SearchIndex {
       synonymTokens(`${d.component} ${d.parameter}`).forEach((t) => this.post(t, i, FIELD_WEIGHT.synonym));
     });
     this.vocabulary = [...this.postings.keys()].filter((t) => !/^\d+$/.test(t));
-    this.fuse = new Fuse(this.vocabulary, { includeScore: true, threshold: 0.4, ignoreLocation: true, minMatchCharLength: 2 });
+    this.fuse = new Fuse(this.vocabulary, {
+      includeScore: true,
+      threshold: 0.4,
+      ignoreLocation: true,
+      minMatchCharLength: 2,
+    });
   }
 
   private post(token: string, doc: number, weight: number) {
@@ -53,7 +70,7 @@ export class SearchIndex {
   }
 
   /** Vocabulary terms a query word may stand for, with a quality from 0 to 1. */
-  private termsFor(word: string): Array<[string, number]> {
+  private termsFor(word: string): [string, number][] {
     const terms = new Map<string, number>();
     if (this.postings.has(word)) terms.set(word, 1);
     if (word.length >= 2) {

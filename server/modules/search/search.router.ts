@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { SearchQuery } from '../../../lib/contracts/library';
-import { validate } from '../../middleware/validate';
+import { SearchQuery } from '@/lib/contracts/library';
+import { validate } from '@/server/middleware/validate';
 import { searchLibrary } from './search.service';
 
 export const searchRouter = Router();

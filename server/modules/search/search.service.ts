@@ -3,14 +3,19 @@
  * and rebuilt when the library's fingerprint (spec count and last change) moves,
  * checked at most every few seconds, or at once after markLibraryChanged().
  */
-import type { SearchQuery, SearchResultDto, SearchGroupDto, QuantityKind } from '../../../lib/contracts/library';
-import { formatRange, type CanonicalUnit } from '../../../lib/units';
-import { AppDataSource } from '../../db/data-source';
+import type { SearchQuery, SearchResultDto, SearchGroupDto, QuantityKind } from '@/lib/contracts/library';
+import { formatRange, type CanonicalUnit } from '@/lib/units';
+import { AppDataSource } from '@/server/db/data-source';
 import { SearchIndex, type SearchDoc } from './search-index';
 import { markLibraryChanged, onLibraryChanged } from '../library/library-changes';
 
 type IndexedSpec = SearchDoc & {
-  makeId: number; quantityKind: QuantityKind; min: number | null; nominal: number | null; max: number | null; unit: string;
+  makeId: number;
+  quantityKind: QuantityKind;
+  min: number | null;
+  nominal: number | null;
+  max: number | null;
+  unit: string;
 };
 
 const RECHECK_MS = 3000;
@@ -23,7 +28,9 @@ onLibraryChanged(() => {
 });
 
 async function fingerprint(): Promise<string> {
-  const [row] = await AppDataSource.query("SELECT COUNT(*) AS n, MAX(updated_at) AS t FROM specs WHERE status = 'published'");
+  const [row] = await AppDataSource.query(
+    "SELECT COUNT(*) AS n, MAX(updated_at) AS t FROM specs WHERE status = 'published'",
+  );
   return `${row.n}|${row.t ? new Date(row.t).toISOString() : ''}`;
 }
 
@@ -35,7 +42,11 @@ async function loadDocs(): Promise<IndexedSpec[]> {
       FROM specs s JOIN components c ON c.id = s.component_id
       JOIN vehicle_models vm ON vm.id = c.model_id JOIN makes mk ON mk.id = vm.make_id
      WHERE s.status = 'published'`);
-  return rows.map((r: IndexedSpec) => ({ ...r, yearFrom: Number(r.yearFrom), yearTo: r.yearTo === null ? null : Number(r.yearTo) }));
+  return rows.map((r: IndexedSpec) => ({
+    ...r,
+    yearFrom: Number(r.yearFrom),
+    yearTo: r.yearTo === null ? null : Number(r.yearTo),
+  }));
 }
 
 async function currentIndex(): Promise<SearchIndex> {
@@ -46,11 +57,15 @@ async function currentIndex(): Promise<SearchIndex> {
     state.checkedAt = now;
     return state.index;
   }
-  building ??= loadDocs().then((docs) => {
-    const index = new SearchIndex(docs);
-    state = { index, fingerprint: fp, checkedAt: Date.now() };
-    return index;
-  }).finally(() => { building = null; });
+  building ??= loadDocs()
+    .then((docs) => {
+      const index = new SearchIndex(docs);
+      state = { index, fingerprint: fp, checkedAt: Date.now() };
+      return index;
+    })
+    .finally(() => {
+      building = null;
+    });
   return building;
 }
 
@@ -62,13 +77,30 @@ export async function searchLibrary(query: SearchQuery): Promise<SearchResultDto
     const d = doc as IndexedSpec;
     let group = groups.get(d.modelId);
     if (!group) {
-      group = { model: { id: d.modelId, make: { id: d.makeId, name: d.make }, name: d.model, yearFrom: d.yearFrom, yearTo: d.yearTo, variant: d.variant }, hits: [] };
+      group = {
+        model: {
+          id: d.modelId,
+          make: { id: d.makeId, name: d.make },
+          name: d.model,
+          yearFrom: d.yearFrom,
+          yearTo: d.yearTo,
+          variant: d.variant,
+        },
+        hits: [],
+      };
       groups.set(d.modelId, group);
     }
     group.hits.push({
-      specId: d.specId, component: d.component, parameter: d.parameter, quantityKind: d.quantityKind,
-      min: d.min, nominal: d.nominal, max: d.max, unit: d.unit,
-      display: formatRange(d.min, d.nominal, d.max, d.unit as CanonicalUnit), score: Math.round(score * 1000) / 1000,
+      specId: d.specId,
+      component: d.component,
+      parameter: d.parameter,
+      quantityKind: d.quantityKind,
+      min: d.min,
+      nominal: d.nominal,
+      max: d.max,
+      unit: d.unit,
+      display: formatRange(d.min, d.nominal, d.max, d.unit as CanonicalUnit),
+      score: Math.round(score * 1000) / 1000,
     });
   }
   return { query: query.q, total, groups: [...groups.values()] };

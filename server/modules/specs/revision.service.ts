@@ -2,11 +2,11 @@
  * A spec's revision history with field diffs, and reverting to one revision's values
  * (written as a new revision: history is append-only).
  */
-import type { RevertSpecBody, RevisionDiffDto, RevisionListDto } from '../../../lib/contracts/curation';
-import type { SpecDetailDto } from '../../../lib/contracts/library';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
-import type { Actor } from '../../auth/actor';
+import type { RevertSpecBody, RevisionDiffDto, RevisionListDto } from '@/lib/contracts/curation';
+import type { SpecDetailDto } from '@/lib/contracts/library';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
+import type { Actor } from '@/server/auth/actor';
 import { markLibraryChanged } from '../search/search.service';
 import { Spec } from './spec.entity';
 import { SpecRevision } from './spec-revision.entity';
@@ -16,13 +16,26 @@ import { getSpec } from './spec.service';
 
 /** Newest first, each with its changes against the revision before it. */
 export async function listRevisions(specId: number): Promise<RevisionListDto> {
-  const spec = await AppDataSource.getRepository(Spec).findOne({ where: { id: specId }, select: { id: true, version: true } });
+  const spec = await AppDataSource.getRepository(Spec).findOne({
+    where: { id: specId },
+    select: { id: true, version: true },
+  });
   if (!spec) throw AppError.notFound('spec', specId);
-  const revisions = await AppDataSource.getRepository(SpecRevision).find({ where: { specId }, order: { version: 'ASC' } });
+  const revisions = await AppDataSource.getRepository(SpecRevision).find({
+    where: { specId },
+    order: { version: 'ASC' },
+  });
   const withDiffs = revisions.map((r, i): RevisionDiffDto => ({
-    id: r.id, version: r.version, origin: r.origin, originRef: r.originRef, authorName: r.authorName, reason: r.reason,
-    createdAt: r.createdAt.toISOString(), changedFields: r.changedFields,
-    changes: diffSnapshots(i === 0 ? null : revisions[i - 1].snapshot, r.snapshot), snapshot: r.snapshot,
+    id: r.id,
+    version: r.version,
+    origin: r.origin,
+    originRef: r.originRef,
+    authorName: r.authorName,
+    reason: r.reason,
+    createdAt: r.createdAt.toISOString(),
+    changedFields: r.changedFields,
+    changes: diffSnapshots(i === 0 ? null : revisions[i - 1].snapshot, r.snapshot),
+    snapshot: r.snapshot,
   }));
   return { specId, version: spec.version, revisions: withDiffs.reverse() };
 }
@@ -41,13 +54,28 @@ export async function revertSpec(specId: number, body: RevertSpecBody, actor: Ac
     const { spec, source } = await lockSpec(m, specId, body.version);
     const s = revision.snapshot;
     const values: SpecValues = {
-      parameter: s.parameter ?? spec.parameter, min: s.min ?? null, nominal: s.nominal ?? null, max: s.max ?? null,
-      unit: s.unit ?? spec.unit, refTempC: s.refTempC ?? null, material: s.material ?? spec.material,
-      testPoints: s.testPoints ?? null, conditions: s.conditions ?? null, notes: s.notes ?? null,
-      sourceId: s.sourceId ?? null, sourcePage: s.sourcePage ?? null, status: s.status ?? spec.status,
+      parameter: s.parameter ?? spec.parameter,
+      min: s.min ?? null,
+      nominal: s.nominal ?? null,
+      max: s.max ?? null,
+      unit: s.unit ?? spec.unit,
+      refTempC: s.refTempC ?? null,
+      material: s.material ?? spec.material,
+      testPoints: s.testPoints ?? null,
+      conditions: s.conditions ?? null,
+      notes: s.notes ?? null,
+      sourceId: s.sourceId ?? null,
+      sourcePage: s.sourcePage ?? null,
+      status: s.status ?? spec.status,
     };
     checkValues(values);
-    return writeSpecChange(m, spec, source, { values, actor, reason: body.reason, origin: 'revert', originRef: `revision #${revision.id}` });
+    return writeSpecChange(m, spec, source, {
+      values,
+      actor,
+      reason: body.reason,
+      origin: 'revert',
+      originRef: `revision #${revision.id}`,
+    });
   });
   if (changed) markLibraryChanged();
   return getSpec(specId);

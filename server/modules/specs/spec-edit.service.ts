@@ -4,12 +4,12 @@
  * (origin 'edit', the editor as author, the changed fields and the full snapshot).
  */
 import type { EntityManager } from 'typeorm';
-import type { CreateSpecBody, UpdateSpecBody } from '../../../lib/contracts/curation';
-import type { SpecDetailDto } from '../../../lib/contracts/library';
-import { defaultMaterial } from '../../../lib/csv/plausibility';
-import { parseUnit } from '../../../lib/units';
-import { AppError } from '../../errors/app-error';
-import type { Actor } from '../../auth/actor';
+import type { CreateSpecBody, UpdateSpecBody } from '@/lib/contracts/curation';
+import type { SpecDetailDto } from '@/lib/contracts/library';
+import { defaultMaterial } from '@/lib/csv/plausibility';
+import { parseUnit } from '@/lib/units';
+import { AppError } from '@/server/errors/app-error';
+import type { Actor } from '@/server/auth/actor';
 import { foldKey } from '../library/keys';
 import { markLibraryChanged } from '../search/search.service';
 import { Spec } from './spec.entity';
@@ -24,25 +24,50 @@ const orNull = (s: string) => s || null;
 
 /** Inserts a new spec and its first revision; corrections pass their own origin. */
 export async function insertNewSpec(
-  m: EntityManager, b: CreateSpecBody, actor: Actor,
+  m: EntityManager,
+  b: CreateSpecBody,
+  actor: Actor,
   from: { origin: 'edit' | 'correction'; originRef: string | null } = { origin: 'edit', originRef: null },
 ): Promise<number> {
   const componentId = await ensureComponent(m, b);
   const existing = await m.getRepository(Spec).findOneBy({ componentId, parameterKey: foldKey(b.parameter) });
-  if (existing) throw new StaleSpec(existing.id, `This component already has a spec for '${existing.parameter}' (spec ${existing.id}); edit that one instead.`);
+  if (existing)
+    throw new StaleSpec(
+      existing.id,
+      `This component already has a spec for '${existing.parameter}' (spec ${existing.id}); edit that one instead.`,
+    );
   const sourceId = await ensureSource(m, b.source);
   const kind = parseUnit(b.unit)!.kind;
   const values: SpecValues = {
-    parameter: b.parameter, min: b.min, nominal: b.nominal, max: b.max, unit: b.unit, refTempC: b.refTempC,
-    material: b.material ?? defaultMaterial(b.parameter, kind), testPoints: orNull(b.testPoints),
-    conditions: orNull(b.conditions), notes: orNull(b.notes), sourceId, sourcePage: b.source.page, status: b.status,
+    parameter: b.parameter,
+    min: b.min,
+    nominal: b.nominal,
+    max: b.max,
+    unit: b.unit,
+    refTempC: b.refTempC,
+    material: b.material ?? defaultMaterial(b.parameter, kind),
+    testPoints: orNull(b.testPoints),
+    conditions: orNull(b.conditions),
+    notes: orNull(b.notes),
+    sourceId,
+    sourcePage: b.source.page,
+    status: b.status,
   };
-  const { identifiers } = await m.getRepository(Spec).insert({ ...values, componentId, parameterKey: foldKey(b.parameter), quantityKind: kind, version: 1 });
+  const { identifiers } = await m
+    .getRepository(Spec)
+    .insert({ ...values, componentId, parameterKey: foldKey(b.parameter), quantityKind: kind, version: 1 });
   const id = Number(identifiers[0].id);
   const source = await m.getRepository(Source).findOneByOrFail({ id: sourceId });
   await m.getRepository(SpecRevision).insert({
-    specId: id, version: 1, snapshot: snapshotOfSpec(values, source), changedFields: ['created'],
-    authorId: actor.id, authorName: actor.name, reason: b.reason, origin: from.origin, originRef: from.originRef,
+    specId: id,
+    version: 1,
+    snapshot: snapshotOfSpec(values, source),
+    changedFields: ['created'],
+    authorId: actor.id,
+    authorName: actor.name,
+    reason: b.reason,
+    origin: from.origin,
+    originRef: from.originRef,
   });
   return id;
 }
@@ -50,7 +75,8 @@ export async function insertNewSpec(
 export async function createSpec(body: CreateSpecBody, actor: Actor): Promise<SpecDetailDto> {
   const id = await inSpecTransaction((m) => insertNewSpec(m, body, actor)).catch((err) => {
     const code = (err as { driverError?: { code?: string } }).driverError?.code;
-    if (code === 'ER_DUP_ENTRY') throw AppError.conflict('The same spec was created by someone else a moment ago; load it and edit that one.');
+    if (code === 'ER_DUP_ENTRY')
+      throw AppError.conflict('The same spec was created by someone else a moment ago; load it and edit that one.');
     throw err;
   });
   markLibraryChanged();
@@ -59,14 +85,23 @@ export async function createSpec(body: CreateSpecBody, actor: Actor): Promise<Sp
 
 /** The spec an edit would leave: the body's fields over the current ones. */
 function merge(spec: Spec, b: UpdateSpecBody, sourceId: number | null): SpecValues {
-  const pick = <K extends keyof SpecValues>(key: K, value: SpecValues[K] | undefined): SpecValues[K] => (value === undefined ? spec[key] : value);
+  const pick = <K extends keyof SpecValues>(key: K, value: SpecValues[K] | undefined): SpecValues[K] =>
+    value === undefined ? spec[key] : value;
   const text = (value: string | undefined, current: string | null) => (value === undefined ? current : orNull(value));
   return {
-    parameter: pick('parameter', b.parameter), min: pick('min', b.min), nominal: pick('nominal', b.nominal),
-    max: pick('max', b.max), unit: pick('unit', b.unit), refTempC: pick('refTempC', b.refTempC),
-    material: pick('material', b.material), testPoints: text(b.testPoints, spec.testPoints),
-    conditions: text(b.conditions, spec.conditions), notes: text(b.notes, spec.notes),
-    sourceId, sourcePage: b.source ? b.source.page : spec.sourcePage, status: pick('status', b.status),
+    parameter: pick('parameter', b.parameter),
+    min: pick('min', b.min),
+    nominal: pick('nominal', b.nominal),
+    max: pick('max', b.max),
+    unit: pick('unit', b.unit),
+    refTempC: pick('refTempC', b.refTempC),
+    material: pick('material', b.material),
+    testPoints: text(b.testPoints, spec.testPoints),
+    conditions: text(b.conditions, spec.conditions),
+    notes: text(b.notes, spec.notes),
+    sourceId,
+    sourcePage: b.source ? b.source.page : spec.sourcePage,
+    status: pick('status', b.status),
   };
 }
 

@@ -5,10 +5,21 @@ export type RevisionOrigin = 'edit' | 'import' | 'correction' | 'revert';
 
 /** The values of a spec as one revision left them (append-only history). */
 export type SpecSnapshot = {
-  parameter: string; min: number | null; nominal: number | null; max: number | null; unit: string;
-  refTempC: number | null; material: 'copper' | 'none'; testPoints: string | null; conditions: string | null;
-  notes: string | null; sourceId: number | null; sourceTitle: string | null; sourceEdition: string | null;
-  sourcePage: string | null; status: 'published' | 'draft';
+  parameter: string;
+  min: number | null;
+  nominal: number | null;
+  max: number | null;
+  unit: string;
+  refTempC: number | null;
+  material: 'copper' | 'none';
+  testPoints: string | null;
+  conditions: string | null;
+  notes: string | null;
+  sourceId: number | null;
+  sourceTitle: string | null;
+  sourceEdition: string | null;
+  sourcePage: string | null;
+  status: 'published' | 'draft';
 };
 
 @Entity({ name: 'spec_revisions' })

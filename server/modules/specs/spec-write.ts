@@ -5,11 +5,11 @@
  * nothing is silently overwritten.
  */
 import type { EntityManager } from 'typeorm';
-import { specValueIssues } from '../../../lib/contracts/curation';
-import { parseUnit } from '../../../lib/units';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
-import type { Actor } from '../../auth/actor';
+import { specValueIssues } from '@/lib/contracts/curation';
+import { parseUnit } from '@/lib/units';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
+import type { Actor } from '@/server/auth/actor';
 import { foldKey } from '../library/keys';
 import { Source } from '../library/source.entity';
 import { Spec } from './spec.entity';
@@ -18,11 +18,29 @@ import { diffSnapshots, snapshotOfSpec } from './spec-snapshot';
 import { getSpec } from './spec.service';
 
 /** The values a write sets (the component and identity of a spec never change). */
-export type SpecValues = Pick<Spec, 'parameter' | 'min' | 'nominal' | 'max' | 'unit' | 'refTempC' | 'material' | 'testPoints' | 'conditions' | 'notes' | 'sourceId' | 'sourcePage' | 'status'>;
+export type SpecValues = Pick<
+  Spec,
+  | 'parameter'
+  | 'min'
+  | 'nominal'
+  | 'max'
+  | 'unit'
+  | 'refTempC'
+  | 'material'
+  | 'testPoints'
+  | 'conditions'
+  | 'notes'
+  | 'sourceId'
+  | 'sourcePage'
+  | 'status'
+>;
 
 /** Thrown inside a transaction; becomes 409 with the current spec once it has rolled back. */
 export class StaleSpec extends Error {
-  constructor(readonly specId: number, message: string) {
+  constructor(
+    readonly specId: number,
+    message: string,
+  ) {
     super(message);
   }
 }
@@ -33,17 +51,25 @@ export async function inSpecTransaction<T>(fn: (m: EntityManager) => Promise<T>)
   } catch (err) {
     if (err instanceof StaleSpec) throw AppError.conflict(err.message, { current: await getSpec(err.specId) });
     const code = (err as { driverError?: { code?: string } }).driverError?.code;
-    if (code === 'ER_LOCK_DEADLOCK' || code === 'ER_LOCK_WAIT_TIMEOUT') throw AppError.conflict('Someone else is saving this spec right now. Load it again and retry.');
+    if (code === 'ER_LOCK_DEADLOCK' || code === 'ER_LOCK_WAIT_TIMEOUT')
+      throw AppError.conflict('Someone else is saving this spec right now. Load it again and retry.');
     throw err;
   }
 }
 
 /** Locks the spec row for this transaction and checks the version the write is based on. */
-export async function lockSpec(m: EntityManager, id: number, version: number): Promise<{ spec: Spec; source: Source | null }> {
+export async function lockSpec(
+  m: EntityManager,
+  id: number,
+  version: number,
+): Promise<{ spec: Spec; source: Source | null }> {
   const spec = await m.getRepository(Spec).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
   if (!spec) throw AppError.notFound('spec', id);
   if (spec.version !== version) {
-    throw new StaleSpec(id, `Spec ${id} has changed since version ${version} (it is now at version ${spec.version}). Nothing was saved; review the current values and apply your change again.`);
+    throw new StaleSpec(
+      id,
+      `Spec ${id} has changed since version ${version} (it is now at version ${spec.version}). Nothing was saved; review the current values and apply your change again.`,
+    );
   }
   const source = spec.sourceId === null ? null : await m.getRepository(Source).findOneBy({ id: spec.sourceId });
   return { spec, source };
@@ -59,7 +85,10 @@ async function checkParameterFree(m: EntityManager, spec: Spec, parameter: strin
   const key = foldKey(parameter);
   if (key === spec.parameterKey) return;
   const other = await m.getRepository(Spec).findOneBy({ componentId: spec.componentId, parameterKey: key });
-  if (other) throw AppError.conflict(`This component already has a spec for '${other.parameter}' (spec ${other.id}).`, { specId: other.id });
+  if (other)
+    throw AppError.conflict(`This component already has a spec for '${other.parameter}' (spec ${other.id}).`, {
+      specId: other.id,
+    });
 }
 
 type Change = { values: SpecValues; actor: Actor; reason: string; origin: RevisionOrigin; originRef: string | null };
@@ -68,22 +97,42 @@ type Change = { values: SpecValues; actor: Actor; reason: string; origin: Revisi
  * Writes the change and its revision; returns false (and writes nothing) when the values
  * are the ones the spec already has.
  */
-export async function writeSpecChange(m: EntityManager, spec: Spec, source: Source | null, change: Change): Promise<boolean> {
+export async function writeSpecChange(
+  m: EntityManager,
+  spec: Spec,
+  source: Source | null,
+  change: Change,
+): Promise<boolean> {
   const { values } = change;
-  const nextSource = values.sourceId === source?.id ? source : values.sourceId === null ? null : await m.getRepository(Source).findOneBy({ id: values.sourceId });
+  const nextSource =
+    values.sourceId === source?.id
+      ? source
+      : values.sourceId === null
+        ? null
+        : await m.getRepository(Source).findOneBy({ id: values.sourceId });
   const after = snapshotOfSpec(values, nextSource);
   const changes = diffSnapshots(snapshotOfSpec(spec, source), after);
   if (changes.length === 0) return false;
   await checkParameterFree(m, spec, values.parameter);
   const kind = parseUnit(values.unit)!.kind;
-  const result = await m.createQueryBuilder().update(Spec)
+  const result = await m
+    .createQueryBuilder()
+    .update(Spec)
     .set({ ...values, parameterKey: foldKey(values.parameter), quantityKind: kind, version: () => 'version + 1' })
     .where('id = :id AND version = :version', { id: spec.id, version: spec.version })
     .execute();
-  if (result.affected !== 1) throw new StaleSpec(spec.id, `Spec ${spec.id} changed while this edit was being saved. Nothing was saved.`);
+  if (result.affected !== 1)
+    throw new StaleSpec(spec.id, `Spec ${spec.id} changed while this edit was being saved. Nothing was saved.`);
   await m.getRepository(SpecRevision).insert({
-    specId: spec.id, version: spec.version + 1, snapshot: after, changedFields: changes.map((c) => c.field),
-    authorId: change.actor.id, authorName: change.actor.name, reason: change.reason, origin: change.origin, originRef: change.originRef,
+    specId: spec.id,
+    version: spec.version + 1,
+    snapshot: after,
+    changedFields: changes.map((c) => c.field),
+    authorId: change.actor.id,
+    authorName: change.actor.name,
+    reason: change.reason,
+    origin: change.origin,
+    originRef: change.originRef,
   });
   return true;
 }

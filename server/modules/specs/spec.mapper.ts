@@ -1,6 +1,6 @@
 /** Entities → DTOs. Services return DTOs, never entities. */
-import type { ComponentDto, ModelRefDto, RevisionDto, SourceDto, SpecSummaryDto } from '../../../lib/contracts/library';
-import { formatRange, type CanonicalUnit } from '../../../lib/units';
+import type { ComponentDto, ModelRefDto, RevisionDto, SourceDto, SpecSummaryDto } from '@/lib/contracts/library';
+import { formatRange, type CanonicalUnit } from '@/lib/units';
 import type { Spec } from './spec.entity';
 import type { SpecRevision } from './spec-revision.entity';
 import type { VehicleModel } from '../library/vehicle-model.entity';
@@ -9,16 +9,30 @@ import type { Source } from '../library/source.entity';
 
 export function toSpecSummary(s: Spec): SpecSummaryDto {
   return {
-    id: s.id, componentId: s.componentId, parameter: s.parameter, quantityKind: s.quantityKind,
-    min: s.min, nominal: s.nominal, max: s.max, unit: s.unit, refTempC: s.refTempC, material: s.material,
-    status: s.status, version: s.version, display: formatRange(s.min, s.nominal, s.max, s.unit as CanonicalUnit),
+    id: s.id,
+    componentId: s.componentId,
+    parameter: s.parameter,
+    quantityKind: s.quantityKind,
+    min: s.min,
+    nominal: s.nominal,
+    max: s.max,
+    unit: s.unit,
+    refTempC: s.refTempC,
+    material: s.material,
+    status: s.status,
+    version: s.version,
+    display: formatRange(s.min, s.nominal, s.max, s.unit as CanonicalUnit),
   };
 }
 
 export function toModelRef(m: VehicleModel): ModelRefDto {
   return {
-    id: m.id, make: { id: m.make.id, name: m.make.name }, name: m.name,
-    yearFrom: m.yearFrom, yearTo: m.yearTo, variant: m.variant,
+    id: m.id,
+    make: { id: m.make.id, name: m.make.name },
+    name: m.name,
+    yearFrom: m.yearFrom,
+    yearTo: m.yearTo,
+    variant: m.variant,
   };
 }
 
@@ -27,12 +41,27 @@ export function toComponent(c: Component): ComponentDto {
 }
 
 export function toSource(s: Source): SourceDto {
-  return { id: s.id, title: s.title, edition: s.edition, publisher: s.publisher, year: s.year, kind: s.kind, url: s.url };
+  return {
+    id: s.id,
+    title: s.title,
+    edition: s.edition,
+    publisher: s.publisher,
+    year: s.year,
+    kind: s.kind,
+    url: s.url,
+  };
 }
 
 export function toRevision(r: SpecRevision): RevisionDto {
   return {
-    id: r.id, version: r.version, changedFields: r.changedFields, authorName: r.authorName, reason: r.reason,
-    origin: r.origin, originRef: r.originRef, createdAt: r.createdAt.toISOString(), snapshot: r.snapshot,
+    id: r.id,
+    version: r.version,
+    changedFields: r.changedFields,
+    authorName: r.authorName,
+    reason: r.reason,
+    origin: r.origin,
+    originRef: r.originRef,
+    createdAt: r.createdAt.toISOString(),
+    snapshot: r.snapshot,
   };
 }

@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { IdParams } from '../../../lib/contracts/library';
-import { validate } from '../../middleware/validate';
+import { IdParams } from '@/lib/contracts/library';
+import { validate } from '@/server/middleware/validate';
 import { readSpec } from './spec.service';
 
 export const specRouter = Router();

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
-import type { Role } from '../../auth/roles';
+import type { Role } from '@/server/auth/roles';
 
 @Entity({ name: 'users' })
 export class User {

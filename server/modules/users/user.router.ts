@@ -1,8 +1,8 @@
 import { Router } from 'express';
-import { UpdateUserBody, UsersQuery } from '../../../lib/contracts/auth';
-import { IdParams } from '../../../lib/contracts/library';
-import { actorOf } from '../../auth/actor';
-import { validate } from '../../middleware/validate';
+import { UpdateUserBody, UsersQuery } from '@/lib/contracts/auth';
+import { IdParams } from '@/lib/contracts/library';
+import { actorOf } from '@/server/auth/actor';
+import { validate } from '@/server/middleware/validate';
 import { listUsers, updateUser, userAudit } from './user.service';
 
 export const userRouter = Router();

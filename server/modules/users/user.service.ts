@@ -1,9 +1,9 @@
 /** Admin work on accounts: list and search, change a role, disable or enable — each change recorded. */
 import { z } from 'zod';
-import type { UpdateUserBody, UserAuditDto, UserDto } from '../../../lib/contracts/auth';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
-import type { Actor } from '../../auth/actor';
+import type { UpdateUserBody, UserAuditDto, UserDto } from '@/lib/contracts/auth';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
+import type { Actor } from '@/server/auth/actor';
 import { revokeAllFor } from '../auth/session-tokens';
 import { User } from './user.entity';
 import { UserAudit } from './user-audit.entity';
@@ -11,19 +11,27 @@ import { toUserDto } from './user.mapper';
 
 export async function listUsers(q?: string): Promise<UserDto[]> {
   const qb = AppDataSource.getRepository(User).createQueryBuilder('u').orderBy('u.createdAt', 'DESC').limit(200);
-  if (q) qb.where('(u.emailKey LIKE :q OR u.displayName LIKE :q)', { q: `%${q.toLowerCase().replace(/[%_\\]/g, '\\$&')}%` });
+  if (q)
+    qb.where('(u.emailKey LIKE :q OR u.displayName LIKE :q)', { q: `%${q.toLowerCase().replace(/[%_\\]/g, '\\$&')}%` });
   return (await qb.getMany()).map(toUserDto);
 }
 
 export async function updateUser(id: number, body: z.infer<typeof UpdateUserBody>, actor: Actor): Promise<UserDto> {
   return AppDataSource.transaction(async (m) => {
-    const user = await m.getRepository(User).createQueryBuilder('u').setLock('pessimistic_write').where('u.id = :id', { id }).getOne();
+    const user = await m
+      .getRepository(User)
+      .createQueryBuilder('u')
+      .setLock('pessimistic_write')
+      .where('u.id = :id', { id })
+      .getOne();
     if (!user) throw AppError.notFound('user', id);
-    if (user.id === actor.id && (body.role !== undefined && body.role !== 'admin' || body.disabled)) {
+    if (user.id === actor.id && ((body.role !== undefined && body.role !== 'admin') || body.disabled)) {
       throw AppError.unprocessable('You cannot demote or disable your own account; ask another admin.');
     }
     const audit = (action: string, fromValue: string | null, toValue: string | null) =>
-      m.getRepository(UserAudit).insert({ userId: id, actorId: actor.id, actorName: actor.name, action, fromValue, toValue });
+      m
+        .getRepository(UserAudit)
+        .insert({ userId: id, actorId: actor.id, actorName: actor.name, action, fromValue, toValue });
     if (body.role !== undefined && body.role !== user.role) {
       await audit('role_changed', user.role, body.role);
       user.role = body.role;
@@ -38,6 +46,17 @@ export async function updateUser(id: number, body: z.infer<typeof UpdateUserBody
 }
 
 export async function userAudit(id: number): Promise<UserAuditDto[]> {
-  const rows = await AppDataSource.getRepository(UserAudit).find({ where: { userId: id }, order: { id: 'DESC' }, take: 100 });
-  return rows.map((r) => ({ id: r.id, action: r.action, fromValue: r.fromValue, toValue: r.toValue, actorName: r.actorName, createdAt: r.createdAt.toISOString() }));
+  const rows = await AppDataSource.getRepository(UserAudit).find({
+    where: { userId: id },
+    order: { id: 'DESC' },
+    take: 100,
+  });
+  return rows.map((r) => ({
+    id: r.id,
+    action: r.action,
+    fromValue: r.fromValue,
+    toValue: r.toValue,
+    actorName: r.actorName,
+    createdAt: r.createdAt.toISOString(),
+  }));
 }

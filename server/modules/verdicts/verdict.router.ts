@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { VerdictBody } from '../../../lib/contracts/verdicts';
-import { validate } from '../../middleware/validate';
+import { VerdictBody } from '@/lib/contracts/verdicts';
+import { validate } from '@/server/middleware/validate';
 import { evaluateVerdict } from './verdict.service';
 
 export const verdictRouter = Router();

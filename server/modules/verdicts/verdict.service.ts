@@ -3,16 +3,19 @@
  * id is read from the library, and the shared engine (lib/verdict) decides. Every
  * impossible input is refused with 422 naming its field.
  */
-import type { VerdictBody, VerdictResponse } from '../../../lib/contracts/verdicts';
-import { CANONICAL_UNITS, parseUnit, type CanonicalUnit } from '../../../lib/units';
-import { evaluateReading, VerdictInputError, type SpecLimits, type VerdictInput } from '../../../lib/verdict';
-import { AppDataSource } from '../../db/data-source';
-import { AppError } from '../../errors/app-error';
+import type { VerdictBody, VerdictResponse } from '@/lib/contracts/verdicts';
+import { CANONICAL_UNITS, parseUnit, type CanonicalUnit } from '@/lib/units';
+import { evaluateReading, VerdictInputError, type SpecLimits, type VerdictInput } from '@/lib/verdict';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
 import { Spec } from '../specs/spec.entity';
 
 function unitAt(text: string, field: string): CanonicalUnit {
   const parsed = parseUnit(text);
-  if (!parsed) throw AppError.unprocessable(`Unknown unit "${text}".`, [{ path: field, message: `Unknown unit "${text}". Use one of: ${CANONICAL_UNITS.join(', ')}, ohm, kohm, Mohm.` }]);
+  if (!parsed)
+    throw AppError.unprocessable(`Unknown unit "${text}".`, [
+      { path: field, message: `Unknown unit "${text}". Use one of: ${CANONICAL_UNITS.join(', ')}, ohm, kohm, Mohm.` },
+    ]);
   return parsed.unit;
 }
 
@@ -24,7 +27,14 @@ async function specLimits(body: VerdictBody): Promise<{ limits: SpecLimits; vers
   const spec = await AppDataSource.getRepository(Spec).findOneBy({ id: body.specId!, status: 'published' });
   if (!spec) throw AppError.notFound('spec', body.specId);
   return {
-    limits: { min: spec.min, nominal: spec.nominal, max: spec.max, unit: spec.unit as CanonicalUnit, refTempC: spec.refTempC, material: spec.material },
+    limits: {
+      min: spec.min,
+      nominal: spec.nominal,
+      max: spec.max,
+      unit: spec.unit as CanonicalUnit,
+      refTempC: spec.refTempC,
+      material: spec.material,
+    },
     version: spec.version,
   };
 }
@@ -36,8 +46,16 @@ export async function toVerdictInput(body: VerdictBody): Promise<{ input: Verdic
     spec: limits,
     reading: { value: body.reading.value, unit: unitAt(body.reading.unit, 'reading.unit') },
   };
-  if (body.leadResistance) input.leadResistance = { value: body.leadResistance.value, unit: unitAt(body.leadResistance.unit, 'leadResistance.unit') };
-  if (body.seriesResistance) input.seriesResistance = { ...body.seriesResistance, unit: unitAt(body.seriesResistance.unit, 'seriesResistance.unit') };
+  if (body.leadResistance)
+    input.leadResistance = {
+      value: body.leadResistance.value,
+      unit: unitAt(body.leadResistance.unit, 'leadResistance.unit'),
+    };
+  if (body.seriesResistance)
+    input.seriesResistance = {
+      ...body.seriesResistance,
+      unit: unitAt(body.seriesResistance.unit, 'seriesResistance.unit'),
+    };
   if (body.temperatureC !== undefined) input.temperatureC = body.temperatureC;
   if (body.meter) input.meter = { ...body.meter, unit: unitAt(body.meter.unit, 'meter.unit') };
   return { input, specVersion: version };
@@ -48,7 +66,8 @@ export function judge(input: VerdictInput) {
   try {
     return evaluateReading(input);
   } catch (err) {
-    if (err instanceof VerdictInputError) throw AppError.unprocessable(err.message, [{ path: err.field, message: err.message }]);
+    if (err instanceof VerdictInputError)
+      throw AppError.unprocessable(err.message, [{ path: err.field, message: err.message }]);
     throw err;
   }
 }
