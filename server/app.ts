@@ -19,7 +19,7 @@ import { specEditRouter } from './modules/specs/spec-edit.router';
 import { importRouter } from './modules/imports/import.router';
 import { exportRouter } from './modules/exports/export.router';
 import { verdictRouter } from './modules/verdicts/verdict.router';
-import { authRouter } from './modules/auth/auth.router';
+import { authRouter } from './modules/accounts/account.router';
 import { userRouter } from './modules/users/user.router';
 import { jobRouter } from './modules/jobs/job.router';
 import { correctionRouter } from './modules/corrections/correction.router';

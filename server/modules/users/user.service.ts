@@ -4,7 +4,7 @@ import type { UpdateUserBody, UserAuditDto, UserDto } from '@/lib/contracts/auth
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
-import { revokeAllFor } from '../auth/session-tokens';
+import { revokeAllFor } from '../accounts/session-tokens';
 import { User } from './user.entity';
 import { UserAudit } from './user-audit.entity';
 import { toUserDto } from './user.mapper';

@@ -4,7 +4,7 @@ import { config } from '@/server/config';
 import { AppError } from '@/server/errors/app-error';
 import { validate } from '@/server/middleware/validate';
 import { limiter } from '@/server/middleware/rate-limit';
-import * as auth from './auth.service';
+import * as auth from './account.service';
 
 export const REFRESH_COOKIE = 'sb_refresh';
 const MINUTE = 60_000;
