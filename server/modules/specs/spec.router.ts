@@ -1,10 +1,10 @@
 import { Router } from 'express';
 import { IdParams } from '@/lib/contracts/library';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/http/handler';
 import { readSpec } from './spec.service';
+
+const show = route({ params: IdParams }, ({ params }) => readSpec(params.id));
 
 export const specRouter = Router();
 
-specRouter.get('/:id', validate('params', IdParams), async (_req, res) => {
-  res.json(await readSpec(res.locals.params.id));
-});
+specRouter.get('/:id', show);
