@@ -5,11 +5,15 @@
  * otherwise). Invalid input answers 400 validation_failed problem details with
  * `errors: [{ path, message }]`, before the handler runs.
  *
- *   jobRouter.patch('/:id', route({ params: IdParams, body: UpdateJobBody },
- *     ({ user, params, body }) => updateJob(user, params.id, body)));
- *
- *   specRouter.post('/', route({ body: CreateSpecBody, use: [requireJson], created: true },
- *     ({ body, actor }) => createSpec(body, actor)));  // 201 + Location: /api/specs/<id>
+ *   const update = route({ params: IdParams, body: UpdateJobBody }, ({ user, params, body }) =>
+ *     updateJob(user, params.id, body),
+ *   );
+ *   // 201 + Location: /api/specs/<id>
+ *   const create = route({ use: [requireJson], body: CreateSpecBody, created: true }, ({ body, actor }) =>
+ *     createSpec(body, actor),
+ *   );
+ *   jobRouter.patch('/:id', update);   // routers: handlers named above, one line per route
+ *   specRouter.post('/', create);
  *
  * Order: params, then query, then the `use` middleware (requireJson, an upload), then body,
  * so a bad id is reported before a wrong content type. Rate limits and other middleware
