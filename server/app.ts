@@ -15,11 +15,10 @@ import { healthRouter } from './modules/health/health.router';
 import { modelRouter } from './modules/library/model.router';
 import { searchRouter } from './modules/search/search.router';
 import { specRouter } from './modules/specs/spec.router';
-import { specEditRouter } from './modules/specs/spec-edit.router';
 import { importRouter } from './modules/imports/import.router';
 import { exportRouter } from './modules/exports/export.router';
 import { verdictRouter } from './modules/verdicts/verdict.router';
-import { authRouter } from './modules/auth/auth.router';
+import { authRouter } from './modules/accounts/account.router';
 import { userRouter } from './modules/users/user.router';
 import { jobRouter } from './modules/jobs/job.router';
 import { correctionRouter } from './modules/corrections/correction.router';
@@ -34,7 +33,6 @@ export function apiRouters(): [string, express.Router][] {
     ['/search', searchRouter],
     ['/models', modelRouter],
     ['/specs', specRouter],
-    ['/specs', specEditRouter],
     ['/imports', importRouter],
     ['/exports', exportRouter],
     ['/verdicts', verdictRouter],

@@ -2,7 +2,7 @@ import type { Browser, Locator, Page } from 'playwright-core';
 import { AppDataSource } from '@/server/db/data-source';
 import { fakeSmtp } from '@/server/modules/mail/fake-smtp';
 import { resetTransport, startOutboxWorker, stopOutboxWorker } from '@/server/modules/mail/mailer';
-import { hashPassword } from '@/server/modules/auth/passwords';
+import { hashPassword } from '@/server/modules/accounts/passwords';
 import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
 import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';

@@ -4,7 +4,7 @@ import { DESKTOP, PHONE, SCREENSHOTS, screenshot, useWebApp } from '../helpers/b
 import { useTestDatabase } from '../helpers/test-db';
 import { AppDataSource } from '@/server/db/data-source';
 import { signAccessToken } from '@/server/auth/tokens';
-import { hashPassword } from '@/server/modules/auth/passwords';
+import { hashPassword } from '@/server/modules/accounts/passwords';
 import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
 import type { JobDetailDto } from '@/lib/contracts/jobs';

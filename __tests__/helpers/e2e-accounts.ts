@@ -4,7 +4,7 @@ import { AppDataSource } from '@/server/db/data-source';
 import type { Role } from '@/server/auth/roles';
 import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
-import { hashPassword } from '@/server/modules/auth/passwords';
+import { hashPassword } from '@/server/modules/accounts/passwords';
 
 export const E2E_PASSWORD = 'coil-pack-bench-2026';
 

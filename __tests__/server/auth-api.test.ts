@@ -3,7 +3,7 @@ import jwt from 'jsonwebtoken';
 import { createApp } from '@/server/app';
 import { AppDataSource } from '@/server/db/data-source';
 import { config } from '@/server/config';
-import { EmailToken } from '@/server/modules/auth/email-token.entity';
+import { EmailToken } from '@/server/modules/accounts/email-token.entity';
 import { sha256Hex } from '@/server/auth/tokens';
 import { useTestDatabase } from '../helpers/test-db';
 import { latestMailTo, tokenFromLink, useFakeMail } from '../helpers/mail';

@@ -6,8 +6,7 @@
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import { config } from '../config';
-import { AppDataSource } from '../db/data-source';
-import { User } from '../modules/users/user.entity';
+import { UserRepository } from '../modules/users/user.repository';
 import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER } from './tokens';
 
 passport.use(
@@ -22,8 +21,7 @@ passport.use(
     (payload: { sub?: string }, done) => {
       const id = Number(payload.sub);
       if (!Number.isInteger(id)) return done(null, false);
-      AppDataSource.getRepository(User)
-        .findOneBy({ id })
+      UserRepository.findById(id)
         .then((user) => {
           if (!user || user.disabledAt || !user.emailVerifiedAt) return done(null, false);
           done(null, { id: user.id, email: user.email, displayName: user.displayName, role: user.role });

@@ -7,7 +7,7 @@ import { AppDataSource } from '../data-source';
 import type { Role } from '@/server/auth/roles';
 import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
-import { hashPassword } from '@/server/modules/auth/passwords';
+import { hashPassword } from '@/server/modules/accounts/passwords';
 
 export const DEMO_ACCOUNTS: { email: string; displayName: string; role: Role }[] = [
   { email: 'admin@specbench.example', displayName: 'Ada Quenby (admin)', role: 'admin' },

@@ -1,11 +1,11 @@
 import { Router } from 'express';
 import { ExportQuery } from '@/lib/contracts/imports';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/http/handler';
 import { openSpecsExport } from './export.service';
 import { sendCsv } from './csv-download';
 
+const specsCsv = route({ query: ExportQuery }, async ({ query, res }) => sendCsv(res, await openSpecsExport(query)));
+
 export const exportRouter = Router();
 
-exportRouter.get('/specs.csv', validate('query', ExportQuery), async (_req, res) => {
-  await sendCsv(res, await openSpecsExport(res.locals.query));
-});
+exportRouter.get('/specs.csv', specsCsv);

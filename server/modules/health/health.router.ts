@@ -2,11 +2,10 @@ import { Router } from 'express';
 import type { HealthDto } from '@/lib/contracts/library';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
-
-export const healthRouter = Router();
+import { route } from '@/server/http/handler';
 
 /** Answers 200 only when the database answers; 503 otherwise, so a load balancer can tell. */
-healthRouter.get('/', async (_req, res) => {
+async function health(): Promise<HealthDto> {
   let specs: number;
   try {
     const [row] = await AppDataSource.query("SELECT COUNT(*) AS n FROM specs WHERE status = 'published'");
@@ -14,6 +13,9 @@ healthRouter.get('/', async (_req, res) => {
   } catch {
     throw AppError.unavailable();
   }
-  const body: HealthDto = { status: 'ok', database: 'up', specs, time: new Date().toISOString() };
-  res.json(body);
-});
+  return { status: 'ok', database: 'up', specs, time: new Date().toISOString() };
+}
+
+export const healthRouter = Router();
+
+healthRouter.get('/', route({}, health));

@@ -1,4 +1,15 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  UpdateDateColumn,
+} from 'typeorm';
+import type { User } from '../users/user.entity';
+import type { VehicleModel } from '../library/vehicle-model.entity';
 
 /** One customer's machine on one job: the readings taken belong to it. */
 @Entity({ name: 'jobs' })
@@ -10,9 +21,18 @@ export class Job {
   @Column({ name: 'owner_id', type: 'int' })
   ownerId: number;
 
+  // Relations for joins only: the schema has no foreign keys on jobs (createForeignKeyConstraints: false).
+  @ManyToOne('User', { createForeignKeyConstraints: false })
+  @JoinColumn({ name: 'owner_id' })
+  owner?: User;
+
   /** The library model, or null for a machine that is not in the library. */
   @Column({ name: 'model_id', type: 'int', nullable: true })
   modelId: number | null;
+
+  @ManyToOne('VehicleModel', { createForeignKeyConstraints: false, nullable: true })
+  @JoinColumn({ name: 'model_id' })
+  model?: VehicleModel | null;
 
   /** How the technician names the machine when it is not in the library (or a nickname). */
   @Column({ name: 'machine_label', type: 'varchar', length: 160, default: '' })

@@ -1,4 +1,6 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import type { Spec } from '../specs/spec.entity';
+import type { Job } from './job.entity';
 
 /**
  * One meter reading judged on a job: the inputs as given, the spec limits and version
@@ -15,8 +17,17 @@ export class Reading {
   @Column({ name: 'job_id', type: 'int' })
   jobId: number;
 
+  // Relations for joins only: the schema has no foreign keys on readings (createForeignKeyConstraints: false).
+  @ManyToOne('Job', { createForeignKeyConstraints: false })
+  @JoinColumn({ name: 'job_id' })
+  job?: Job;
+
   @Column({ name: 'spec_id', type: 'int', nullable: true })
   specId: number | null;
+
+  @ManyToOne('Spec', { createForeignKeyConstraints: false, nullable: true })
+  @JoinColumn({ name: 'spec_id' })
+  spec?: Spec | null;
 
   @Column({ name: 'spec_version', type: 'int', nullable: true })
   specVersion: number | null;

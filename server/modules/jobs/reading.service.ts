@@ -9,18 +9,16 @@ import type { ReadingBody, ReadingDto } from '@/lib/contracts/jobs';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import type { SignedInUser } from '@/server/auth/roles';
-import { Spec } from '../specs/spec.entity';
 import { judge, toVerdictInput } from '../verdicts/verdict.service';
-import { Job } from './job.entity';
-import { Reading } from './reading.entity';
+import type { Job } from './job.entity';
+import { ownJobOr404 } from './job-access';
 import { toReadingDto } from './job.mapper';
+import { JobRepository, ReadingRepository, specForReading } from './job.repository';
 
 export type AddedReading = { reading: ReadingDto; created: boolean };
 
 async function describeSpec(m: EntityManager, specId: number) {
-  const spec = await m
-    .getRepository(Spec)
-    .findOne({ where: { id: specId }, relations: { component: true, source: true } });
+  const spec = await specForReading(m, specId);
   if (!spec) throw AppError.notFound('spec', specId);
   const citation = spec.source
     ? `${spec.source.title}${spec.source.edition ? `, ${spec.source.edition}` : ''}${spec.sourcePage ? `, p. ${spec.sourcePage}` : ''}`
@@ -29,13 +27,7 @@ async function describeSpec(m: EntityManager, specId: number) {
 }
 
 async function lockOpenJob(m: EntityManager, user: SignedInUser, jobId: number): Promise<Job> {
-  const job = await m
-    .getRepository(Job)
-    .createQueryBuilder('j')
-    .setLock('pessimistic_write')
-    .where('j.id = :id', { id: jobId })
-    .getOne();
-  if (!job || (job.ownerId !== user.id && user.role !== 'admin')) throw AppError.notFound('job', jobId);
+  const job = ownJobOr404(user, await m.withRepository(JobRepository).lockById(jobId), jobId);
   if (job.status === 'closed') throw AppError.conflict('This job is closed. Reopen it to add readings.');
   return job;
 }
@@ -50,7 +42,8 @@ export async function addReading(
   try {
     return await AppDataSource.transaction(async (m) => {
       await lockOpenJob(m, user, jobId);
-      const existing = await m.getRepository(Reading).findOneBy({ jobId, idempotencyKey });
+      const readings = m.withRepository(ReadingRepository);
+      const existing = await readings.findByKey(jobId, idempotencyKey);
       if (existing) return { reading: toReadingDto(existing, existing.specVersion), created: false };
       const { input, specVersion } = await toVerdictInput(body);
       const result = judge(input);
@@ -58,7 +51,7 @@ export async function addReading(
         body.specId !== undefined
           ? await describeSpec(m, body.specId)
           : { label: body.label!, componentName: '', citation: null };
-      const saved = await m.getRepository(Reading).save({
+      const saved = await readings.save({
         jobId,
         specId: body.specId ?? null,
         specVersion: specVersion ?? null,
@@ -84,17 +77,18 @@ export async function addReading(
   } catch (err) {
     // Two copies of the same reading raced: the other one won; answer with it.
     if ((err as { code?: string; driverError?: { code?: string } }).driverError?.code !== 'ER_DUP_ENTRY') throw err;
-    const existing = await AppDataSource.getRepository(Reading).findOneByOrFail({ jobId, idempotencyKey });
+    const existing = await ReadingRepository.getByKey(jobId, idempotencyKey);
     return { reading: toReadingDto(existing, existing.specVersion), created: false };
   }
 }
 
 async function supersede(m: EntityManager, jobId: number, oldId: number, newId: number) {
-  const old = await m.getRepository(Reading).findOneBy({ id: oldId, jobId });
+  const readings = m.withRepository(ReadingRepository);
+  const old = await readings.findOnJob(oldId, jobId);
   if (!old)
     throw AppError.unprocessable(`Reading ${oldId} is not on this job.`, [
       { path: 'retakeOf', message: 'Not on this job' },
     ]);
   if (old.supersededBy !== null) throw AppError.conflict(`Reading ${oldId} has already been re-taken.`);
-  await m.getRepository(Reading).update(old.id, { supersededBy: newId });
+  await readings.markSuperseded(old.id, newId);
 }

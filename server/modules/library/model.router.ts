@@ -1,14 +1,12 @@
 import { Router } from 'express';
 import { IdParams, ModelsQuery } from '@/lib/contracts/library';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/http/handler';
 import { getModel, listModels } from './model.service';
+
+const list = route({ query: ModelsQuery }, ({ query }) => listModels(query));
+const show = route({ params: IdParams }, ({ params }) => getModel(params.id));
 
 export const modelRouter = Router();
 
-modelRouter.get('/', validate('query', ModelsQuery), async (_req, res) => {
-  res.json(await listModels(res.locals.query));
-});
-
-modelRouter.get('/:id', validate('params', IdParams), async (_req, res) => {
-  res.json(await getModel(res.locals.params.id));
-});
+modelRouter.get('/', list);
+modelRouter.get('/:id', show);

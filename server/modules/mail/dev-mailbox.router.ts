@@ -7,6 +7,7 @@
  */
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { AppError } from '@/server/errors/app-error';
+import { route } from '@/server/http/handler';
 import { fakeSmtp } from './fake-smtp';
 
 const LOOPBACK = /^(127\.\d{1,3}\.\d{1,3}\.\d{1,3}|::1|::ffff:127\.\d{1,3}\.\d{1,3}\.\d{1,3})$/;
@@ -31,11 +32,7 @@ const linkify = (s: string) => escape(s).replace(/(https?:\/\/[^\s<]+)/g, '<a hr
 export const devMailboxRouter = Router();
 devMailboxRouter.use(loopbackOnly);
 
-devMailboxRouter.get('/mailbox.json', (_req, res) => {
-  res.json(fakeSmtp.messages);
-});
-
-devMailboxRouter.get('/mailbox', (_req, res) => {
+function mailboxPage(): string {
   const items = fakeSmtp.messages
     .map(
       (m) => `
@@ -46,12 +43,20 @@ devMailboxRouter.get('/mailbox', (_req, res) => {
     </article>`,
     )
     .join('');
-  res.type('html').send(`<!doctype html><html lang="en"><head><meta charset="utf-8">
+  return `<!doctype html><html lang="en"><head><meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1"><title>Specbench development mailbox</title>
 <style>body{font-family:system-ui,sans-serif;max-width:760px;margin:0 auto;padding:16px;background:#f6f7f9;color:#17202a}
 article{background:#fff;border:1px solid #d5dae1;border-radius:12px;padding:12px 16px;margin:12px 0}
 h1{font-size:22px}h2{font-size:17px;margin:0 0 4px}.meta{color:#55606e;font-size:13px;margin:0 0 8px}
 pre{white-space:pre-wrap;font-family:inherit;font-size:15px}a{color:#1f4e79;word-break:break-all}</style></head>
 <body><h1>Development mailbox</h1><p>Messages caught by the local mail server (${fakeSmtp.messages.length}). Development only: shown to this machine alone, never in production.</p>
-${items || '<p>No messages yet.</p>'}</body></html>`);
+${items || '<p>No messages yet.</p>'}</body></html>`;
+}
+
+const mailboxJson = route({}, () => fakeSmtp.messages);
+const mailbox = route({}, ({ res }) => {
+  res.type('html').send(mailboxPage());
 });
+
+devMailboxRouter.get('/mailbox.json', mailboxJson);
+devMailboxRouter.get('/mailbox', mailbox);

@@ -8,12 +8,12 @@ import type { EntityManager } from 'typeorm';
 import { config } from '@/server/config';
 import { AppDataSource } from '@/server/db/data-source';
 import { fakeSmtp } from './fake-smtp';
-import { OutboxMessage } from './outbox-message.entity';
+import { OutboxRepository, type Mail } from './outbox.repository';
 
-export type Mail = { to: string; subject: string; text: string };
+export type { Mail };
 
 export async function enqueue(m: EntityManager, mail: Mail): Promise<void> {
-  await m.getRepository(OutboxMessage).insert({ ...mail, attempts: 0, nextAttemptAt: new Date() });
+  await m.withRepository(OutboxRepository).enqueue(mail);
 }
 
 let transporter: Transporter | null = null;
@@ -42,29 +42,16 @@ export const backoffMs = (attempts: number) => Math.min(600_000, 1000 * 2 ** att
 export async function deliverDue(limit = 20): Promise<number> {
   let sent = 0;
   await AppDataSource.transaction(async (m) => {
-    const due: OutboxMessage[] = await m
-      .getRepository(OutboxMessage)
-      .createQueryBuilder('o')
-      .where('o.sentAt IS NULL AND o.nextAttemptAt <= :now', { now: new Date() })
-      .orderBy('o.id', 'ASC')
-      .limit(limit)
-      .setLock('pessimistic_write')
-      .setOnLocked('skip_locked')
-      .getMany();
+    const outbox = m.withRepository(OutboxRepository);
+    const due = await outbox.claimDue(limit);
     for (const msg of due) {
       try {
         await transport().sendMail({ from: config.MAIL_FROM, to: msg.to, subject: msg.subject, text: msg.text });
-        await m
-          .getRepository(OutboxMessage)
-          .update(msg.id, { sentAt: new Date(), attempts: msg.attempts + 1, lastError: null });
+        await outbox.markSent(msg);
         sent += 1;
       } catch (err) {
-        const attempts = msg.attempts + 1;
-        await m.getRepository(OutboxMessage).update(msg.id, {
-          attempts,
-          lastError: String((err as Error).message).slice(0, 500),
-          nextAttemptAt: new Date(Date.now() + backoffMs(attempts)),
-        });
+        const error = String((err as Error).message).slice(0, 500);
+        await outbox.markFailed(msg, error, new Date(Date.now() + backoffMs(msg.attempts + 1)));
       }
     }
   });

@@ -1,10 +1,10 @@
 import { Router } from 'express';
 import { SearchQuery } from '@/lib/contracts/library';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/http/handler';
 import { searchLibrary } from './search.service';
+
+const search = route({ query: SearchQuery }, ({ query }) => searchLibrary(query));
 
 export const searchRouter = Router();
 
-searchRouter.get('/', validate('query', SearchQuery), async (_req, res) => {
-  res.json(await searchLibrary(res.locals.query));
-});
+searchRouter.get('/', search);

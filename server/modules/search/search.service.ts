@@ -3,20 +3,11 @@
  * and rebuilt when the library's fingerprint (spec count and last change) moves,
  * checked at most every few seconds, or at once after markLibraryChanged().
  */
-import type { SearchQuery, SearchResultDto, SearchGroupDto, QuantityKind } from '@/lib/contracts/library';
+import type { SearchQuery, SearchResultDto, SearchGroupDto } from '@/lib/contracts/library';
 import { formatRange, type CanonicalUnit } from '@/lib/units';
-import { AppDataSource } from '@/server/db/data-source';
-import { SearchIndex, type SearchDoc } from './search-index';
+import { SearchIndex } from './search-index';
+import { loadPublishedDocs, publishedFingerprint, type IndexedSpec } from './search.queries';
 import { markLibraryChanged, onLibraryChanged } from '../library/library-changes';
-
-type IndexedSpec = SearchDoc & {
-  makeId: number;
-  quantityKind: QuantityKind;
-  min: number | null;
-  nominal: number | null;
-  max: number | null;
-  unit: string;
-};
 
 const RECHECK_MS = 3000;
 let state: { index: SearchIndex; fingerprint: string; checkedAt: number } | null = null;
@@ -27,37 +18,15 @@ onLibraryChanged(() => {
   if (state) state.checkedAt = 0;
 });
 
-async function fingerprint(): Promise<string> {
-  const [row] = await AppDataSource.query(
-    "SELECT COUNT(*) AS n, MAX(updated_at) AS t FROM specs WHERE status = 'published'",
-  );
-  return `${row.n}|${row.t ? new Date(row.t).toISOString() : ''}`;
-}
-
-async function loadDocs(): Promise<IndexedSpec[]> {
-  const rows = await AppDataSource.query(`
-    SELECT s.id AS specId, vm.id AS modelId, mk.id AS makeId, mk.name AS make, vm.name AS model,
-           vm.year_from AS yearFrom, vm.year_to AS yearTo, vm.variant, c.name AS component, s.parameter,
-           s.quantity_kind AS quantityKind, s.min_value AS min, s.nominal_value AS nominal, s.max_value AS max, s.unit
-      FROM specs s JOIN components c ON c.id = s.component_id
-      JOIN vehicle_models vm ON vm.id = c.model_id JOIN makes mk ON mk.id = vm.make_id
-     WHERE s.status = 'published'`);
-  return rows.map((r: IndexedSpec) => ({
-    ...r,
-    yearFrom: Number(r.yearFrom),
-    yearTo: r.yearTo === null ? null : Number(r.yearTo),
-  }));
-}
-
 async function currentIndex(): Promise<SearchIndex> {
   const now = Date.now();
   if (state && now - state.checkedAt < RECHECK_MS) return state.index;
-  const fp = await fingerprint();
+  const fp = await publishedFingerprint();
   if (state && state.fingerprint === fp) {
     state.checkedAt = now;
     return state.index;
   }
-  building ??= loadDocs()
+  building ??= loadPublishedDocs()
     .then((docs) => {
       const index = new SearchIndex(docs);
       state = { index, fingerprint: fp, checkedAt: Date.now() };

@@ -1,10 +1,30 @@
 import { Router } from 'express';
+import { CreateSpecBody, RevertSpecBody, UpdateSpecBody } from '@/lib/contracts/curation';
 import { IdParams } from '@/lib/contracts/library';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/http/handler';
+import { requireJson } from '@/server/middleware/require-json';
 import { readSpec } from './spec.service';
+import { createSpec, updateSpec } from './spec-edit.service';
+import { listRevisions, revertSpec } from './revision.service';
 
+const show = route({ params: IdParams }, ({ params }) => readSpec(params.id));
+// Editors' writes and the revision history (route-rules.ts: editor and up).
+const create = route({ use: [requireJson], body: CreateSpecBody, created: true }, ({ body, actor }) =>
+  createSpec(body, actor),
+);
+const update = route({ params: IdParams, use: [requireJson], body: UpdateSpecBody }, ({ params, body, actor }) =>
+  updateSpec(params.id, body, actor),
+);
+const revisions = route({ params: IdParams }, ({ params }) => listRevisions(params.id));
+const revert = route({ params: IdParams, use: [requireJson], body: RevertSpecBody }, ({ params, body, actor }) =>
+  revertSpec(params.id, body, actor),
+);
+
+/** Published specs for everyone; editors' writes and revisions. Mounted at /api/specs. */
 export const specRouter = Router();
 
-specRouter.get('/:id', validate('params', IdParams), async (_req, res) => {
-  res.json(await readSpec(res.locals.params.id));
-});
+specRouter.get('/:id', show);
+specRouter.post('/', create);
+specRouter.patch('/:id', update);
+specRouter.get('/:id/revisions', revisions);
+specRouter.post('/:id/revert', revert);

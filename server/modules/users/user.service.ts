@@ -4,34 +4,26 @@ import type { UpdateUserBody, UserAuditDto, UserDto } from '@/lib/contracts/auth
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
-import { revokeAllFor } from '../auth/session-tokens';
-import { User } from './user.entity';
-import { UserAudit } from './user-audit.entity';
+import { revokeAllFor } from '../accounts/session-tokens';
 import { toUserDto } from './user.mapper';
+import { UserAuditRepository, UserRepository } from './user.repository';
 
 export async function listUsers(q?: string): Promise<UserDto[]> {
-  const qb = AppDataSource.getRepository(User).createQueryBuilder('u').orderBy('u.createdAt', 'DESC').limit(200);
-  if (q)
-    qb.where('(u.emailKey LIKE :q OR u.displayName LIKE :q)', { q: `%${q.toLowerCase().replace(/[%_\\]/g, '\\$&')}%` });
-  return (await qb.getMany()).map(toUserDto);
+  return (await UserRepository.search(q)).map(toUserDto);
 }
 
 export async function updateUser(id: number, body: z.infer<typeof UpdateUserBody>, actor: Actor): Promise<UserDto> {
   return AppDataSource.transaction(async (m) => {
-    const user = await m
-      .getRepository(User)
-      .createQueryBuilder('u')
-      .setLock('pessimistic_write')
-      .where('u.id = :id', { id })
-      .getOne();
+    const users = m.withRepository(UserRepository);
+    const user = await users.lockById(id);
     if (!user) throw AppError.notFound('user', id);
     if (user.id === actor.id && ((body.role !== undefined && body.role !== 'admin') || body.disabled)) {
       throw AppError.unprocessable('You cannot demote or disable your own account; ask another admin.');
     }
     const audit = (action: string, fromValue: string | null, toValue: string | null) =>
       m
-        .getRepository(UserAudit)
-        .insert({ userId: id, actorId: actor.id, actorName: actor.name, action, fromValue, toValue });
+        .withRepository(UserAuditRepository)
+        .record({ userId: id, actorId: actor.id, actorName: actor.name, action, fromValue, toValue });
     if (body.role !== undefined && body.role !== user.role) {
       await audit('role_changed', user.role, body.role);
       user.role = body.role;
@@ -41,16 +33,12 @@ export async function updateUser(id: number, body: z.infer<typeof UpdateUserBody
       user.disabledAt = body.disabled ? new Date() : null;
       if (body.disabled) await revokeAllFor(m, id);
     }
-    return toUserDto(await m.getRepository(User).save(user));
+    return toUserDto(await users.save(user));
   });
 }
 
 export async function userAudit(id: number): Promise<UserAuditDto[]> {
-  const rows = await AppDataSource.getRepository(UserAudit).find({
-    where: { userId: id },
-    order: { id: 'DESC' },
-    take: 100,
-  });
+  const rows = await UserAuditRepository.latestFor(id);
   return rows.map((r) => ({
     id: r.id,
     action: r.action,

@@ -1,10 +1,10 @@
 import { Router } from 'express';
 import { VerdictBody } from '@/lib/contracts/verdicts';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/http/handler';
 import { evaluateVerdict } from './verdict.service';
+
+const evaluate = route({ body: VerdictBody }, ({ body }) => evaluateVerdict(body));
 
 export const verdictRouter = Router();
 
-verdictRouter.post('/', validate('body', VerdictBody), async (_req, res) => {
-  res.json(await evaluateVerdict(res.locals.body));
-});
+verdictRouter.post('/', evaluate);

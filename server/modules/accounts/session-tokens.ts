@@ -1,11 +1,10 @@
 /** Refresh-token families: issue, rotate (detecting reuse), revoke. */
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import { IsNull } from 'typeorm';
 import { config } from '@/server/config';
 import { AppError } from '@/server/errors/app-error';
 import { randomToken, sha256Hex } from '@/server/auth/tokens';
-import { RefreshToken } from './refresh-token.entity';
+import { RefreshTokenRepository } from './token.repository';
 
 export async function issueRefreshToken(
   m: EntityManager,
@@ -13,7 +12,7 @@ export async function issueRefreshToken(
   familyId: string = randomUUID(),
 ): Promise<string> {
   const token = randomToken();
-  await m.getRepository(RefreshToken).insert({
+  await m.withRepository(RefreshTokenRepository).insert({
     userId,
     familyId,
     tokenHash: sha256Hex(token),
@@ -23,11 +22,11 @@ export async function issueRefreshToken(
 }
 
 export async function revokeFamily(m: EntityManager, familyId: string) {
-  await m.getRepository(RefreshToken).update({ familyId, revokedAt: IsNull() }, { revokedAt: new Date() });
+  await m.withRepository(RefreshTokenRepository).revokeFamily(familyId);
 }
 
 export async function revokeAllFor(m: EntityManager, userId: number) {
-  await m.getRepository(RefreshToken).update({ userId, revokedAt: IsNull() }, { revokedAt: new Date() });
+  await m.withRepository(RefreshTokenRepository).revokeAllFor(userId);
 }
 
 /**
@@ -41,12 +40,8 @@ export type Rotation = { ok: true; userId: number; token: string } | { ok: false
 
 /** Returns instead of throwing, so a revocation commits before the caller answers 401. */
 export async function rotateRefreshToken(m: EntityManager, token: string): Promise<Rotation> {
-  const repo = m.getRepository(RefreshToken);
-  const row = await repo
-    .createQueryBuilder('r')
-    .setLock('pessimistic_write')
-    .where('r.tokenHash = :h', { h: sha256Hex(token) })
-    .getOne();
+  const repo = m.withRepository(RefreshTokenRepository);
+  const row = await repo.lockByHash(sha256Hex(token));
   if (!row || row.revokedAt || row.expiresAt.getTime() <= Date.now()) {
     return { ok: false, error: new AppError(401, 'session_ended', 'Your session has ended. Sign in again.') };
   }
@@ -66,11 +61,11 @@ export async function rotateRefreshToken(m: EntityManager, token: string): Promi
       ),
     };
   }
-  await repo.update(row.id, { replacedAt: new Date() });
+  await repo.markReplaced(row.id);
   return { ok: true, userId: row.userId, token: await issueRefreshToken(m, row.userId, row.familyId) };
 }
 
 export async function familyOf(m: EntityManager, token: string): Promise<string | null> {
-  const row = await m.getRepository(RefreshToken).findOneBy({ tokenHash: sha256Hex(token) });
+  const row = await m.withRepository(RefreshTokenRepository).findByHash(sha256Hex(token));
   return row?.familyId ?? null;
 }

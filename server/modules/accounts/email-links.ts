@@ -1,17 +1,16 @@
 /** Single-use e-mail links: create (hashed), consume (once, before expiry), and the messages. */
 import type { EntityManager } from 'typeorm';
-import { IsNull } from 'typeorm';
 import { config } from '@/server/config';
 import { AppError } from '@/server/errors/app-error';
 import { randomToken, sha256Hex } from '@/server/auth/tokens';
-import { EmailToken } from './email-token.entity';
+import { EmailTokenRepository } from './token.repository';
 
 const TTL_MS = { verify: 24 * 3_600_000, reset: 30 * 60_000 } as const;
 
 export async function createLink(m: EntityManager, userId: number, purpose: 'verify' | 'reset'): Promise<string> {
   const token = randomToken();
   await m
-    .getRepository(EmailToken)
+    .withRepository(EmailTokenRepository)
     .insert({ userId, purpose, tokenHash: sha256Hex(token), expiresAt: new Date(Date.now() + TTL_MS[purpose]) });
   const page = purpose === 'verify' ? 'verify' : 'reset';
   return `${config.appUrl}/${page}?token=${encodeURIComponent(token)}`;
@@ -19,20 +18,16 @@ export async function createLink(m: EntityManager, userId: number, purpose: 'ver
 
 /** Marks the link used and returns its user; a used, expired or unknown link is refused. */
 export async function consumeLink(m: EntityManager, token: string, purpose: 'verify' | 'reset'): Promise<number> {
-  const repo = m.getRepository(EmailToken);
-  const row = await repo
-    .createQueryBuilder('t')
-    .setLock('pessimistic_write')
-    .where('t.tokenHash = :h AND t.purpose = :p', { h: sha256Hex(token), p: purpose })
-    .getOne();
+  const repo = m.withRepository(EmailTokenRepository);
+  const row = await repo.lockByHash(sha256Hex(token), purpose);
   const what = purpose === 'verify' ? 'verification' : 'password reset';
   if (!row) throw new AppError(400, 'invalid_token', `This ${what} link is not valid. Ask for a new one.`);
   if (row.usedAt) throw new AppError(400, 'token_used', `This ${what} link has already been used. Ask for a new one.`);
   if (row.expiresAt.getTime() <= Date.now())
     throw new AppError(400, 'token_expired', `This ${what} link has expired. Ask for a new one.`);
-  await repo.update(row.id, { usedAt: new Date() });
+  await repo.markUsed(row.id);
   // Older links of the same kind stop working too.
-  await repo.update({ userId: row.userId, purpose, usedAt: IsNull() }, { usedAt: new Date() });
+  await repo.useUpAll(row.userId, purpose);
   return row.userId;
 }
 

@@ -9,8 +9,9 @@ import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import { signAccessToken } from '@/server/auth/tokens';
 import { enqueue } from '../mail/mailer';
-import { User } from '../users/user.entity';
+import type { User } from '../users/user.entity';
 import { emailKey, toUserDto } from '../users/user.mapper';
+import { UserRepository } from '../users/user.repository';
 import { consumeLink, createLink, existingAccountMail, resetMail, verifyMail } from './email-links';
 import { checkPasswordStrength, DUMMY_HASH, hashPassword, verifyPassword } from './passwords';
 import { familyOf, issueRefreshToken, revokeAllFor, revokeFamily, rotateRefreshToken } from './session-tokens';
@@ -26,9 +27,9 @@ export async function signUp(body: SignUpBody): Promise<void> {
   checkPasswordStrength(body.password, body.email);
   const passwordHash = await hashPassword(body.password);
   await AppDataSource.transaction(async (m) => {
-    const existing = await m.getRepository(User).findOneBy({ emailKey: emailKey(body.email) });
+    const existing = await m.withRepository(UserRepository).findByEmail(body.email);
     if (existing) return enqueue(m, existingAccountMail(existing.email));
-    const user = await m.getRepository(User).save({
+    const user = await m.withRepository(UserRepository).save({
       email: body.email.trim(),
       emailKey: emailKey(body.email),
       displayName: body.displayName,
@@ -42,13 +43,14 @@ export async function signUp(body: SignUpBody): Promise<void> {
 export async function verifyEmail(token: string): Promise<UserDto> {
   return AppDataSource.transaction(async (m) => {
     const userId = await consumeLink(m, token, 'verify');
-    await m.getRepository(User).update({ id: userId }, { emailVerifiedAt: new Date() });
-    return toUserDto(await m.getRepository(User).findOneByOrFail({ id: userId }));
+    const users = m.withRepository(UserRepository);
+    await users.update({ id: userId }, { emailVerifiedAt: new Date() });
+    return toUserDto(await users.getById(userId));
   });
 }
 
 export async function signIn(body: SignInBody): Promise<SessionResult> {
-  const user = await AppDataSource.getRepository(User).findOneBy({ emailKey: emailKey(body.email) });
+  const user = await UserRepository.findByEmail(body.email);
   const ok = await verifyPassword(body.password, user?.passwordHash ?? DUMMY_HASH);
   if (!user || !ok) throw new AppError(401, 'invalid_credentials', 'The e-mail address or the password is wrong.');
   if (user.disabledAt)
@@ -62,7 +64,7 @@ export async function refresh(token: string | undefined): Promise<SessionResult>
   if (!token) throw new AppError(401, 'session_ended', 'You are not signed in.');
   const rotation = await AppDataSource.transaction((m) => rotateRefreshToken(m, token));
   if (!rotation.ok) throw rotation.error;
-  const user = await AppDataSource.getRepository(User).findOneBy({ id: rotation.userId });
+  const user = await UserRepository.findById(rotation.userId);
   if (!user || user.disabledAt)
     throw new AppError(403, 'account_disabled', 'This account has been disabled. Ask an administrator.');
   return session(user, rotation.token);
@@ -78,7 +80,7 @@ export async function signOut(token: string | undefined): Promise<void> {
 
 export async function forgotPassword(email: string): Promise<void> {
   await AppDataSource.transaction(async (m) => {
-    const user = await m.getRepository(User).findOneBy({ emailKey: emailKey(email) });
+    const user = await m.withRepository(UserRepository).findByEmail(email);
     if (!user || user.disabledAt) return;
     await enqueue(m, resetMail(user.email, user.displayName, await createLink(m, user.id, 'reset')));
   });
@@ -88,18 +90,17 @@ export async function resetPassword(body: ResetBody): Promise<void> {
   const passwordHash = await hashPassword(body.password);
   await AppDataSource.transaction(async (m) => {
     const userId = await consumeLink(m, body.token, 'reset');
-    const user = await m.getRepository(User).findOneByOrFail({ id: userId });
+    const users = m.withRepository(UserRepository);
+    const user = await users.getById(userId);
     checkPasswordStrength(body.password, user.email);
     // The link proves the address, so it also counts as verification.
-    await m
-      .getRepository(User)
-      .update({ id: userId }, { passwordHash, emailVerifiedAt: user.emailVerifiedAt ?? new Date() });
+    await users.update({ id: userId }, { passwordHash, emailVerifiedAt: user.emailVerifiedAt ?? new Date() });
     await revokeAllFor(m, userId);
   });
 }
 
 export async function changePassword(userId: number, body: ChangePasswordBody): Promise<SessionResult> {
-  const user = await AppDataSource.getRepository(User).findOneByOrFail({ id: userId });
+  const user = await UserRepository.getById(userId);
   if (!(await verifyPassword(body.currentPassword, user.passwordHash))) {
     throw AppError.unprocessable('The current password is wrong.', [
       { path: 'currentPassword', message: 'Wrong password' },
@@ -108,7 +109,7 @@ export async function changePassword(userId: number, body: ChangePasswordBody): 
   checkPasswordStrength(body.newPassword, user.email);
   const passwordHash = await hashPassword(body.newPassword);
   const token = await AppDataSource.transaction(async (m) => {
-    await m.getRepository(User).update({ id: userId }, { passwordHash });
+    await m.withRepository(UserRepository).update({ id: userId }, { passwordHash });
     await revokeAllFor(m, userId);
     return issueRefreshToken(m, userId);
   });
@@ -120,5 +121,5 @@ export async function signOutEverywhere(userId: number): Promise<void> {
 }
 
 export async function currentUser(userId: number): Promise<UserDto> {
-  return toUserDto(await AppDataSource.getRepository(User).findOneByOrFail({ id: userId }));
+  return toUserDto(await UserRepository.getById(userId));
 }
