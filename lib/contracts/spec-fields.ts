@@ -8,7 +8,7 @@
  * The make, model, years, variant and component are not value fields: they place a spec
  * in the library (lib/csv/columns.ts IDENTITY_COLUMNS).
  */
-import type { CanonicalUnit, Material, SpecStatus } from './enums';
+import { MATERIALS, SPEC_STATUSES, type CanonicalUnit, type Material, type SpecStatus } from './enums';
 
 /** The values a write sets (the component and identity of a spec never change). */
 export type SpecValues = {
@@ -34,7 +34,7 @@ export type SpecSnapshot = SpecValues & { sourceTitle: string | null; sourceEdit
 export type SpecFieldKind = 'number' | 'text' | 'enum' | 'unit';
 
 /** What else a field takes part in (see FieldDef.flags). */
-type FieldFlag =
+export type FieldFlag =
   | 'snapshot' // in the revision snapshot and the history's diffs
   | 'imported' // compared by the import plan: a CSV row that differs here updates the spec
   | 'editable' // set directly by PATCH /api/specs/:id (the editor's form fields)
@@ -44,78 +44,92 @@ type FieldFlag =
   | 'csvLast' // written after every other CSV column (free text that closes a record)
   | 'csvEmptyIsNull'; // an empty CSV cell reads as null rather than ''
 
-type Place = {
+/** How a value is checked, in the CSV importer and the editor's request schemas alike. */
+export type FieldRule = {
+  /** Text: the most characters allowed. */
+  maxLength?: number;
+  /** Text: may span lines. */
+  multiline?: boolean;
+  /** Number: the lowest and highest value allowed, and the unit that follows them in messages. */
+  range?: readonly [number, number, string];
+  /** Enum: the values allowed. */
+  values?: readonly string[];
+};
+
+type Place<C extends string> = {
   /** Column in `specs` and in `import_batch_rows`; absent for the cited source's own fields. */
   column?: string;
   /** The `sources` column this field shows, for fields that live on the cited source. */
   sourceColumn?: 'title' | 'edition' | 'url';
   /** Column in the CSV import format; absent when the format does not carry the field. */
-  csv?: string;
+  csv?: C;
 };
 
-export type FieldDef<K extends string = string, F extends FieldFlag = FieldFlag> = {
+export type FieldDef<
+  K extends string = string,
+  F extends FieldFlag = FieldFlag,
+  Kind extends SpecFieldKind = SpecFieldKind,
+  C extends string | null = string | null,
+> = {
   /** Property name in SpecValues / the snapshot, the DTOs and the request bodies. */
   key: K;
   /** Plain name in diffs, previews, the conflict view and the review. */
   label: string;
-  kind: SpecFieldKind;
+  kind: Kind;
   column: string | null;
   sourceColumn: 'title' | 'edition' | 'url' | null;
-  csv: string | null;
+  csv: C;
   flags: readonly F[];
+  rule: FieldRule;
 };
 
-const field = <const K extends keyof SpecSnapshot | 'sourceUrl', const F extends FieldFlag>(
+const field = <
+  const K extends keyof SpecSnapshot | 'sourceUrl',
+  const Kind extends SpecFieldKind,
+  const F extends FieldFlag,
+  const C extends string = never,
+>(
   key: K,
   label: string,
-  kind: SpecFieldKind,
-  at: Place,
+  kind: Kind,
+  at: Place<C>,
   flags: readonly F[],
-): FieldDef<K, F> => ({
+  rule: FieldRule = {},
+): FieldDef<K, F, Kind, [C] extends [never] ? null : C> => ({
   key,
   label,
   kind,
   column: at.column ?? null,
   sourceColumn: at.sourceColumn ?? null,
-  csv: at.csv ?? null,
+  csv: (at.csv ?? null) as [C] extends [never] ? null : C,
   flags,
+  rule,
 });
 
 const ALL = ['snapshot', 'imported', 'editable', 'reviewed'] as const;
+const WINDING_TEMP = [-40, 200, ' °C'] as const;
+const LINE = { maxLength: 120 };
+const SOURCE_LINE = { maxLength: 200 };
+const PARAGRAPH = { maxLength: 1000, multiline: true };
 
 /** In the order the history, the diffs and the forms list them. */
+// prettier-ignore
 export const SPEC_FIELDS = [
-  field('parameter', 'Parameter', 'text', { column: 'parameter', csv: 'parameter' }, [
-    'snapshot',
-    'editable',
-    'required',
-    'csvRequired',
-  ]),
+  field('parameter', 'Parameter', 'text', { column: 'parameter', csv: 'parameter' }, ['snapshot', 'editable', 'required', 'csvRequired'], LINE),
   field('min', 'Minimum', 'number', { column: 'min_value', csv: 'min' }, ALL),
   field('nominal', 'Nominal', 'number', { column: 'nominal_value', csv: 'nominal' }, ALL),
   field('max', 'Maximum', 'number', { column: 'max_value', csv: 'max' }, ALL),
   field('unit', 'Unit', 'unit', { column: 'unit', csv: 'unit' }, [...ALL, 'required', 'csvRequired']),
-  field('refTempC', 'Reference °C', 'number', { column: 'ref_temp_c', csv: 'ref_temp_c' }, ALL),
-  field('material', 'Winding', 'enum', { column: 'material', csv: 'material' }, [...ALL, 'required']),
-  field('testPoints', 'Test points', 'text', { column: 'test_points', csv: 'test_points' }, ALL),
-  field('conditions', 'Conditions', 'text', { column: 'conditions', csv: 'conditions' }, ALL),
-  field('notes', 'Notes', 'text', { column: 'notes', csv: 'notes' }, ['snapshot', 'imported', 'editable', 'csvLast']),
-  field('sourceTitle', 'Source title', 'text', { sourceColumn: 'title', csv: 'source_title' }, [
-    'snapshot',
-    'imported',
-    'csvRequired',
-  ]),
-  field('sourceEdition', 'Source edition', 'text', { sourceColumn: 'edition', csv: 'source_edition' }, [
-    'snapshot',
-    'imported',
-  ]),
-  field('sourcePage', 'Source page', 'text', { column: 'source_page', csv: 'source_page' }, [
-    'snapshot',
-    'imported',
-    'csvRequired',
-  ]),
-  field('sourceUrl', 'Source link', 'text', { sourceColumn: 'url', csv: 'source_url' }, ['csvEmptyIsNull']),
-  field('status', 'Status', 'enum', { column: 'status' }, ['snapshot', 'editable', 'required']),
+  field('refTempC', 'Reference °C', 'number', { column: 'ref_temp_c', csv: 'ref_temp_c' }, ALL, { range: WINDING_TEMP }),
+  field('material', 'Winding', 'enum', { column: 'material', csv: 'material' }, [...ALL, 'required'], { values: MATERIALS }),
+  field('testPoints', 'Test points', 'text', { column: 'test_points', csv: 'test_points' }, ALL, PARAGRAPH),
+  field('conditions', 'Conditions', 'text', { column: 'conditions', csv: 'conditions' }, ALL, PARAGRAPH),
+  field('notes', 'Notes', 'text', { column: 'notes', csv: 'notes' }, ['snapshot', 'imported', 'editable', 'csvLast'], PARAGRAPH),
+  field('sourceTitle', 'Source title', 'text', { sourceColumn: 'title', csv: 'source_title' }, ['snapshot', 'imported', 'csvRequired'], SOURCE_LINE),
+  field('sourceEdition', 'Source edition', 'text', { sourceColumn: 'edition', csv: 'source_edition' }, ['snapshot', 'imported'], SOURCE_LINE),
+  field('sourcePage', 'Source page', 'text', { column: 'source_page', csv: 'source_page' }, ['snapshot', 'imported', 'csvRequired'], SOURCE_LINE),
+  field('sourceUrl', 'Source link', 'text', { sourceColumn: 'url', csv: 'source_url' }, ['csvEmptyIsNull'], { maxLength: 500 }),
+  field('status', 'Status', 'enum', { column: 'status' }, ['snapshot', 'editable', 'required'], { values: SPEC_STATUSES }),
 ];
 
 export type SpecField = (typeof SPEC_FIELDS)[number];
@@ -128,7 +142,7 @@ void everyFieldListed;
 
 /** The keys of the fields that carry `flag`, as a type. */
 export type KeysWith<Flag extends FieldFlag> = SpecField extends infer S
-  ? S extends FieldDef<infer K, infer F>
+  ? S extends FieldDef<infer K, infer F, SpecFieldKind, string | null>
     ? Flag extends F
       ? K
       : never
