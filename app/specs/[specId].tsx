@@ -15,7 +15,6 @@ import { Text } from '@/components/ui/text';
 import { ErrorState, LoadingState } from '@/components/ui/states';
 import { describeError } from '@/lib/api/describe-error';
 import { useSpecQuery } from '@/lib/hooks/use-library';
-import type { CanonicalUnit } from '@/lib/units';
 import { useIsWide } from '@/lib/theme/use-theme';
 
 export default function SpecCardScreen() {
@@ -46,7 +45,7 @@ export default function SpecCardScreen() {
           min: s.min,
           nominal: s.nominal,
           max: s.max,
-          unit: s.unit as CanonicalUnit,
+          unit: s.unit,
           refTempC: s.refTempC,
           material: s.material,
         }}

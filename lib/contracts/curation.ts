@@ -8,7 +8,9 @@
 import { z } from 'zod';
 import { parseUnit, type CanonicalUnit } from '../units';
 import { expectedKindForParameter } from '../csv/plausibility';
+import type { RevisionOrigin } from './enums';
 import type { SpecDetailDto } from './library';
+import type { SpecSnapshot } from './spec-fields';
 
 const CONTROL_CHARS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 
@@ -32,12 +34,12 @@ const year = (label: string) =>
 
 const unit = z.string({ error: 'unit is required' }).transform((s, ctx): CanonicalUnit => {
   const parsed = parseUnit(s);
-  if (!parsed)
-    ctx.addIssue({
-      code: 'custom',
-      message: `unit "${s}" is not recognised; use one of Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil)`,
-    });
-  return (parsed?.unit ?? s) as CanonicalUnit;
+  if (parsed) return parsed.unit;
+  ctx.addIssue({
+    code: 'custom',
+    message: `unit "${s}" is not recognised; use one of Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil)`,
+  });
+  return z.NEVER;
 });
 
 const url = z
@@ -205,7 +207,7 @@ export type FieldChangeDto = { field: string; before: string | number | null; af
 export type RevisionDiffDto = {
   id: number;
   version: number;
-  origin: 'edit' | 'import' | 'correction' | 'revert';
+  origin: RevisionOrigin;
   originRef: string | null;
   authorName: string;
   reason: string;
@@ -213,7 +215,7 @@ export type RevisionDiffDto = {
   changedFields: string[];
   /** Against the revision before this one; for the first revision, every field it set. */
   changes: FieldChangeDto[];
-  snapshot: Record<string, unknown>;
+  snapshot: Partial<SpecSnapshot>;
 };
 
 export type RevisionListDto = { specId: number; version: number; revisions: RevisionDiffDto[] };
