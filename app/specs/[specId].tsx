@@ -8,6 +8,7 @@ import { modelTitle } from '@/lib/format/model-title';
 import { RevisionHistory } from '@/components/curation/revision-history';
 import { EditSpecButton } from '@/components/curation/edit-spec-button';
 import { SafetyNotes } from '@/components/library/safety-notes';
+import { cautionCategories, isRestVoltage } from '@/lib/specs/classify';
 import { SpecValues } from '@/components/library/spec-values';
 import { Screen } from '@/components/ui/screen';
 import { TwoColumns } from '@/components/ui/two-columns';
@@ -38,7 +39,7 @@ export default function SpecCardScreen() {
   const s = spec.data;
   const check = (
     <>
-      <SafetyNotes component={s.component.name} parameter={s.parameter} />
+      <SafetyNotes categories={cautionCategories(s.component.name, s.parameter)} />
       <Calculator
         kind={s.quantityKind}
         spec={{
@@ -50,7 +51,7 @@ export default function SpecCardScreen() {
           material: s.material,
         }}
       />
-      {/rest voltage|open-circuit voltage/i.test(s.parameter) ? <BatteryCharge /> : null}
+      {isRestVoltage(s.parameter) ? <BatteryCharge /> : null}
     </>
   );
   const reference = (

@@ -2,12 +2,12 @@
  * Editors' spec writes (create, edit, revert) and revision history: request schemas shared
  * by the server (validation) and the client forms (types and field messages). The value
  * rules are the CSV importer's: units through lib/units parseUnit, the unit's kind must fit
- * the parameter (expectedKindForParameter), min ≤ nominal ≤ max, no negative resistance or
+ * the parameter (lib/specs/classify.ts expectedKind), min ≤ nominal ≤ max, no negative resistance or
  * length, the same length limits as the CSV columns.
  */
 import { z } from 'zod';
 import { parseUnit, type CanonicalUnit } from '../units';
-import { expectedKindForParameter } from '../csv/plausibility';
+import { expectedKind } from '../specs/classify';
 import type { RevisionOrigin } from './enums';
 import type { SpecDetailDto } from './library';
 import type { SpecSnapshot } from './spec-fields';
@@ -110,7 +110,7 @@ export function specValueIssues(v: CheckedValues): SpecValueIssue[] {
     issues.push({ path: 'nominal', message: `nominal ${nominal} is greater than max ${max}` });
   const parsed = parseUnit(v.unit);
   if (!parsed) return issues;
-  const needed = expectedKindForParameter(v.parameter);
+  const needed = expectedKind(v.parameter);
   if (needed && needed !== parsed.kind) {
     issues.push({
       path: 'unit',

@@ -16,7 +16,8 @@ import {
   type SpecCsvRow,
 } from './columns';
 import { unneutraliseCell } from './injection';
-import { defaultMaterial, expectedKindForParameter, plausibilityWarnings } from './plausibility';
+import { defaultMaterial, expectedKind } from '../specs/classify';
+import { plausibilityWarnings } from './plausibility';
 
 /** Cells are trimmed, and a neutralising ' added by our export is removed (see injection.ts). */
 export function cleanCell(value: string | undefined): string {
@@ -177,7 +178,7 @@ function crossCheck(r: RawRow, ctx: z.RefinementCtx<RawRow>) {
     issue('year_to', `year_to ${r.year_to} is before year_from ${r.year_from}`);
   }
   if (!r.unit) return;
-  const needed = expectedKindForParameter(r.parameter);
+  const needed = expectedKind(r.parameter);
   if (needed && needed !== r.unit.kind) {
     issue(
       'unit',

@@ -8,7 +8,7 @@ import type { CreateSpecBody, UpdateSpecBody } from '@/lib/contracts/curation';
 import type { SpecDetailDto } from '@/lib/contracts/library';
 import { EDITABLE_FIELDS, type SpecValues } from '@/lib/contracts/spec-fields';
 import { pickValues, snapshotOfSpec } from '@/lib/contracts/spec-snapshot';
-import { defaultMaterial } from '@/lib/csv/plausibility';
+import { defaultMaterial } from '@/lib/specs/classify';
 import { parseUnit } from '@/lib/units';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
