@@ -4,6 +4,7 @@ import { Calculator } from '@/components/calculator/calculator';
 import { LimitsForm } from '@/components/calculator/limits-form';
 import { QualitativeCheck } from '@/components/calculator/qualitative-check';
 import { SafetyNotes } from '@/components/library/safety-notes';
+import { cautionCategoriesForMode } from '@/lib/specs/classify';
 import { ChoiceRow } from '@/components/ui/choice-row';
 import { Screen } from '@/components/ui/screen';
 import { TwoColumns } from '@/components/ui/two-columns';
@@ -64,7 +65,7 @@ export default function StandaloneCalculatorScreen() {
                 onChangeCopper={setCopper}
               />
             )}
-            <SafetyNotes component={mode === 'voltage' ? 'charging battery' : 'ignition'} parameter="" />
+            <SafetyNotes categories={cautionCategoriesForMode(mode)} />
             {mode === 'voltage' ? <BatteryCharge /> : null}
           </>
         }

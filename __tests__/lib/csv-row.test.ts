@@ -1,4 +1,4 @@
-import { SpecCsvRowSchema, expectedKindForParameter, validateSpecRow, type SpecCsvColumn } from '@/lib/csv';
+import { SpecCsvRowSchema, validateSpecRow, type SpecCsvColumn } from '@/lib/csv';
 
 const VALID: Record<SpecCsvColumn, string> = {
   make: 'Kestrel Moto',
@@ -240,26 +240,5 @@ describe('lib/csv validateSpecRow plausibility warnings', () => {
         reason: expect.stringMatching(/is unusual for .*check the value and the unit/),
       }),
     );
-  });
-});
-
-describe('lib/csv expectedKindForParameter', () => {
-  it.each([
-    ['primary winding resistance', 'resistance'],
-    ['Secondary Winding Resistance', 'resistance'],
-    ['electrode gap', 'length'],
-    ['plug gap', 'length'],
-    ['pickup air gap', 'length'],
-    ['rest voltage', 'voltage'],
-    ['charging voltage', 'voltage'],
-    ['open-circuit voltage', 'voltage'],
-    ['peak voltage', 'voltage'],
-    ['fuse rating', 'current'],
-    ['current draw', 'current'],
-    ['charging current', 'current'],
-    ['continuity', null],
-    ['diode direction', null],
-  ])('%s → %s', (parameter, kind) => {
-    expect(expectedKindForParameter(parameter)).toBe(kind);
   });
 });

@@ -8,6 +8,7 @@ import { modelTitle } from '@/lib/format/model-title';
 import { RevisionHistory } from '@/components/curation/revision-history';
 import { EditSpecButton } from '@/components/curation/edit-spec-button';
 import { SafetyNotes } from '@/components/library/safety-notes';
+import { cautionCategories, isRestVoltage } from '@/lib/specs/classify';
 import { SpecValues } from '@/components/library/spec-values';
 import { Screen } from '@/components/ui/screen';
 import { TwoColumns } from '@/components/ui/two-columns';
@@ -15,7 +16,6 @@ import { Text } from '@/components/ui/text';
 import { ErrorState, LoadingState } from '@/components/ui/states';
 import { describeError } from '@/lib/api/describe-error';
 import { useSpecQuery } from '@/lib/hooks/use-library';
-import type { CanonicalUnit } from '@/lib/units';
 import { useIsWide } from '@/lib/theme/use-theme';
 
 export default function SpecCardScreen() {
@@ -39,19 +39,19 @@ export default function SpecCardScreen() {
   const s = spec.data;
   const check = (
     <>
-      <SafetyNotes component={s.component.name} parameter={s.parameter} />
+      <SafetyNotes categories={cautionCategories(s.component.name, s.parameter)} />
       <Calculator
         kind={s.quantityKind}
         spec={{
           min: s.min,
           nominal: s.nominal,
           max: s.max,
-          unit: s.unit as CanonicalUnit,
+          unit: s.unit,
           refTempC: s.refTempC,
           material: s.material,
         }}
       />
-      {/rest voltage|open-circuit voltage/i.test(s.parameter) ? <BatteryCharge /> : null}
+      {isRestVoltage(s.parameter) ? <BatteryCharge /> : null}
     </>
   );
   const reference = (

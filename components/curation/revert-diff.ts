@@ -1,56 +1,16 @@
 /**
  * What a revert would change: the spec's values now against the revision's snapshot, over
- * the same fields the server's history diffs (server/modules/specs/spec-snapshot.ts).
+ * the same fields and with the same helpers as the server's history (lib/contracts/spec-snapshot.ts).
  */
 import type { FieldChangeDto } from '@/lib/contracts/curation';
 import type { SpecDetailDto } from '@/lib/contracts/library';
+import type { SpecSnapshot } from '@/lib/contracts/spec-fields';
+import { diffSnapshots, snapshotOfSpec } from '@/lib/contracts/spec-snapshot';
 
-const FIELDS = [
-  'parameter',
-  'min',
-  'nominal',
-  'max',
-  'unit',
-  'refTempC',
-  'material',
-  'testPoints',
-  'conditions',
-  'notes',
-  'sourceTitle',
-  'sourceEdition',
-  'sourcePage',
-  'status',
-] as const;
-
-type Value = string | number | null;
-export type Snapshot = Partial<Record<(typeof FIELDS)[number], unknown>>;
+export type Snapshot = Partial<SpecSnapshot>;
 
 export function snapshotOfDetail(s: SpecDetailDto): Snapshot {
-  return {
-    parameter: s.parameter,
-    min: s.min,
-    nominal: s.nominal,
-    max: s.max,
-    unit: s.unit,
-    refTempC: s.refTempC,
-    material: s.material,
-    testPoints: s.testPoints,
-    conditions: s.conditions,
-    notes: s.notes,
-    sourceTitle: s.source?.title ?? null,
-    sourceEdition: s.source?.edition ?? null,
-    sourcePage: s.sourcePage,
-    status: s.status,
-  };
+  return snapshotOfSpec({ ...s, sourceId: s.source?.id ?? null }, s.source);
 }
 
-const valueOf = (s: Snapshot, f: (typeof FIELDS)[number]): Value => {
-  const v = s[f];
-  return v === undefined || v === '' ? null : (v as Value);
-};
-
-export function revertChanges(now: Snapshot, target: Snapshot): FieldChangeDto[] {
-  return FIELDS.map((field) => ({ field, before: valueOf(now, field), after: valueOf(target, field) })).filter(
-    (c) => c.before !== c.after,
-  );
-}
+export const revertChanges = (now: Snapshot, target: Snapshot): FieldChangeDto[] => diffSnapshots(now, target);

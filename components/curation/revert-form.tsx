@@ -27,7 +27,7 @@ export function RevertForm({ revision, now, version, busy, error, onSubmit, onCa
   const [reason, setReason] = useState('');
   const current = staleCurrent(error);
   const base = current ? snapshotOfDetail(current) : now;
-  const changes = revertChanges(base, revision.snapshot as Snapshot);
+  const changes = revertChanges(base, revision.snapshot);
   const ready = reason.trim().length >= 3 && !busy;
   return (
     <View style={styles.box} testID={`revert-form-${revision.version}`}>

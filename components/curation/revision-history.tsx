@@ -8,7 +8,6 @@ import { Card } from '../ui/card';
 import { ErrorState, LoadingState } from '../ui/states';
 import { Text } from '../ui/text';
 import { RevertForm } from './revert-form';
-import type { Snapshot } from './revert-diff';
 import { RevisionItem, originText } from './revision-item';
 
 export type RevisionHistoryProps = { specId: number };
@@ -32,7 +31,7 @@ export function RevisionHistory({ specId }: RevisionHistoryProps) {
       </Card>
     );
   const { revisions, version } = history.data;
-  const now = (revisions[0]?.snapshot ?? {}) as Snapshot;
+  const now = revisions[0]?.snapshot ?? {};
   const toggle = (id: number | null) => {
     revert.reset();
     setOpen(id);

@@ -4,7 +4,18 @@
  * number is passed on as it is, so the shared schema reports it under its field.
  */
 import type { SpecDetailDto } from '@/lib/contracts/library';
+import { EDITABLE_FIELDS, SPEC_FIELDS, type EditableField, type SpecValues } from '@/lib/contracts/spec-fields';
 import { parseDecimal } from '@/lib/calculator/form';
+
+export { EDITABLE_FIELDS, type EditableField };
+
+type KindOf<K extends EditableField> = Extract<(typeof SPEC_FIELDS)[number], { key: K }>['kind'];
+
+/**
+ * The form's value for a field: typed text, or for a choice one of its values ('' = decided
+ * from the parameter, as the importer does: copper for windings).
+ */
+type FormCell<K extends EditableField> = KindOf<K> extends 'enum' ? '' | SpecValues[K] : string;
 
 export type SpecFormValues = {
   make: string;
@@ -13,37 +24,11 @@ export type SpecFormValues = {
   yearTo: string;
   variant: string;
   component: string;
-  parameter: string;
-  min: string;
-  nominal: string;
-  max: string;
-  unit: string;
-  refTempC: string;
-  /** '' = decided from the parameter (copper for windings), as the importer does. */
-  material: '' | 'copper' | 'none';
-  testPoints: string;
-  conditions: string;
-  notes: string;
   source: { title: string; edition: string; page: string; url: string };
-  status: 'published' | 'draft';
   reason: string;
-};
+} & { [K in EditableField]: FormCell<K> };
 
-/** The fields PATCH may change, in the order the conflict view lists them. */
-export const EDITABLE_FIELDS = [
-  'parameter',
-  'min',
-  'nominal',
-  'max',
-  'unit',
-  'refTempC',
-  'material',
-  'testPoints',
-  'conditions',
-  'notes',
-  'status',
-] as const;
-export type EditableField = (typeof EDITABLE_FIELDS)[number];
+const KIND = Object.fromEntries(SPEC_FIELDS.map((f) => [f.key, f.kind])) as Record<EditableField, string>;
 
 export const EMPTY_SPEC_FORM: SpecFormValues = {
   make: '',
@@ -74,7 +59,15 @@ const num = (s: string): unknown => {
 const year = (s: string): unknown => (s.trim() === '' ? undefined : /^\d+$/.test(s.trim()) ? Number(s.trim()) : s);
 const show = (v: number | null) => (v === null ? '' : String(v));
 
+/** A form cell as the request body wants it: numbers parsed, an unchosen choice left out. */
+function bodyValue(f: EditableField, value: string): unknown {
+  if (KIND[f] === 'number') return num(value);
+  if (KIND[f] === 'enum') return value || undefined;
+  return value;
+}
+
 export function toCreateBody(v: SpecFormValues): Record<string, unknown> {
+  const values = Object.fromEntries(EDITABLE_FIELDS.map((f) => [f, bodyValue(f, v[f])]));
   return {
     make: v.make,
     model: v.model,
@@ -82,23 +75,19 @@ export function toCreateBody(v: SpecFormValues): Record<string, unknown> {
     yearTo: year(v.yearTo) ?? null,
     variant: v.variant,
     component: v.component,
-    parameter: v.parameter,
-    min: num(v.min),
-    nominal: num(v.nominal),
-    max: num(v.max),
-    unit: v.unit,
-    refTempC: num(v.refTempC),
-    material: v.material || undefined,
-    testPoints: v.testPoints,
-    conditions: v.conditions,
-    notes: v.notes,
+    ...values,
     source: { ...v.source, url: v.source.url.trim() || null },
-    status: v.status,
     reason: v.reason.trim() || undefined,
   };
 }
 
+function formCell(f: EditableField, value: unknown): string {
+  if (KIND[f] === 'number') return show(value as number | null);
+  return (value as string | null) ?? '';
+}
+
 export function specToForm(s: SpecDetailDto): SpecFormValues {
+  const values = Object.fromEntries(EDITABLE_FIELDS.map((f) => [f, formCell(f, s[f])]));
   return {
     make: s.model.make.name,
     model: s.model.name,
@@ -106,23 +95,13 @@ export function specToForm(s: SpecDetailDto): SpecFormValues {
     yearTo: show(s.model.yearTo),
     variant: s.model.variant,
     component: s.component.name,
-    parameter: s.parameter,
-    min: show(s.min),
-    nominal: show(s.nominal),
-    max: show(s.max),
-    unit: s.unit,
-    refTempC: show(s.refTempC),
-    material: s.material,
-    testPoints: s.testPoints ?? '',
-    conditions: s.conditions ?? '',
-    notes: s.notes ?? '',
+    ...(values as { [K in EditableField]: FormCell<K> }),
     source: {
       title: s.source?.title ?? '',
       edition: s.source?.edition ?? '',
       page: s.sourcePage ?? '',
       url: s.source?.url ?? '',
     },
-    status: s.status,
     reason: '',
   };
 }
@@ -134,10 +113,9 @@ const sourceChanged = (a: SpecFormValues['source'], b: SpecFormValues['source'])
 /** The fields the editor changed against `base`, as PATCH wants them (no version, no reason). */
 export function changedFields(base: SpecFormValues, v: SpecFormValues): Record<string, unknown> {
   const out: Record<string, unknown> = {};
-  const numeric = new Set<EditableField>(['min', 'nominal', 'max', 'refTempC']);
   for (const f of EDITABLE_FIELDS) {
     if (same(base[f], v[f])) continue;
-    out[f] = numeric.has(f) ? num(v[f]) : v[f];
+    out[f] = KIND[f] === 'number' ? num(v[f]) : v[f];
   }
   if (sourceChanged(base.source, v.source)) out.source = { ...v.source, url: v.source.url.trim() || null };
   return out;

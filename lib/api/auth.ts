@@ -8,7 +8,7 @@ import type {
   UserDto,
   RoleValue,
 } from '../contracts/auth';
-import { apiFetch, query } from './client';
+import { apiFetch, apiFetchVoid, query } from './client';
 
 const post = <T>(path: string, body?: unknown) =>
   apiFetch<T>(path, { method: 'POST', body: body === undefined ? undefined : JSON.stringify(body) });
@@ -17,11 +17,11 @@ export const signUp = (body: SignUpBody) => post<{ message: string }>('/api/auth
 export const verifyEmail = (token: string) => post<{ user: UserDto }>('/api/auth/verify', { token });
 export const signIn = (body: SignInBody) => post<SessionDto>('/api/auth/sign-in', body);
 export const refreshSession = () => post<SessionDto>('/api/auth/refresh');
-export const signOut = () => post<void>('/api/auth/sign-out');
+export const signOut = () => apiFetchVoid('/api/auth/sign-out', { method: 'POST' });
 export const forgotPassword = (email: string) => post<{ message: string }>('/api/auth/forgot', { email });
 export const resetPassword = (body: ResetBody) => post<{ message: string }>('/api/auth/reset', body);
 export const changePassword = (body: ChangePasswordBody) => post<SessionDto>('/api/auth/password', body);
-export const signOutEverywhere = () => post<void>('/api/auth/sign-out-everywhere');
+export const signOutEverywhere = () => apiFetchVoid('/api/auth/sign-out-everywhere', { method: 'POST' });
 
 export const listUsers = (q?: string) => apiFetch<UserDto[]>(`/api/users${query({ q })}`);
 export const updateUser = (id: number, body: { role?: RoleValue; disabled?: boolean }) =>

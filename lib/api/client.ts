@@ -2,7 +2,9 @@
  * The only place that calls fetch. Adds the base URL, sends and reads JSON, and turns
  * any answer that is not ok into an ApiError built from the problem details.
  */
-export type FieldError = { path: string; message: string };
+import type { FieldError } from '../contracts/enums';
+
+export type { FieldError };
 
 export class ApiError extends Error {
   constructor(
@@ -54,7 +56,8 @@ export function errorFromAnswer(status: number, text: string, sentToken: boolean
   );
 }
 
-export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
+/** Sends the request; the answer's text when it is ok, an ApiError otherwise. */
+async function send(path: string, init: RequestInit): Promise<{ status: number; text: string }> {
   const headers = new Headers(init.headers);
   for (const [k, v] of Object.entries(requestHeaders())) headers.set(k, v);
   if (init.body && typeof init.body === 'string' && !headers.has('Content-Type'))
@@ -62,12 +65,22 @@ export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise
   const res = await fetch(`${BASE_URL}${path}`, { ...init, headers, credentials: 'include' });
   const text = await res.text();
   if (!res.ok) throw errorFromAnswer(res.status, text, headers.has('Authorization'));
-  if (!text) return null as T;
+  return { status: res.status, text };
+}
+
+/** A request whose ok answer is a JSON body of type T; an answer without one is an ApiError. */
+export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
+  const { status, text } = await send(path, init);
   try {
     return JSON.parse(text) as T;
   } catch {
-    return null as T;
+    throw new ApiError(status, 'bad_response', 'The server answered without the data it should send. Try again.');
   }
+}
+
+/** A request whose ok answer has no body (204 No Content); any body it has is ignored. */
+export async function apiFetchVoid(path: string, init: RequestInit = {}): Promise<void> {
+  await send(path, init);
 }
 
 /** Builds a query string from defined values only. */

@@ -1,5 +1,6 @@
 /** Account requests and answers, shared by the client forms and the server. */
 import { z } from 'zod';
+import { ROLES, type Role } from './enums';
 
 export const Email = z
   .string({ error: 'E-mail is required' })
@@ -41,8 +42,9 @@ export const ChangePasswordBody = z
   .strict();
 export type ChangePasswordBody = z.infer<typeof ChangePasswordBody>;
 
-export const ROLE_VALUES = ['contributor', 'editor', 'admin'] as const;
-export type RoleValue = (typeof ROLE_VALUES)[number];
+/** The roles, least trusted first (lib/contracts/enums.ts ROLES). */
+export const ROLE_VALUES = ROLES;
+export type RoleValue = Role;
 
 export const UsersQuery = z.object({ q: z.string().trim().max(120).optional() });
 export const UpdateUserBody = z

@@ -6,6 +6,7 @@
 import { z } from 'zod';
 import { parseUnit } from '../units';
 import { specValueIssues } from './curation';
+import { CORRECTION_STATUSES, type CorrectionKind, type CorrectionStatus } from './enums';
 
 const line = (label: string, max: number) =>
   z
@@ -42,6 +43,9 @@ export const ProposedValues = z
   })
   .strict();
 export type ProposedValues = z.infer<typeof ProposedValues>;
+
+/** A proposal as stored: the values, the parameter they are for, and the new component's name (kind 'new_component'). */
+export type StoredProposal = ProposedValues & { parameter: string; component?: string };
 
 export const CitationInput = z
   .object({
@@ -120,7 +124,7 @@ export const RejectBody = z
   .object({ note: para('note', 1000).refine((s) => s.length >= 3, 'tell the proposer why, in a few words') })
   .strict();
 export const CorrectionsQuery = z.object({
-  status: z.enum(['pending', 'accepted', 'rejected', 'withdrawn']).optional(),
+  status: z.enum(CORRECTION_STATUSES).optional(),
   mine: z.enum(['true', 'false']).optional(),
   make: z.string().trim().max(120).optional(),
   modelId: z.coerce.number().int().positive().optional(),
@@ -128,8 +132,8 @@ export const CorrectionsQuery = z.object({
 
 export type CorrectionDto = {
   id: number;
-  kind: 'change' | 'new_spec' | 'new_component';
-  status: 'pending' | 'accepted' | 'rejected' | 'withdrawn';
+  kind: CorrectionKind;
+  status: CorrectionStatus;
   specId: number | null;
   componentId: number | null;
   modelId: number;

@@ -2,13 +2,15 @@
  * Editors' spec writes (create, edit, revert) and revision history: request schemas shared
  * by the server (validation) and the client forms (types and field messages). The value
  * rules are the CSV importer's: units through lib/units parseUnit, the unit's kind must fit
- * the parameter (expectedKindForParameter), min ≤ nominal ≤ max, no negative resistance or
+ * the parameter (lib/specs/classify.ts expectedKind), min ≤ nominal ≤ max, no negative resistance or
  * length, the same length limits as the CSV columns.
  */
 import { z } from 'zod';
 import { parseUnit, type CanonicalUnit } from '../units';
-import { expectedKindForParameter } from '../csv/plausibility';
+import { expectedKind } from '../specs/classify';
+import type { RevisionOrigin } from './enums';
 import type { SpecDetailDto } from './library';
+import type { SpecSnapshot } from './spec-fields';
 
 const CONTROL_CHARS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 
@@ -32,12 +34,12 @@ const year = (label: string) =>
 
 const unit = z.string({ error: 'unit is required' }).transform((s, ctx): CanonicalUnit => {
   const parsed = parseUnit(s);
-  if (!parsed)
-    ctx.addIssue({
-      code: 'custom',
-      message: `unit "${s}" is not recognised; use one of Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil)`,
-    });
-  return (parsed?.unit ?? s) as CanonicalUnit;
+  if (parsed) return parsed.unit;
+  ctx.addIssue({
+    code: 'custom',
+    message: `unit "${s}" is not recognised; use one of Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil)`,
+  });
+  return z.NEVER;
 });
 
 const url = z
@@ -108,7 +110,7 @@ export function specValueIssues(v: CheckedValues): SpecValueIssue[] {
     issues.push({ path: 'nominal', message: `nominal ${nominal} is greater than max ${max}` });
   const parsed = parseUnit(v.unit);
   if (!parsed) return issues;
-  const needed = expectedKindForParameter(v.parameter);
+  const needed = expectedKind(v.parameter);
   if (needed && needed !== parsed.kind) {
     issues.push({
       path: 'unit',
@@ -205,7 +207,7 @@ export type FieldChangeDto = { field: string; before: string | number | null; af
 export type RevisionDiffDto = {
   id: number;
   version: number;
-  origin: 'edit' | 'import' | 'correction' | 'revert';
+  origin: RevisionOrigin;
   originRef: string | null;
   authorName: string;
   reason: string;
@@ -213,7 +215,7 @@ export type RevisionDiffDto = {
   changedFields: string[];
   /** Against the revision before this one; for the first revision, every field it set. */
   changes: FieldChangeDto[];
-  snapshot: Record<string, unknown>;
+  snapshot: Partial<SpecSnapshot>;
 };
 
 export type RevisionListDto = { specId: number; version: number; revisions: RevisionDiffDto[] };

@@ -3,6 +3,7 @@
  * response shapes, shared by the server and the import screen.
  */
 import { z } from 'zod';
+import type { ImportStatus } from './enums';
 import { Reason, type FieldChangeDto } from './curation';
 
 const count = (name: string, max: number, fallback: number) =>
@@ -37,7 +38,6 @@ export const ExportQuery = z
   .refine((q) => !(q.make && q.modelId), { message: 'give make or modelId, not both', path: ['modelId'] });
 export type ExportQuery = z.infer<typeof ExportQuery>;
 
-export type ImportStatus = 'previewed' | 'committed' | 'failed';
 export type ImportCountsDto = {
   created: number;
   updated: number;

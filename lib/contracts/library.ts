@@ -3,6 +3,10 @@
  * server: the server validates with these schemas, the client is typed by them.
  */
 import { z } from 'zod';
+import type { CanonicalUnit, Material, QuantityKind, RevisionOrigin, SpecStatus } from './enums';
+import type { SpecSnapshot } from './spec-fields';
+
+export type { QuantityKind } from './enums';
 
 export const IdParams = z.object({
   id: z.coerce
@@ -28,8 +32,6 @@ export const ModelsQuery = z.object({
 });
 export type ModelsQuery = z.infer<typeof ModelsQuery>;
 
-export type QuantityKind = 'resistance' | 'voltage' | 'current' | 'length';
-
 export type ModelRefDto = {
   id: number;
   make: { id: number; name: string };
@@ -49,10 +51,10 @@ export type SpecSummaryDto = {
   min: number | null;
   nominal: number | null;
   max: number | null;
-  unit: string;
+  unit: CanonicalUnit;
   refTempC: number | null;
-  material: 'copper' | 'none';
-  status: 'published' | 'draft';
+  material: Material;
+  status: SpecStatus;
   version: number;
   /** e.g. '2.9–3.7 Ω', ready to show inline. */
   display: string;
@@ -85,10 +87,10 @@ export type RevisionDto = {
   changedFields: string[];
   authorName: string;
   reason: string;
-  origin: 'edit' | 'import' | 'correction' | 'revert';
+  origin: RevisionOrigin;
   originRef: string | null;
   createdAt: string;
-  snapshot: Record<string, unknown>;
+  snapshot: Partial<SpecSnapshot>;
 };
 
 export type SpecDetailDto = SpecSummaryDto & {
@@ -111,7 +113,7 @@ export type SearchHitDto = {
   min: number | null;
   nominal: number | null;
   max: number | null;
-  unit: string;
+  unit: CanonicalUnit;
   display: string;
   score: number;
 };

@@ -2,32 +2,38 @@
  * The spec-table CSV format (DESIGN.md §5): column names, which ones are required,
  * the column reference shown on the import screen, and the row / problem types.
  */
-import type { CanonicalUnit } from '../units';
+import { SPEC_FIELDS, hasFlag, type SpecField, type SpecSnapshot } from '../contracts/spec-fields';
 
-export const SPEC_CSV_COLUMNS = [
-  'make',
-  'model',
-  'year_from',
-  'year_to',
-  'variant',
-  'component',
-  'parameter',
-  'min',
-  'nominal',
-  'max',
-  'unit',
-  'ref_temp_c',
-  'material',
-  'test_points',
-  'conditions',
-  'source_title',
-  'source_edition',
-  'source_page',
-  'source_url',
-  'notes',
-] as const;
+/** The columns that place a spec in the library (make, model, years, variant, component). */
+export const IDENTITY_COLUMNS = ['make', 'model', 'year_from', 'year_to', 'variant', 'component'] as const;
+type IdentityColumn = (typeof IDENTITY_COLUMNS)[number];
+type IdentityRow = {
+  make: string;
+  model: string;
+  yearFrom: number;
+  yearTo: number | null;
+  variant: string;
+  component: string;
+};
+const IDENTITY_FIELD: Record<IdentityColumn, keyof IdentityRow> = {
+  make: 'make',
+  model: 'model',
+  year_from: 'yearFrom',
+  year_to: 'yearTo',
+  variant: 'variant',
+  component: 'component',
+};
 
-export type SpecCsvColumn = (typeof SPEC_CSV_COLUMNS)[number];
+/** The spec fields the CSV format carries (lib/contracts/spec-fields.ts), in column order. */
+export const CSV_FIELDS = [
+  ...SPEC_FIELDS.filter((f) => f.csv !== null && !hasFlag(f, 'csvLast')),
+  ...SPEC_FIELDS.filter((f) => f.csv !== null && hasFlag(f, 'csvLast')),
+] as Extract<SpecField, { csv: string }>[];
+type CsvField = (typeof CSV_FIELDS)[number];
+
+export type SpecCsvColumn = IdentityColumn | CsvField['csv'];
+
+export const SPEC_CSV_COLUMNS: readonly SpecCsvColumn[] = [...IDENTITY_COLUMNS, ...CSV_FIELDS.map((f) => f.csv)];
 
 /** Columns whose cell must not be empty (besides "at least one of min / nominal / max"). */
 export const REQUIRED_COLUMNS: readonly SpecCsvColumn[] = [
@@ -35,82 +41,36 @@ export const REQUIRED_COLUMNS: readonly SpecCsvColumn[] = [
   'model',
   'year_from',
   'component',
-  'parameter',
-  'unit',
-  'source_title',
-  'source_page',
+  ...CSV_FIELDS.filter((f) => hasFlag(f, 'csvRequired')).map((f) => f.csv),
 ];
 
 /** Written as plain numbers on export and never neutralised (a negative number is a number). */
 export const NUMERIC_COLUMNS: readonly SpecCsvColumn[] = [
   'year_from',
   'year_to',
-  'min',
-  'nominal',
-  'max',
-  'ref_temp_c',
+  ...CSV_FIELDS.filter((f) => f.kind === 'number').map((f) => f.csv),
 ];
 
 /** The columns that make up a row's natural key (the identity used to match re-imports). */
-export const KEY_COLUMNS: readonly SpecCsvColumn[] = [
-  'make',
-  'model',
-  'year_from',
-  'year_to',
-  'variant',
-  'component',
-  'parameter',
-];
+export const KEY_COLUMNS: readonly SpecCsvColumn[] = [...IDENTITY_COLUMNS, 'parameter'];
 
-export type SpecCsvRow = {
-  make: string;
-  model: string;
-  yearFrom: number;
-  yearTo: number | null;
-  variant: string;
-  component: string;
-  parameter: string;
-  min: number | null;
-  nominal: number | null;
-  max: number | null;
-  unit: CanonicalUnit;
-  refTempC: number | null;
-  material: 'copper' | 'none';
-  testPoints: string;
-  conditions: string;
-  sourceTitle: string;
-  sourceEdition: string;
-  sourcePage: string;
-  sourceUrl: string | null;
-  notes: string;
-};
+type CellOf<F extends CsvField> = F['kind'] extends 'text'
+  ? 'csvEmptyIsNull' extends F['flags'][number]
+    ? string | null
+    : string
+  : (SpecSnapshot & { sourceUrl: string | null })[F['key']];
+
+/** One validated CSV row: the identity, then every field the format carries (text as '' when empty). */
+export type SpecCsvRow = IdentityRow & { [F in CsvField as F['key']]: CellOf<F> };
 
 /** One problem with a file or a row. `line` is the physical 1-based line (the header is line 1). */
 export type RowProblem = { line: number; column: SpecCsvColumn | null; reason: string };
 
 /** CSV column → SpecCsvRow property, in column order. */
-export const COLUMN_TO_FIELD: Record<SpecCsvColumn, keyof SpecCsvRow> = {
-  make: 'make',
-  model: 'model',
-  year_from: 'yearFrom',
-  year_to: 'yearTo',
-  variant: 'variant',
-  component: 'component',
-  parameter: 'parameter',
-  min: 'min',
-  nominal: 'nominal',
-  max: 'max',
-  unit: 'unit',
-  ref_temp_c: 'refTempC',
-  material: 'material',
-  test_points: 'testPoints',
-  conditions: 'conditions',
-  source_title: 'sourceTitle',
-  source_edition: 'sourceEdition',
-  source_page: 'sourcePage',
-  source_url: 'sourceUrl',
-  notes: 'notes',
-};
+export const COLUMN_TO_FIELD = Object.fromEntries([
+  ...IDENTITY_COLUMNS.map((c) => [c, IDENTITY_FIELD[c]]),
+  ...CSV_FIELDS.map((f) => [f.csv, f.key]),
+]) as Record<SpecCsvColumn, keyof SpecCsvRow>;
 
 type ColumnInfo = { column: SpecCsvColumn; required: boolean; description: string; example: string };
 

@@ -20,4 +20,3 @@ export { checkCsvBytes, decodeCsv } from './encoding';
 export { naturalKey, validateSpecCsv, type ValidatedCsv } from './validate';
 export { neutraliseCell } from './injection';
 export { toSpecCsv } from './write';
-export { expectedKindForParameter } from './plausibility';

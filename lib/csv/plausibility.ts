@@ -1,43 +1,12 @@
 /**
- * Knowledge about parameters that the row rules use: which quantity a parameter needs,
- * which parameters are copper windings, and wide plausibility ranges that only ever
- * produce import *warnings*, never rejections (REFERENCES.md §7).
+ * Wide plausibility ranges for winding resistances that only ever produce import
+ * *warnings*, never rejections (REFERENCES.md §7). Which quantity a parameter needs and
+ * which parameters are copper windings is the classifier's (lib/specs/classify.ts).
  */
 import { convert, type CanonicalUnit, type QuantityKind } from '../units';
 import type { RowProblem, SpecCsvColumn } from './columns';
 
 const norm = (s: string) => s.toLowerCase().replace(/\s+/g, ' ').trim();
-
-/** Ordered: the first pattern that matches the parameter decides its quantity kind. */
-const KIND_PATTERNS: [RegExp, QuantityKind][] = [
-  [/resistance|\bohms?\b|impedance/, 'resistance'],
-  [/\bgap\b|clearance|thickness|length/, 'length'],
-  [/voltage|\bvolts?\b|\bemf\b/, 'voltage'],
-  [/current|\bfuse\b|\bamps?\b|amperage|\bdraw\b/, 'current'],
-];
-
-/**
- * The quantity kind a parameter needs, from its wording ('primary winding resistance' →
- * resistance, 'electrode gap' → length, 'charging voltage' → voltage, 'fuse rating' →
- * current). Unknown wording → null, and the unit is then not checked against it.
- */
-export function expectedKindForParameter(parameter: string): QuantityKind | null {
-  const p = norm(parameter);
-  for (const [pattern, kind] of KIND_PATTERNS) if (pattern.test(p)) return kind;
-  return null;
-}
-
-/**
- * Decision: an empty material cell means 'copper' when the parameter is the resistance of
- * a winding or coil (ignition coil, pickup / pulser, stator), because those are copper and
- * need temperature correction; otherwise 'none'. A parameter that names a cap, lead or
- * resistor (carbon or resistive wire) stays 'none' even if it also mentions the coil.
- */
-export function defaultMaterial(parameter: string, kind: QuantityKind): 'copper' | 'none' {
-  const p = norm(parameter);
-  if (kind !== 'resistance' || /\bcap\b|\blead\b|resistor|\bwire\b/.test(p)) return 'none';
-  return /winding|coil|stator|pulser|pulse generator|pickup|pick-up/.test(p) ? 'copper' : 'none';
-}
 
 type Range = {
   label: string;

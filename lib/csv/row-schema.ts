@@ -5,9 +5,19 @@
  */
 import { z } from 'zod';
 import { parseUnit, unitKind, type CanonicalUnit, type QuantityKind } from '../units';
-import { SPEC_CSV_COLUMNS, type RowProblem, type SpecCsvColumn, type SpecCsvRow } from './columns';
+import type { Material } from '../contracts/enums';
+import { hasFlag, type FieldRule } from '../contracts/spec-fields';
+import {
+  COLUMN_TO_FIELD,
+  CSV_FIELDS,
+  SPEC_CSV_COLUMNS,
+  type RowProblem,
+  type SpecCsvColumn,
+  type SpecCsvRow,
+} from './columns';
 import { unneutraliseCell } from './injection';
-import { defaultMaterial, expectedKindForParameter, plausibilityWarnings } from './plausibility';
+import { defaultMaterial, expectedKind } from '../specs/classify';
+import { plausibilityWarnings } from './plausibility';
 
 /** Cells are trimmed, and a neutralising ' added by our export is removed (see injection.ts). */
 export function cleanCell(value: string | undefined): string {
@@ -83,19 +93,21 @@ const unit = z
     return parsed;
   });
 
-const material = z
-  .string()
-  .optional()
-  .transform((value, ctx): 'copper' | 'none' | null => {
-    const s = cleanCell(value).toLowerCase();
-    if (s === '') return null;
-    if (s === 'copper' || s === 'none') return s;
-    ctx.addIssue({
-      code: 'custom',
-      message: `material "${cleanCell(value)}" is not allowed; use copper, none, or leave it empty`,
+/** One of `values`, any case; empty → null (the field's default decides). */
+const oneOf = (column: SpecCsvColumn, values: readonly string[]) =>
+  z
+    .string()
+    .optional()
+    .transform((value, ctx): string | null => {
+      const s = cleanCell(value).toLowerCase();
+      if (s === '') return null;
+      if (values.includes(s)) return s;
+      ctx.addIssue({
+        code: 'custom',
+        message: `${column} "${cleanCell(value)}" is not allowed; use ${values.join(', ')}, or leave it empty`,
+      });
+      return null;
     });
-    return null;
-  });
 
 const url = z
   .string()
@@ -110,6 +122,16 @@ const url = z
     return s;
   });
 
+/** The cell schema of a spec field, from its kind and rule (lib/contracts/spec-fields.ts). */
+function cellSchema(f: (typeof CSV_FIELDS)[number]) {
+  const { maxLength = 0, multiline = false, range, values = [] } = f.rule as FieldRule;
+  if (f.sourceColumn === 'url') return url;
+  if (f.kind === 'unit') return unit;
+  if (f.kind === 'enum') return oneOf(f.csv, values);
+  if (f.kind === 'number') return number(f.csv, range ? { range: [range[0], range[1]], what: range[2] } : {});
+  return text(f.csv, maxLength, { required: hasFlag(f, 'csvRequired'), multiline });
+}
+
 const RawRowSchema = z.object({
   make: text('make', 120, { required: true }),
   model: text('model', 120, { required: true }),
@@ -117,22 +139,17 @@ const RawRowSchema = z.object({
   year_to: number('year_to', { integer: true, range: [1900, 2100] }),
   variant: text('variant', 120),
   component: text('component', 120, { required: true }),
-  parameter: text('parameter', 120, { required: true }),
-  min: number('min'),
-  nominal: number('nominal'),
-  max: number('max'),
-  unit,
-  ref_temp_c: number('ref_temp_c', { range: [-40, 200], what: ' °C' }),
-  material,
-  test_points: text('test_points', 1000, { multiline: true }),
-  conditions: text('conditions', 1000, { multiline: true }),
-  source_title: text('source_title', 200, { required: true }),
-  source_edition: text('source_edition', 200),
-  source_page: text('source_page', 200, { required: true }),
-  source_url: url,
-  notes: text('notes', 1000, { multiline: true }),
+  ...Object.fromEntries(CSV_FIELDS.map((f) => [f.csv, cellSchema(f)])),
 });
-type RawRow = z.output<typeof RawRowSchema>;
+/** A row's cells as read: the fields' values by CSV column (the unit parsed, or null). */
+type RawRow = z.output<typeof RawRowSchema> & {
+  parameter: string;
+  min: number | null;
+  nominal: number | null;
+  max: number | null;
+  unit: { unit: CanonicalUnit; kind: QuantityKind } | null;
+  material: Material | null;
+} & Record<string, unknown>;
 
 const KIND_NAME: Record<QuantityKind, string> = {
   resistance: 'resistance',
@@ -161,7 +178,7 @@ function crossCheck(r: RawRow, ctx: z.RefinementCtx<RawRow>) {
     issue('year_to', `year_to ${r.year_to} is before year_from ${r.year_from}`);
   }
   if (!r.unit) return;
-  const needed = expectedKindForParameter(r.parameter);
+  const needed = expectedKind(r.parameter);
   if (needed && needed !== r.unit.kind) {
     issue(
       'unit',
@@ -176,36 +193,18 @@ function crossCheck(r: RawRow, ctx: z.RefinementCtx<RawRow>) {
 }
 
 function toRow(r: RawRow): SpecCsvRow {
-  const u = r.unit as { unit: CanonicalUnit; kind: QuantityKind };
-  return {
-    make: r.make,
-    model: r.model,
-    yearFrom: r.year_from as number,
-    yearTo: r.year_to,
-    variant: r.variant,
-    component: r.component,
-    parameter: r.parameter,
-    min: r.min,
-    nominal: r.nominal,
-    max: r.max,
-    unit: u.unit,
-    refTempC: r.ref_temp_c,
-    material: r.material ?? defaultMaterial(r.parameter, u.kind),
-    testPoints: r.test_points,
-    conditions: r.conditions,
-    sourceTitle: r.source_title,
-    sourceEdition: r.source_edition,
-    sourcePage: r.source_page,
-    sourceUrl: r.source_url,
-    notes: r.notes,
-  };
+  const u = r.unit!;
+  const row: Record<string, unknown> = {};
+  for (const column of SPEC_CSV_COLUMNS) row[COLUMN_TO_FIELD[column]] = r[column];
+  return { ...row, unit: u.unit, material: r.material ?? defaultMaterial(r.parameter, u.kind) } as SpecCsvRow;
 }
 
 /** Raw row (all strings, keyed by CSV column; missing columns count as empty) → SpecCsvRow. */
-export const SpecCsvRowSchema: z.ZodType<SpecCsvRow, Partial<Record<SpecCsvColumn, string>>> = RawRowSchema.superRefine(
-  crossCheck,
-  { when: () => true },
-).transform(toRow);
+export const SpecCsvRowSchema: z.ZodType<SpecCsvRow, Partial<Record<SpecCsvColumn, string>>> = (
+  RawRowSchema as unknown as z.ZodType<RawRow, Partial<Record<SpecCsvColumn, string>>>
+)
+  .superRefine(crossCheck, { when: () => true })
+  .transform(toRow);
 
 const asColumn = (key: unknown): SpecCsvColumn | null =>
   (SPEC_CSV_COLUMNS as readonly unknown[]).includes(key) ? (key as SpecCsvColumn) : null;

@@ -1,6 +1,7 @@
-/** Roles, from least to most trusted; each role may do everything the ones before it may. */
-export const ROLES = ['contributor', 'editor', 'admin'] as const;
-export type Role = (typeof ROLES)[number];
+import { ROLES, type Role } from '@/lib/contracts/enums';
+
+/** Roles, from least to most trusted (lib/contracts/enums.ts); each may do everything the ones before it may. */
+export { ROLES, type Role };
 
 /** Who may call a route: anyone, any signed-in account, or at least the named role. */
 export type AccessRule = 'public' | 'signed-in' | Role;

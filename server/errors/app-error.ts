@@ -1,5 +1,7 @@
 /** The one error type services throw; the error handler turns it into RFC 9457 problem details. */
-export type FieldError = { path: string; message: string };
+import type { FieldError } from '@/lib/contracts/enums';
+
+export type { FieldError };
 
 export class AppError extends Error {
   constructor(

@@ -5,31 +5,19 @@
  */
 import type { EntityManager } from 'typeorm';
 import type { CreateSpecBody } from '@/lib/contracts/curation';
-import { parseUnit, type CanonicalUnit } from '@/lib/units';
+import type { SpecValues } from '@/lib/contracts/spec-fields';
+import { parseUnit } from '@/lib/units';
 import { AppError } from '@/server/errors/app-error';
 import type { SignedInUser } from '@/server/auth/roles';
 import { VehicleModel } from '../library/vehicle-model.entity';
 import { Component } from '../library/component.entity';
 import { Spec } from '../specs/spec.entity';
 import { ensureSource } from '../specs/spec-library';
-import { checkValues, lockSpec, writeSpecChange, type SpecValues } from '../specs/spec-write';
+import { checkValues, lockSpec, writeSpecChange } from '../specs/spec-write';
 import { insertNewSpec } from '../specs/spec-edit.service';
 import { User } from '../users/user.entity';
 import type { Correction } from './correction.entity';
 import { toReview } from './correction.view';
-
-type Proposed = {
-  min: number | null;
-  nominal: number | null;
-  max: number | null;
-  unit: string;
-  refTempC: number | null;
-  material?: 'copper' | 'none';
-  testPoints: string;
-  conditions: string;
-  parameter: string;
-  component?: string;
-};
 
 async function credit(m: EntityManager, c: Correction, editor: SignedInUser) {
   const proposer = await m.getRepository(User).findOneByOrFail({ id: c.proposerId });
@@ -59,13 +47,13 @@ async function applyChange(
     );
   }
   const { spec, source } = await lockSpec(m, current.id, current.version);
-  const p = c.proposed as Proposed;
+  const p = c.proposed;
   const values: SpecValues = {
     parameter: spec.parameter,
     min: p.min,
     nominal: p.nominal,
     max: p.max,
-    unit: parseUnit(p.unit)!.unit as CanonicalUnit,
+    unit: parseUnit(p.unit)!.unit,
     refTempC: p.refTempC,
     material: p.material ?? spec.material,
     testPoints: p.testPoints || null,
@@ -85,7 +73,7 @@ async function applyNew(m: EntityManager, c: Correction, editor: SignedInUser): 
   const model = await m
     .getRepository(VehicleModel)
     .findOneOrFail({ where: { id: c.modelId }, relations: { make: true } });
-  const p = c.proposed as Proposed;
+  const p = c.proposed;
   const component = c.componentId
     ? (await m.getRepository(Component).findOneByOrFail({ id: c.componentId })).name
     : p.component!;

@@ -1,7 +1,12 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 
-export type CorrectionKind = 'change' | 'new_spec' | 'new_component';
-export type CorrectionStatus = 'pending' | 'accepted' | 'rejected' | 'withdrawn';
+import type { StoredProposal } from '@/lib/contracts/corrections';
+import {
+  CORRECTION_KINDS,
+  CORRECTION_STATUSES,
+  type CorrectionKind,
+  type CorrectionStatus,
+} from '@/lib/contracts/enums';
 
 /** A contributor's proposed change to the library, with its citation, waiting for an editor. */
 @Entity({ name: 'corrections' })
@@ -10,7 +15,7 @@ export class Correction {
   @PrimaryGeneratedColumn({ type: 'int' })
   id: number;
 
-  @Column({ type: 'enum', enum: ['change', 'new_spec', 'new_component'] })
+  @Column({ type: 'enum', enum: CORRECTION_KINDS })
   kind: CorrectionKind;
 
   /** The spec to change (kind 'change'), or the spec created on acceptance. */
@@ -33,7 +38,7 @@ export class Correction {
 
   /** Proposed values: parameter, component, min, nominal, max, unit, refTempC, material, testPoints, conditions. */
   @Column({ type: 'json' })
-  proposed: Record<string, unknown>;
+  proposed: StoredProposal;
 
   /** Citation: title, edition, page, url. */
   @Column({ type: 'json' })
@@ -42,7 +47,7 @@ export class Correction {
   @Column({ type: 'text' })
   rationale: string;
 
-  @Column({ type: 'enum', enum: ['pending', 'accepted', 'rejected', 'withdrawn'], default: 'pending' })
+  @Column({ type: 'enum', enum: CORRECTION_STATUSES, default: 'pending' })
   status: CorrectionStatus;
 
   /** The spec version the proposal was made against (kind 'change'). */

@@ -119,7 +119,7 @@ export async function editProposal(user: SignedInUser, id: number, b: EditPropos
     const c = await lockPending(m, id);
     if (c.proposerId !== user.id) throw AppError.notFound('correction', id);
     if (b.values) {
-      checkAgainst(String(c.proposed.parameter), b.values);
+      checkAgainst(c.proposed.parameter, b.values);
       c.proposed = {
         ...b.values,
         parameter: c.proposed.parameter,
@@ -163,7 +163,7 @@ export async function decide(
     await notifyProposer(
       m,
       c,
-      `${String(c.proposed.component ?? '')}${c.proposed.component ? ' — ' : ''}${String(c.proposed.parameter)}`,
+      `${c.proposed.component ?? ''}${c.proposed.component ? ' — ' : ''}${c.proposed.parameter}`,
     );
     return c;
   });

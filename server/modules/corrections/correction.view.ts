@@ -1,6 +1,8 @@
 /** Corrections → DTOs: names, the proposer's record, and the three-way field view for review. */
 import { In } from 'typeorm';
-import type { CorrectionDto, CorrectionReviewDto, ProposedValues } from '@/lib/contracts/corrections';
+import type { CorrectionDto, CorrectionReviewDto } from '@/lib/contracts/corrections';
+import { REVIEWED_FIELDS, SPEC_FIELDS, hasFlag } from '@/lib/contracts/spec-fields';
+import { citationText } from '@/lib/format/citation';
 import { modelTitle } from '@/lib/format/model-title';
 import { AppDataSource } from '@/server/db/data-source';
 import { Component } from '../library/component.entity';
@@ -11,20 +13,21 @@ import { Source } from '../library/source.entity';
 import { User } from '../users/user.entity';
 import type { Correction } from './correction.entity';
 
-export const COMPARED = [
-  'min',
-  'nominal',
-  'max',
-  'unit',
-  'refTempC',
-  'material',
-  'testPoints',
-  'conditions',
-  'source',
-] as const;
+/** The fields a review compares, then the citation as one 'source' line. */
+export const COMPARED = [...REVIEWED_FIELDS, 'source'] as const;
+type Compared = (typeof COMPARED)[number];
+type Values = Record<Compared, unknown>;
 
-export const citationText = (c: Correction['citation']) =>
-  `${c.title}${c.edition ? `, ${c.edition}` : ''}, p. ${c.page}`;
+/** The reviewed values of a spec (or a snapshot of one), text fields as '' when empty, and its citation. */
+function reviewValues(v: Partial<Record<(typeof REVIEWED_FIELDS)[number], unknown>>, source: string | null): Values {
+  const out = { source } as Values;
+  for (const f of SPEC_FIELDS) {
+    if (!hasFlag(f, 'reviewed')) continue;
+    const value = v[f.key as (typeof REVIEWED_FIELDS)[number]];
+    out[f.key as Compared] = f.kind === 'text' ? (value ?? '') : value;
+  }
+  return out;
+}
 
 export async function toDtos(rows: Correction[]): Promise<CorrectionDto[]> {
   if (rows.length === 0) return [];
@@ -74,9 +77,9 @@ export async function toDtos(rows: Correction[]): Promise<CorrectionDto[]> {
       modelId: r.modelId,
       modelTitle: model ? modelTitle(model) : '',
       componentName:
-        spec?.component.name ?? comps.find((c) => c.id === r.componentId)?.name ?? String(r.proposed.component ?? ''),
-      parameter: spec?.parameter ?? String(r.proposed.parameter ?? ''),
-      proposed: r.proposed as ProposedValues,
+        spec?.component.name ?? comps.find((c) => c.id === r.componentId)?.name ?? r.proposed.component ?? '',
+      parameter: spec?.parameter ?? r.proposed.parameter ?? '',
+      proposed: r.proposed,
       citation: r.citation,
       rationale: r.rationale,
       baseVersion: r.baseVersion,
@@ -95,23 +98,9 @@ export async function toDtos(rows: Correction[]): Promise<CorrectionDto[]> {
   });
 }
 
-type Values = Record<(typeof COMPARED)[number], unknown>;
-
 async function valuesOfSpec(spec: Spec): Promise<Values> {
   const source = spec.sourceId ? await AppDataSource.getRepository(Source).findOneBy({ id: spec.sourceId }) : null;
-  return {
-    min: spec.min,
-    nominal: spec.nominal,
-    max: spec.max,
-    unit: spec.unit,
-    refTempC: spec.refTempC,
-    material: spec.material,
-    testPoints: spec.testPoints ?? '',
-    conditions: spec.conditions ?? '',
-    source: source
-      ? `${source.title}${source.edition ? `, ${source.edition}` : ''}, p. ${spec.sourcePage ?? ''}`
-      : null,
-  };
+  return reviewValues(spec, source ? citationText(source, spec.sourcePage) : null);
 }
 
 /** The spec's values at the version the proposal was made against, from its revision snapshot. */
@@ -120,19 +109,10 @@ async function valuesAt(specId: number, version: number | null): Promise<Values 
   const rev = await AppDataSource.getRepository(SpecRevision).findOneBy({ specId, version });
   if (!rev) return null;
   const s = rev.snapshot;
-  return {
-    min: s.min,
-    nominal: s.nominal,
-    max: s.max,
-    unit: s.unit,
-    refTempC: s.refTempC,
-    material: s.material,
-    testPoints: s.testPoints ?? '',
-    conditions: s.conditions ?? '',
-    source: s.sourceTitle
-      ? `${s.sourceTitle}${s.sourceEdition ? `, ${s.sourceEdition}` : ''}, p. ${s.sourcePage ?? ''}`
-      : null,
-  };
+  return reviewValues(
+    s,
+    s.sourceTitle ? citationText({ title: s.sourceTitle, edition: s.sourceEdition }, s.sourcePage) : null,
+  );
 }
 
 export async function toReview(r: Correction): Promise<CorrectionReviewDto> {
@@ -141,18 +121,11 @@ export async function toReview(r: Correction): Promise<CorrectionReviewDto> {
     r.specId && r.kind === 'change' ? await AppDataSource.getRepository(Spec).findOneBy({ id: r.specId }) : null;
   const current = spec ? await valuesOfSpec(spec) : null;
   const before = spec ? await valuesAt(spec.id, r.baseVersion) : null;
-  const p = r.proposed as Record<string, unknown>;
-  const proposed: Values = {
-    min: p.min,
-    nominal: p.nominal,
-    max: p.max,
-    unit: p.unit,
-    refTempC: p.refTempC,
-    material: p.material ?? current?.material ?? null,
-    testPoints: p.testPoints ?? '',
-    conditions: p.conditions ?? '',
-    source: citationText(r.citation),
-  };
+  const p = r.proposed;
+  const proposed = reviewValues(
+    { ...p, material: p.material ?? current?.material ?? null },
+    citationText(r.citation, r.citation.page),
+  );
   return {
     ...dto,
     stale: !!spec && spec.version !== r.baseVersion,

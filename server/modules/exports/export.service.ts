@@ -5,7 +5,8 @@
  */
 import type { ExportQuery } from '@/lib/contracts/imports';
 import { toSpecCsv, type SpecCsvRow } from '@/lib/csv';
-import type { CanonicalUnit } from '@/lib/units';
+import { hasFlag } from '@/lib/contracts/spec-fields';
+import { CSV_FIELDS } from '@/lib/csv/columns';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import { foldKey } from '../library/keys';
@@ -43,20 +44,22 @@ async function orderedIds(filter: Filter): Promise<number[]> {
   return rows.map((r) => r.id);
 }
 
-type DbRow = Omit<SpecCsvRow, 'unit' | 'material'> & { id: number; unit: string; material: 'copper' | 'none' };
+/** A CSV field's value as selected: text cells as '' when empty, as the import format writes them. */
+function selected(f: (typeof CSV_FIELDS)[number]): string {
+  const column = f.column ? `s.${f.column}` : `src.${f.sourceColumn}`;
+  const asText = f.kind === 'text' && !hasFlag(f, 'required') && !hasFlag(f, 'csvEmptyIsNull');
+  return `${asText ? `COALESCE(${column}, '')` : column} AS ${f.key}`;
+}
+const VALUES = CSV_FIELDS.map(selected).join(', ');
 
 async function rowsFor(ids: number[]): Promise<SpecCsvRow[]> {
-  const rows: DbRow[] = await AppDataSource.query(
+  const rows: (SpecCsvRow & { id: number })[] = await AppDataSource.query(
     `SELECT s.id, mk.name AS make, vm.name AS model, vm.year_from AS yearFrom, vm.year_to AS yearTo, vm.variant,
-            c.name AS component, s.parameter, s.min_value AS min, s.nominal_value AS nominal, s.max_value AS max, s.unit,
-            s.ref_temp_c AS refTempC, s.material, COALESCE(s.test_points, '') AS testPoints,
-            COALESCE(s.conditions, '') AS conditions, COALESCE(src.title, '') AS sourceTitle,
-            COALESCE(src.edition, '') AS sourceEdition, COALESCE(s.source_page, '') AS sourcePage,
-            src.url AS sourceUrl, COALESCE(s.notes, '') AS notes
+            c.name AS component, ${VALUES}
        ${FROM} WHERE s.id IN (?)`,
     [ids],
   );
-  const byId = new Map(rows.map(({ id, ...row }) => [id, { ...row, unit: row.unit as CanonicalUnit }]));
+  const byId = new Map(rows.map(({ id, ...row }) => [id, row]));
   return ids.map((id) => byId.get(id)).filter((r): r is SpecCsvRow => r !== undefined);
 }
 

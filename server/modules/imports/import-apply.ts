@@ -11,26 +11,27 @@
 import type { EntityManager } from 'typeorm';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
-import { FIRST } from './import-stage';
+import { COLUMN_FIELDS } from '@/lib/contracts/spec-fields';
+import { FIRST, STAGED_SPEC_COLUMNS, STAGED_TABLE, firstOf } from './import-rows';
 
 export type { Actor } from '@/server/auth/actor';
 
-const STAGED = 'import_batch_rows st';
+const STAGED = `${STAGED_TABLE} st`;
 /**
  * The staged rows read through (batch_id, firsts), for steps that need only a few rows (each
  * make's, model's or source's first); components are many, and a plain scan reads them faster.
  */
-const FIRSTS = 'import_batch_rows st FORCE INDEX (idx_import_batch_rows_firsts)';
+const FIRSTS = `${STAGED_TABLE} st FORCE INDEX (idx_import_batch_rows_firsts)`;
 const CREATED = "st.batch_id = ? AND st.action = 'create'";
-/** `firsts` values with the bit set, so the index (batch_id, firsts) reads only those rows, not the whole batch. */
-const firstOf = (bit: number) =>
-  `st.firsts IN (${Array.from({ length: 16 }, (_, v) => v)
-    .filter((v) => v & bit)
-    .join(', ')})`;
 /** A key that MariaDB's collation finds equal to one already inserted this statement is the same row. */
 const sameRow = (table: string) => `ON DUPLICATE KEY UPDATE ${table}.id = ${table}.id`;
 /** Batch number → library id, per connection, for this commit only. */
 const MAPS = ['import_model_ids', 'import_component_ids', 'import_source_ids'];
+
+/** The spec columns a staged row sets, as staged under the same names. */
+const SPEC_COLUMNS = STAGED_SPEC_COLUMNS.join(', ');
+const FROM_STAGED = STAGED_SPEC_COLUMNS.map((c) => `st.${c}`).join(', ');
+const SET_FROM_STAGED = STAGED_SPEC_COLUMNS.map((c) => `s.${c} = st.${c}`).join(', ');
 
 const stale = (detail: string, extras: Record<string, unknown> = {}) =>
   AppError.conflict(`${detail} Upload the file again to see a fresh preview.`, extras);
@@ -140,10 +141,8 @@ async function insertSpecs(m: EntityManager, batchId: number, expected: number):
   let result: { affectedRows: number };
   try {
     result = await m.query(
-      `INSERT INTO specs (id, component_id, parameter, parameter_key, quantity_kind, min_value, nominal_value,
-        max_value, unit, ref_temp_c, material, test_points, conditions, notes, source_id, source_page, status, version)
-      SELECT STRAIGHT_JOIN ? + st.create_ord, ci.id, st.parameter, st.parameter_key, st.quantity_kind, st.min_value, st.nominal_value, st.max_value,
-             st.unit, st.ref_temp_c, st.material, st.test_points, st.conditions, st.notes, si.id, st.source_page, 'published', 1
+      `INSERT INTO specs (id, component_id, parameter_key, quantity_kind, ${SPEC_COLUMNS}, source_id, status, version)
+      SELECT STRAIGHT_JOIN ? + st.create_ord, ci.id, st.parameter_key, st.quantity_kind, ${FROM_STAGED}, si.id, 'published', 1
         FROM ${STAGED} JOIN import_component_ids ci ON ci.ord = st.component_ord JOIN import_source_ids si ON si.ord = st.source_ord
        WHERE ${CREATED}`,
       [base, batchId],
@@ -160,10 +159,7 @@ async function insertSpecs(m: EntityManager, batchId: number, expected: number):
 async function updateSpecs(m: EntityManager, batchId: number, expected: number) {
   const result = await m.query(
     `UPDATE ${STAGED} STRAIGHT_JOIN specs s ON s.id = st.spec_id STRAIGHT_JOIN import_source_ids si ON si.ord = st.source_ord
-       SET s.parameter = st.parameter, s.quantity_kind = st.quantity_kind, s.min_value = st.min_value,
-           s.nominal_value = st.nominal_value, s.max_value = st.max_value, s.unit = st.unit, s.ref_temp_c = st.ref_temp_c,
-           s.material = st.material, s.test_points = st.test_points, s.conditions = st.conditions, s.notes = st.notes,
-           s.source_id = si.id, s.source_page = st.source_page, s.version = s.version + 1
+       SET s.quantity_kind = st.quantity_kind, ${SET_FROM_STAGED}, s.source_id = si.id, s.version = s.version + 1
      WHERE st.batch_id = ? AND st.action = 'update' AND s.version = st.base_version`,
     [batchId],
   );
@@ -173,13 +169,18 @@ async function updateSpecs(m: EntityManager, batchId: number, expected: number) 
 
 const REVISION =
   'INSERT INTO spec_revisions (spec_id, version, snapshot, changed_fields, author_id, author_name, reason, origin, origin_ref)';
-/** The revision snapshot (the SpecSnapshot of spec-snapshot.ts) built from the staged values and the cited source. */
-const snapshot = (
-  status: string,
-) => `JSON_OBJECT('parameter', st.parameter, 'min', st.min_value, 'nominal', st.nominal_value,
-  'max', st.max_value, 'unit', st.unit, 'refTempC', st.ref_temp_c, 'material', st.material, 'testPoints', st.test_points,
-  'conditions', st.conditions, 'notes', st.notes, 'sourcePage', st.source_page, 'sourceId', src.id, 'sourceTitle', src.title,
-  'sourceEdition', src.edition, 'status', ${status})`;
+/**
+ * The revision snapshot (lib/contracts/spec-snapshot.ts snapshotOfSpec, in its key order) of
+ * the spec row `s` as this commit wrote it, citing the source `src`.
+ */
+const SNAPSHOT = `JSON_OBJECT(${COLUMN_FIELDS.map((f) =>
+  [
+    ...(f.key === 'sourcePage'
+      ? ["'sourceId', src.id", "'sourceTitle', src.title", "'sourceEdition', src.edition"]
+      : []),
+    `'${f.key}', s.${f.column}`,
+  ].join(', '),
+).join(', ')})`;
 const CITED = 'JOIN import_source_ids si ON si.ord = st.source_ord JOIN sources src ON src.id = si.id';
 
 async function insertRevisions(
@@ -191,14 +192,14 @@ async function insertRevisions(
 ) {
   if (counts.created > 0) {
     await m.query(
-      `${REVISION} SELECT STRAIGHT_JOIN ? + st.create_ord, 1, ${snapshot("'published'")}, '["created"]', ?, ?, ?, 'import', ?
-        FROM ${STAGED} ${CITED} WHERE ${CREATED}`,
-      [base, ...author, batchId],
+      `${REVISION} SELECT STRAIGHT_JOIN s.id, 1, ${SNAPSHOT}, '["created"]', ?, ?, ?, 'import', ?
+        FROM ${STAGED} JOIN specs s ON s.id = ? + st.create_ord ${CITED} WHERE ${CREATED}`,
+      [...author, base, batchId],
     );
   }
   if (counts.updated > 0) {
     await m.query(
-      `${REVISION} SELECT STRAIGHT_JOIN s.id, s.version, ${snapshot('s.status')}, JSON_EXTRACT(st.changes, '$[*].field'), ?, ?, ?, 'import', ?
+      `${REVISION} SELECT STRAIGHT_JOIN s.id, s.version, ${SNAPSHOT}, JSON_EXTRACT(st.changes, '$[*].field'), ?, ?, ?, 'import', ?
         FROM ${STAGED} JOIN specs s ON s.id = st.spec_id ${CITED} WHERE st.batch_id = ? AND st.action = 'update'`,
       [...author, batchId],
     );

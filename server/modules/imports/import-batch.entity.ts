@@ -1,12 +1,13 @@
+import { IMPORT_STATUSES, type ImportStatus } from '@/lib/contracts/enums';
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 
 /** `warnings` (rows accepted with a plausibility warning) is absent on batches from before it existed. */
 export type ImportCounts = { created: number; updated: number; unchanged: number; rejected: number; warnings?: number };
-export type ImportStatus = 'previewed' | 'committed' | 'failed';
 
 /**
  * One uploaded or loaded CSV file: what it would change and whether it was committed.
- * Its rows, each with the planned action, live in import_batch_rows (see import-stage.ts).
+ * Its rows, each with the planned action, live in import_batch_rows (columns and flags in
+ * import-rows.ts, written by import-stage.ts, committed by import-apply.ts).
  */
 @Entity({ name: 'import_batches' })
 export class ImportBatch {
@@ -31,11 +32,11 @@ export class ImportBatch {
   @Column({ type: 'json' })
   counts: ImportCounts;
 
-  /** File-level problems (a failed batch), or rows rejected by the demo loader: line, column and a plain reason. */
+  /** File-level problems of a failed batch: line, column and a plain reason (rejected rows are staged rows). */
   @Column({ name: 'row_errors', type: 'json' })
   rowErrors: { line: number; column: string | null; reason: string }[];
 
-  @Column({ type: 'enum', enum: ['previewed', 'committed', 'failed'] })
+  @Column({ type: 'enum', enum: IMPORT_STATUSES })
   status: ImportStatus;
 
   @Index('idx_import_batches_created')

@@ -5,6 +5,8 @@
  */
 import type { EntityManager } from 'typeorm';
 import type { SpecCsvRow } from '@/lib/csv';
+import { SPEC_FIELDS, hasFlag, type KeysWith, type SpecValues } from '@/lib/contracts/spec-fields';
+import { sourceName } from '@/lib/format/citation';
 import type { Spec } from '../specs/spec.entity';
 import { foldKey, modelKey, sourceKey } from '../library/keys';
 
@@ -21,57 +23,38 @@ export type PlannedRow = {
 
 type Comparable = Record<string, string | number | null>;
 
+/** The fields the plan compares, in order; the cited source's title and edition compare as one 'source'. */
+const COMPARED = SPEC_FIELDS.filter((f) => hasFlag(f, 'imported'));
+const SPEC_COMPARED = COMPARED.filter((f) => f.column !== null);
+type ComparedKey = Extract<KeysWith<'imported'>, keyof SpecValues>;
+
+/** The compared values, each spec field by `valueOf`, the source once (where its first field stands). */
+function compared(valueOf: (key: ComparedKey) => string | number | null, source: string | null): Comparable {
+  const out: Comparable = {};
+  for (const f of COMPARED) {
+    if (f.column === null) out.source = source;
+    else out[f.key] = valueOf(f.key as ComparedKey);
+  }
+  return out;
+}
+
 /** The spec fields a CSV row sets, in the form both sides are compared in. */
 export function rowFields(row: SpecCsvRow): Comparable {
-  return {
-    min: row.min,
-    nominal: row.nominal,
-    max: row.max,
-    unit: row.unit,
-    refTempC: row.refTempC,
-    material: row.material,
-    testPoints: row.testPoints || null,
-    conditions: row.conditions || null,
-    notes: row.notes || null,
-    source: sourceKey({ title: row.sourceTitle, edition: row.sourceEdition }),
-    sourcePage: row.sourcePage || null,
-  };
+  const emptyAsNull = (v: string | number | null) => (v === '' ? null : v);
+  return compared((key) => emptyAsNull(row[key]), sourceKey({ title: row.sourceTitle, edition: row.sourceEdition }));
 }
 
 /** What the plan needs of an existing spec (read with plain SQL: 50 000 entities hydrate slowly). */
-type ExistingSpec = Pick<
-  Spec,
-  | 'id'
-  | 'version'
-  | 'min'
-  | 'nominal'
-  | 'max'
-  | 'unit'
-  | 'refTempC'
-  | 'material'
-  | 'testPoints'
-  | 'conditions'
-  | 'notes'
-  | 'sourcePage'
-> & {
+type ExistingSpec = Pick<Spec, 'id' | 'version' | ComparedKey> & {
   source: { title: string; edition: string } | null;
 };
 
 function specFields(spec: ExistingSpec): Comparable {
-  return {
-    min: spec.min,
-    nominal: spec.nominal,
-    max: spec.max,
-    unit: spec.unit,
-    refTempC: spec.refTempC,
-    material: spec.material,
-    testPoints: spec.testPoints,
-    conditions: spec.conditions,
-    notes: spec.notes,
-    source: spec.source ? sourceKey(spec.source) : null,
-    sourcePage: spec.sourcePage,
-  };
+  return compared((key) => spec[key], spec.source ? sourceKey(spec.source) : null);
 }
+
+/** The compared spec columns, selected under their field names. */
+const SELECTED = SPEC_COMPARED.map((f) => `s.${f.column} AS ${f.key}`).join(', ');
 
 export function diffFields(before: Comparable, after: Comparable): FieldChange[] {
   return Object.keys(after)
@@ -93,8 +76,7 @@ async function loadExisting(m: EntityManager, rows: SpecCsvRow[]): Promise<Map<s
   const existing = new Map<string, ExistingSpec>();
   for (let i = 0; i < modelKeys.length; i += 500) {
     const found: ExistingRow[] = await m.query(
-      `SELECT s.id, s.version, s.min_value AS min, s.nominal_value AS nominal, s.max_value AS max, s.unit, s.ref_temp_c AS refTempC,
-              s.material, s.test_points AS testPoints, s.conditions, s.notes, s.source_page AS sourcePage,
+      `SELECT s.id, s.version, ${SELECTED},
               src.title AS sourceTitle, src.edition AS sourceEdition, CONCAT(vm.model_key, '|', c.name_key, '|', s.parameter_key) AS \`key\`
          FROM vehicle_models vm JOIN components c ON c.model_id = vm.id JOIN specs s ON s.component_id = c.id
          LEFT JOIN sources src ON src.id = s.source_id
@@ -113,7 +95,7 @@ async function loadExisting(m: EntityManager, rows: SpecCsvRow[]): Promise<Map<s
 
 /** Sources compare by natural key (case and spacing ignored) but show as the editor wrote them. */
 const sourceLabel = (s: { title: string; edition: string }) =>
-  s.edition.trim() ? `${s.title.trim()}, ${s.edition.trim()}` : s.title.trim();
+  sourceName({ title: s.title.trim(), edition: s.edition.trim() });
 
 function readable(change: FieldChange, spec: ExistingSpec, row: SpecCsvRow): FieldChange {
   if (change.field !== 'source') return change;

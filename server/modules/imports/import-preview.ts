@@ -14,6 +14,7 @@ import type { FieldChangeDto } from '@/lib/contracts/curation';
 import { formatRange, type CanonicalUnit } from '@/lib/units';
 import type { EntityManager } from 'typeorm';
 import type { ImportBatch } from './import-batch.entity';
+import { PREVIEW_COLUMNS, STAGED_TABLE } from './import-rows';
 
 type StagedRow = {
   line: number;
@@ -28,7 +29,7 @@ type StagedRow = {
   min: number | null;
   nominal: number | null;
   max: number | null;
-  unit: string;
+  unit: CanonicalUnit;
   changes: string | null;
   problems: string | null;
 };
@@ -62,13 +63,10 @@ function toRow(r: StagedRow): ImportRowDto {
     variant: r.variant,
     component: r.component,
     parameter: r.parameter,
-    display: formatRange(r.min, r.nominal, r.max, r.unit as CanonicalUnit),
+    display: formatRange(r.min, r.nominal, r.max, r.unit),
     warnings: parse<Note>(r.problems).map((n) => ({ line: r.line, ...n })),
   };
 }
-
-const COLUMNS = `st.line, st.make, st.model, st.year_from AS yearFrom, st.year_to AS yearTo, st.variant, st.component,
-  st.parameter, st.min_value AS min, st.nominal_value AS nominal, st.max_value AS max, st.unit, st.changes, st.problems`;
 
 /** A committed batch's created rows find their spec by natural key (the commit does not write ids back). */
 const CREATED_SPEC = `LEFT JOIN vehicle_models vm ON vm.model_key = st.model_key
@@ -83,7 +81,7 @@ async function group(
 ): Promise<StagedRow[]> {
   const created = action === 'create' && batch.status === 'committed';
   return m.query(
-    `SELECT ${COLUMNS}, ${created ? 's.id' : 'st.spec_id'} AS specId FROM import_batch_rows st ${created ? CREATED_SPEC : ''}
+    `SELECT ${PREVIEW_COLUMNS}, ${created ? 's.id' : 'st.spec_id'} AS specId FROM ${STAGED_TABLE} st ${created ? CREATED_SPEC : ''}
       WHERE st.batch_id = ? AND st.action = ? ORDER BY st.line LIMIT ? OFFSET ?`,
     [batch.id, action, page.limit, page.offset],
   );

@@ -2,66 +2,23 @@
  * The rows of a previewed file, kept in import_batch_rows with their planned action, so
  * that the preview can be shown again and the commit applies exactly what it showed
  * without parsing the file twice. Written with multi-row INSERTs (no entity: the commit
- * works on this table set-based, see import-apply.ts).
+ * works on this table set-based, see import-apply.ts); its columns are import-rows.ts's.
  */
 import type { EntityManager } from 'typeorm';
-import type { RowProblem } from '@/lib/csv';
+import type { RowProblem, SpecCsvRow } from '@/lib/csv';
+import { hasFlag } from '@/lib/contracts/spec-fields';
 import { unitKind } from '@/lib/units';
 import { foldKey, makeKey, modelKey, sourceKey } from '../library/keys';
 import type { PlannedRow } from './import-plan';
+import { FIRST, INSERT_STAGED, STAGED_COLUMNS, STAGED_FIELDS } from './import-rows';
 
 /** Rows per INSERT: about 1 KB each, far below max_allowed_packet (16 MB). */
 const CHUNK = 1000;
-
-const COLUMNS = [
-  'batch_id',
-  'line',
-  'action',
-  'spec_id',
-  'base_version',
-  'make',
-  'model',
-  'year_from',
-  'year_to',
-  'variant',
-  'component',
-  'parameter',
-  'make_key',
-  'model_key',
-  'component_key',
-  'parameter_key',
-  'source_key',
-  'model_ord',
-  'component_ord',
-  'source_ord',
-  'firsts',
-  'create_ord',
-  'quantity_kind',
-  'min_value',
-  'nominal_value',
-  'max_value',
-  'unit',
-  'ref_temp_c',
-  'material',
-  'test_points',
-  'conditions',
-  'notes',
-  'source_title',
-  'source_edition',
-  'source_page',
-  'source_url',
-  'changes',
-  'problems',
-];
-const INSERT = `INSERT INTO import_batch_rows (${COLUMNS.map((c) => `\`${c}\``).join(', ')}) VALUES ?`;
 
 type Cell = string | number | null;
 const json = (value: unknown[]): string | null => (value.length ? JSON.stringify(value) : null);
 
 const problemsOf = (problems: RowProblem[]) => problems.map((p) => ({ column: p.column, reason: p.reason }));
-
-/** Bits of `firsts`: the row is the first of the batch's created rows to need this make, model, component or source. */
-export const FIRST = { make: 1, model: 2, component: 4, source: 8 } as const;
 
 /**
  * Numbers the batch's distinct models, components and sources (1, 2, …) and marks the
@@ -123,6 +80,14 @@ function keyCells(p: PlannedRow, n: Numbering): Cell[] {
   ];
 }
 
+/** A field's staged cell: trimmed text, empty optional spec text as null (as the spec stores it). */
+function valueCell(f: (typeof STAGED_FIELDS)[number], row: SpecCsvRow): Cell {
+  const v = row[f.key];
+  if (typeof v !== 'string') return v;
+  const nullable = f.column !== null && !hasFlag(f, 'required');
+  return nullable ? v || null : v.trim();
+}
+
 function plannedCells(batchId: number, p: PlannedRow, warnings: RowProblem[], n: Numbering): Cell[] {
   const r = p.row;
   return [
@@ -137,39 +102,26 @@ function plannedCells(batchId: number, p: PlannedRow, warnings: RowProblem[], n:
     r.yearTo,
     r.variant.trim(),
     r.component.trim(),
-    r.parameter.trim(),
     ...keyCells(p, n),
     unitKind(r.unit),
-    r.min,
-    r.nominal,
-    r.max,
-    r.unit,
-    r.refTempC,
-    r.material,
-    r.testPoints || null,
-    r.conditions || null,
-    r.notes || null,
-    r.sourceTitle.trim(),
-    r.sourceEdition.trim(),
-    r.sourcePage || null,
-    r.sourceUrl,
+    ...STAGED_FIELDS.map((f) => valueCell(f, r)),
     json(p.changes),
     json(problemsOf(warnings)),
   ];
 }
 
 function rejectedCells(batchId: number, line: number, problems: RowProblem[]): Cell[] {
-  const cells: Cell[] = COLUMNS.map(() => null);
+  const cells: Cell[] = STAGED_COLUMNS.map(() => null);
   cells[0] = batchId;
   cells[1] = line;
   cells[2] = 'rejected';
-  cells[COLUMNS.indexOf('firsts')] = 0;
-  cells[COLUMNS.length - 1] = json(problemsOf(problems));
+  cells[STAGED_COLUMNS.indexOf('firsts')] = 0;
+  cells[STAGED_COLUMNS.length - 1] = json(problemsOf(problems));
   return cells;
 }
 
 async function insertChunked(m: EntityManager, rows: Cell[][]) {
-  for (let i = 0; i < rows.length; i += CHUNK) await m.query(INSERT, [rows.slice(i, i + CHUNK)]);
+  for (let i = 0; i < rows.length; i += CHUNK) await m.query(INSERT_STAGED, [rows.slice(i, i + CHUNK)]);
 }
 
 /** Groups problems by line: one rejected row may have several. */

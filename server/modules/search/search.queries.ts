@@ -5,6 +5,7 @@
  */
 import { AppDataSource } from '@/server/db/data-source';
 import type { QuantityKind } from '@/lib/contracts/library';
+import type { CanonicalUnit } from '@/lib/units';
 import { Spec } from '../specs/spec.entity';
 import type { SearchDoc } from './search-index';
 
@@ -14,7 +15,7 @@ export type IndexedSpec = SearchDoc & {
   min: number | null;
   nominal: number | null;
   max: number | null;
-  unit: string;
+  unit: CanonicalUnit;
 };
 
 const published = () => AppDataSource.getRepository(Spec).createQueryBuilder('s').where("s.status = 'published'");

@@ -68,7 +68,7 @@ export async function searchLibrary(query: SearchQuery): Promise<SearchResultDto
       nominal: d.nominal,
       max: d.max,
       unit: d.unit,
-      display: formatRange(d.min, d.nominal, d.max, d.unit as CanonicalUnit),
+      display: formatRange(d.min, d.nominal, d.max, d.unit),
       score: Math.round(score * 1000) / 1000,
     });
   }

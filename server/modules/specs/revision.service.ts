@@ -4,14 +4,14 @@
  */
 import type { RevertSpecBody, RevisionDiffDto, RevisionListDto } from '@/lib/contracts/curation';
 import type { SpecDetailDto } from '@/lib/contracts/library';
+import { diffSnapshots, valuesOfSnapshot } from '@/lib/contracts/spec-snapshot';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
 import { markLibraryChanged } from '../search/search.service';
 import { Spec } from './spec.entity';
 import { SpecRevision } from './spec-revision.entity';
-import { diffSnapshots } from './spec-snapshot';
-import { checkValues, inSpecTransaction, lockSpec, writeSpecChange, type SpecValues } from './spec-write';
+import { checkValues, inSpecTransaction, lockSpec, writeSpecChange } from './spec-write';
 import { getSpec } from './spec.service';
 
 /** Newest first, each with its changes against the revision before it. */
@@ -52,22 +52,7 @@ export async function revertSpec(specId: number, body: RevertSpecBody, actor: Ac
   const revision = await revisionOf(specId, body.revisionId);
   const changed = await inSpecTransaction(async (m) => {
     const { spec, source } = await lockSpec(m, specId, body.version);
-    const s = revision.snapshot;
-    const values: SpecValues = {
-      parameter: s.parameter ?? spec.parameter,
-      min: s.min ?? null,
-      nominal: s.nominal ?? null,
-      max: s.max ?? null,
-      unit: s.unit ?? spec.unit,
-      refTempC: s.refTempC ?? null,
-      material: s.material ?? spec.material,
-      testPoints: s.testPoints ?? null,
-      conditions: s.conditions ?? null,
-      notes: s.notes ?? null,
-      sourceId: s.sourceId ?? null,
-      sourcePage: s.sourcePage ?? null,
-      status: s.status ?? spec.status,
-    };
+    const values = valuesOfSnapshot(revision.snapshot, spec);
     checkValues(values);
     return writeSpecChange(m, spec, source, {
       values,

@@ -6,7 +6,9 @@
 import type { EntityManager } from 'typeorm';
 import type { CreateSpecBody, UpdateSpecBody } from '@/lib/contracts/curation';
 import type { SpecDetailDto } from '@/lib/contracts/library';
-import { defaultMaterial } from '@/lib/csv/plausibility';
+import { EDITABLE_FIELDS, type SpecValues } from '@/lib/contracts/spec-fields';
+import { pickValues, snapshotOfSpec } from '@/lib/contracts/spec-snapshot';
+import { defaultMaterial } from '@/lib/specs/classify';
 import { parseUnit } from '@/lib/units';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
@@ -15,9 +17,8 @@ import { markLibraryChanged } from '../search/search.service';
 import { Spec } from './spec.entity';
 import { SpecRevision } from './spec-revision.entity';
 import { Source } from '../library/source.entity';
-import { snapshotOfSpec } from './spec-snapshot';
 import { ensureComponent, ensureSource } from './spec-library';
-import { StaleSpec, checkValues, inSpecTransaction, lockSpec, writeSpecChange, type SpecValues } from './spec-write';
+import { StaleSpec, checkValues, inSpecTransaction, lockSpec, writeSpecChange } from './spec-write';
 import { getSpec } from './spec.service';
 
 const orNull = (s: string) => s || null;
@@ -38,21 +39,8 @@ export async function insertNewSpec(
     );
   const sourceId = await ensureSource(m, b.source);
   const kind = parseUnit(b.unit)!.kind;
-  const values: SpecValues = {
-    parameter: b.parameter,
-    min: b.min,
-    nominal: b.nominal,
-    max: b.max,
-    unit: b.unit,
-    refTempC: b.refTempC,
-    material: b.material ?? defaultMaterial(b.parameter, kind),
-    testPoints: orNull(b.testPoints),
-    conditions: orNull(b.conditions),
-    notes: orNull(b.notes),
-    sourceId,
-    sourcePage: b.source.page,
-    status: b.status,
-  };
+  const material = b.material ?? defaultMaterial(b.parameter, kind);
+  const values = pickValues({ ...b, material, sourceId, sourcePage: b.source.page });
   const { identifiers } = await m
     .getRepository(Spec)
     .insert({ ...values, componentId, parameterKey: foldKey(b.parameter), quantityKind: kind, version: 1 });
@@ -83,26 +71,15 @@ export async function createSpec(body: CreateSpecBody, actor: Actor): Promise<Sp
   return getSpec(id);
 }
 
-/** The spec an edit would leave: the body's fields over the current ones. */
+/** The spec an edit would leave: the body's fields over the current ones (empty text clears a field). */
 function merge(spec: Spec, b: UpdateSpecBody, sourceId: number | null): SpecValues {
-  const pick = <K extends keyof SpecValues>(key: K, value: SpecValues[K] | undefined): SpecValues[K] =>
-    value === undefined ? spec[key] : value;
-  const text = (value: string | undefined, current: string | null) => (value === undefined ? current : orNull(value));
-  return {
-    parameter: pick('parameter', b.parameter),
-    min: pick('min', b.min),
-    nominal: pick('nominal', b.nominal),
-    max: pick('max', b.max),
-    unit: pick('unit', b.unit),
-    refTempC: pick('refTempC', b.refTempC),
-    material: pick('material', b.material),
-    testPoints: text(b.testPoints, spec.testPoints),
-    conditions: text(b.conditions, spec.conditions),
-    notes: text(b.notes, spec.notes),
-    sourceId,
-    sourcePage: b.source ? b.source.page : spec.sourcePage,
-    status: pick('status', b.status),
-  };
+  const values: SpecValues = { ...pickValues(spec), sourceId, sourcePage: b.source ? b.source.page : spec.sourcePage };
+  const set = values as Record<keyof SpecValues, unknown>;
+  for (const key of EDITABLE_FIELDS) {
+    const value = b[key];
+    if (value !== undefined) set[key] = typeof value === 'string' ? orNull(value) : value;
+  }
+  return values;
 }
 
 /** 200 with the spec as saved (unchanged, with no new revision, when the body changes nothing). */

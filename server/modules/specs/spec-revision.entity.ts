@@ -1,26 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { REVISION_ORIGINS, type RevisionOrigin } from '@/lib/contracts/enums';
+import type { SpecSnapshot } from '@/lib/contracts/spec-fields';
 import type { Spec } from './spec.entity';
-
-export type RevisionOrigin = 'edit' | 'import' | 'correction' | 'revert';
-
-/** The values of a spec as one revision left them (append-only history). */
-export type SpecSnapshot = {
-  parameter: string;
-  min: number | null;
-  nominal: number | null;
-  max: number | null;
-  unit: string;
-  refTempC: number | null;
-  material: 'copper' | 'none';
-  testPoints: string | null;
-  conditions: string | null;
-  notes: string | null;
-  sourceId: number | null;
-  sourceTitle: string | null;
-  sourceEdition: string | null;
-  sourcePage: string | null;
-  status: 'published' | 'draft';
-};
 
 @Entity({ name: 'spec_revisions' })
 @Index('uq_spec_revisions_spec_version', ['specId', 'version'], { unique: true })
@@ -55,7 +36,7 @@ export class SpecRevision {
   @Column({ type: 'varchar', length: 500 })
   reason: string;
 
-  @Column({ type: 'enum', enum: ['edit', 'import', 'correction', 'revert'] })
+  @Column({ type: 'enum', enum: REVISION_ORIGINS })
   origin: RevisionOrigin;
 
   /** The import batch, correction or revision this one came from, e.g. 'batch #3'. */

@@ -6,6 +6,8 @@
  */
 import type { EntityManager } from 'typeorm';
 import { specValueIssues } from '@/lib/contracts/curation';
+import type { SpecValues } from '@/lib/contracts/spec-fields';
+import { diffSnapshots, snapshotOfSpec } from '@/lib/contracts/spec-snapshot';
 import { parseUnit } from '@/lib/units';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
@@ -13,27 +15,9 @@ import type { Actor } from '@/server/auth/actor';
 import { foldKey } from '../library/keys';
 import { Source } from '../library/source.entity';
 import { Spec } from './spec.entity';
-import { SpecRevision, type RevisionOrigin } from './spec-revision.entity';
-import { diffSnapshots, snapshotOfSpec } from './spec-snapshot';
+import type { RevisionOrigin } from '@/lib/contracts/enums';
+import { SpecRevision } from './spec-revision.entity';
 import { getSpec } from './spec.service';
-
-/** The values a write sets (the component and identity of a spec never change). */
-export type SpecValues = Pick<
-  Spec,
-  | 'parameter'
-  | 'min'
-  | 'nominal'
-  | 'max'
-  | 'unit'
-  | 'refTempC'
-  | 'material'
-  | 'testPoints'
-  | 'conditions'
-  | 'notes'
-  | 'sourceId'
-  | 'sourcePage'
-  | 'status'
->;
 
 /** Thrown inside a transaction; becomes 409 with the current spec once it has rolled back. */
 export class StaleSpec extends Error {

@@ -9,10 +9,17 @@ import {
   UpdateDateColumn,
   VersionColumn,
 } from 'typeorm';
+import {
+  MATERIALS,
+  QUANTITY_KINDS,
+  SPEC_STATUSES,
+  type CanonicalUnit,
+  type Material,
+  type QuantityKind,
+  type SpecStatus,
+} from '@/lib/contracts/enums';
 import type { Component } from '../library/component.entity';
 import type { Source } from '../library/source.entity';
-
-export type QuantityKindColumn = 'resistance' | 'voltage' | 'current' | 'length';
 
 @Entity({ name: 'specs' })
 @Index('uq_specs_component_parameter', ['componentId', 'parameterKey'], { unique: true })
@@ -33,8 +40,8 @@ export class Spec {
   @Column({ name: 'parameter_key', type: 'varchar', length: 120 })
   parameterKey: string;
 
-  @Column({ name: 'quantity_kind', type: 'enum', enum: ['resistance', 'voltage', 'current', 'length'] })
-  quantityKind: QuantityKindColumn;
+  @Column({ name: 'quantity_kind', type: 'enum', enum: QUANTITY_KINDS })
+  quantityKind: QuantityKind;
 
   @Column({ name: 'min_value', type: 'double', nullable: true })
   min: number | null;
@@ -46,13 +53,13 @@ export class Spec {
   max: number | null;
 
   @Column({ type: 'varchar', length: 8 })
-  unit: string;
+  unit: CanonicalUnit;
 
   @Column({ name: 'ref_temp_c', type: 'double', nullable: true })
   refTempC: number | null;
 
-  @Column({ type: 'enum', enum: ['copper', 'none'], default: 'none' })
-  material: 'copper' | 'none';
+  @Column({ type: 'enum', enum: MATERIALS, default: 'none' })
+  material: Material;
 
   @Column({ name: 'test_points', type: 'text', nullable: true })
   testPoints: string | null;
@@ -74,8 +81,8 @@ export class Spec {
   @Column({ name: 'source_page', type: 'varchar', length: 200, nullable: true })
   sourcePage: string | null;
 
-  @Column({ type: 'enum', enum: ['published', 'draft'], default: 'published' })
-  status: 'published' | 'draft';
+  @Column({ type: 'enum', enum: SPEC_STATUSES, default: 'published' })
+  status: SpecStatus;
 
   /** Optimistic lock: every write states the version it was based on. */
   @VersionColumn({ type: 'int' })

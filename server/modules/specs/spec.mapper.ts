@@ -1,6 +1,6 @@
 /** Entities → DTOs. Services return DTOs, never entities. */
 import type { ComponentDto, ModelRefDto, RevisionDto, SourceDto, SpecSummaryDto } from '@/lib/contracts/library';
-import { formatRange, type CanonicalUnit } from '@/lib/units';
+import { formatRange } from '@/lib/units';
 import type { Spec } from './spec.entity';
 import type { SpecRevision } from './spec-revision.entity';
 import type { VehicleModel } from '../library/vehicle-model.entity';
@@ -21,7 +21,7 @@ export function toSpecSummary(s: Spec): SpecSummaryDto {
     material: s.material,
     status: s.status,
     version: s.version,
-    display: formatRange(s.min, s.nominal, s.max, s.unit as CanonicalUnit),
+    display: formatRange(s.min, s.nominal, s.max, s.unit),
   };
 }
 

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
-import type { Role } from '@/server/auth/roles';
+import { ROLES, type Role } from '@/lib/contracts/enums';
 
 @Entity({ name: 'users' })
 export class User {
@@ -19,7 +19,7 @@ export class User {
   @Column({ name: 'password_hash', type: 'varchar', length: 100 })
   passwordHash: string;
 
-  @Column({ type: 'enum', enum: ['contributor', 'editor', 'admin'], default: 'contributor' })
+  @Column({ type: 'enum', enum: ROLES, default: 'contributor' })
   role: Role;
 
   @Column({ name: 'email_verified_at', type: 'datetime', precision: 3, nullable: true })

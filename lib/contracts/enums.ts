@@ -1,0 +1,37 @@
+/**
+ * The domain's closed sets of values, declared once: the TypeORM entities (column enums),
+ * the request schemas and the DTOs all take them from here.
+ */
+import type { QuantityKind } from '../units';
+
+export type { CanonicalUnit, QuantityKind } from '../units';
+
+/** Every quantity a spec can measure, in the order the database enum lists them. */
+export const QUANTITY_KINDS = ['resistance', 'voltage', 'current', 'length'] as const satisfies readonly QuantityKind[];
+
+/** A winding's material: copper resistance is corrected for temperature; none is not. */
+export const MATERIALS = ['copper', 'none'] as const;
+export type Material = (typeof MATERIALS)[number];
+
+export const SPEC_STATUSES = ['published', 'draft'] as const;
+export type SpecStatus = (typeof SPEC_STATUSES)[number];
+
+/** What wrote a revision. */
+export const REVISION_ORIGINS = ['edit', 'import', 'correction', 'revert'] as const;
+export type RevisionOrigin = (typeof REVISION_ORIGINS)[number];
+
+export const IMPORT_STATUSES = ['previewed', 'committed', 'failed'] as const;
+export type ImportStatus = (typeof IMPORT_STATUSES)[number];
+
+export const CORRECTION_KINDS = ['change', 'new_spec', 'new_component'] as const;
+export type CorrectionKind = (typeof CORRECTION_KINDS)[number];
+
+export const CORRECTION_STATUSES = ['pending', 'accepted', 'rejected', 'withdrawn'] as const;
+export type CorrectionStatus = (typeof CORRECTION_STATUSES)[number];
+
+/** Roles, from least to most trusted; each role may do everything the ones before it may. */
+export const ROLES = ['contributor', 'editor', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+
+/** One problem with one field of a request, as a 400/422 problem lists them. */
+export type FieldError = { path: string; message: string };
