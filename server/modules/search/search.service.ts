@@ -4,7 +4,7 @@
  * checked at most every few seconds, or at once after markLibraryChanged().
  */
 import type { SearchQuery, SearchResultDto, SearchGroupDto } from '@/lib/contracts/library';
-import { formatRange, type CanonicalUnit } from '@/lib/units';
+import { formatRange } from '@/lib/units';
 import { SearchIndex } from './search-index';
 import { loadPublishedDocs, publishedFingerprint, type IndexedSpec } from './search.queries';
 import { markLibraryChanged, onLibraryChanged } from '../library/library-changes';
