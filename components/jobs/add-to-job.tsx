@@ -13,7 +13,7 @@ import { formatNumber } from '@/lib/units';
 import type { VerdictInput, VerdictResult } from '@/lib/verdict';
 import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
-import { formFailure } from '../account/form-state';
+import { formFailure } from '../ui/form-failure';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
