@@ -46,11 +46,7 @@ export default function ReviewCorrectionScreen() {
   return (
     <Screen testID="review-screen">
       <Stack.Screen options={{ title: `Correction #${r.id}` }} />
-      <CorrectionCard c={r}>
-        <Text variant="small" color="textMuted">
-          By {r.proposer.name} · {r.proposer.accepted} accepted, {r.proposer.rejected} not accepted so far
-        </Text>
-      </CorrectionCard>
+      <CorrectionCard c={r} showProposer />
       {r.stale ? (
         <Caution
           title="the spec changed after this proposal"
