@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { useLocalSearchParams } from 'expo-router';
 import { BatteryCharge } from '@/components/calculator/battery-charge';
 import { Calculator } from '@/components/calculator/calculator';
 import { LimitsForm } from '@/components/calculator/limits-form';
@@ -10,6 +11,7 @@ import { Screen } from '@/components/ui/screen';
 import { TwoColumns } from '@/components/ui/two-columns';
 import { Text } from '@/components/ui/text';
 import { parseDecimal } from '@/lib/calculator/form';
+import { jobLink } from '@/lib/hooks/use-add-to-job';
 import { unitsOfKind, type CanonicalUnit, type QuantityKind } from '@/lib/units';
 
 type Mode = QuantityKind | 'diode' | 'continuity';
@@ -24,6 +26,7 @@ const MODES: { value: Mode; label: string }[] = [
 
 /** For a spec that is not in the library: type the limits by hand. */
 export default function StandaloneCalculatorScreen() {
+  const link = useLocalSearchParams<{ job?: string; retake?: string }>();
   const [mode, setMode] = useState<Mode>('resistance');
   const [limits, setLimits] = useState({ min: '', nominal: '', max: '', refTempC: '' });
   const [unit, setUnit] = useState<CanonicalUnit>('Ω');
@@ -71,7 +74,7 @@ export default function StandaloneCalculatorScreen() {
         }
         second={
           mode !== 'diode' && mode !== 'continuity' ? (
-            <Calculator spec={spec} kind={mode} testID="standalone-calculator" />
+            <Calculator spec={spec} kind={mode} testID="standalone-calculator" job={jobLink(link)} />
           ) : null
         }
       />

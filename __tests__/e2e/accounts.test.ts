@@ -7,6 +7,7 @@ import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
 import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
+import { expectText, expectVisible, step } from '../helpers/expect-visible';
 
 // Declared before useTestDatabase(): after-all hooks run in declaration order, and the
 // outbox worker must stop (and finish a round in flight) before the database closes.
@@ -80,67 +81,73 @@ describe('accounts in the browser', () => {
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
 
-    await page.goto(`${web.url}/sign-up`);
-    const signUp = page.getByTestId('sign-up-screen');
-    await signUp.getByTestId('sign-up-submit').click();
-    await expect(signUp.getByText('Use at least 2 characters').isVisible()).resolves.toBe(true);
-    await signUp.getByLabel('Your name', { exact: true }).fill(TECH.name);
-    await signUp.getByLabel('E-mail address', { exact: true }).fill(TECH.email);
-    await signUp.getByLabel('Password', { exact: true }).fill(TECH.password);
-    await screenshot(page, 'accounts-sign-up-phone');
-    await signUp.getByTestId('sign-up-submit').click();
-    await signUp.getByTestId('sign-up-done').waitFor();
-    await expect(signUp.getByTestId('sign-up-done').innerText()).resolves.toContain(TECH.email);
-    await screenshot(page, 'accounts-sign-up-done-phone');
+    await step('sign up', async () => {
+      await page.goto(`${web.url}/sign-up`);
+      const signUp = page.getByTestId('sign-up-screen');
+      await signUp.getByTestId('sign-up-submit').click();
+      await expectVisible(signUp.getByText('Use at least 2 characters'), 'the name’s message');
+      await signUp.getByLabel('Your name', { exact: true }).fill(TECH.name);
+      await signUp.getByLabel('E-mail address', { exact: true }).fill(TECH.email);
+      await signUp.getByLabel('Password', { exact: true }).fill(TECH.password);
+      await screenshot(page, 'accounts-sign-up-phone');
+      await signUp.getByTestId('sign-up-submit').click();
+      await expectVisible(signUp.getByTestId('sign-up-done'));
+      await expectText(signUp.getByTestId('sign-up-done'), TECH.email);
+      await screenshot(page, 'accounts-sign-up-done-phone');
+    });
+    const usedLink = await step('confirm the address through the mailbox link, once', async () => {
+      const mail = await waitForMail(page, TECH.email);
+      await expectText(mail, /Confirm your Specbench e-mail address/);
+      await screenshot(page, 'accounts-mailbox-phone');
+      // The link points at config.appUrl, not this test server's port: keep its path and query.
+      const href = new URL((await mail.getByRole('link').first().getAttribute('href'))!);
+      expect(href.pathname).toBe('/verify');
+      await page.goto(`${web.url}/verify?token=${encodeURIComponent(href.searchParams.get('token')!)}`);
+      const done = page.getByTestId('verify-done');
+      await expectVisible(done);
+      await expectText(done, TECH.email);
+      await screenshot(page, 'accounts-verify-phone');
 
-    const mail = await waitForMail(page, TECH.email);
-    await expect(mail.innerText()).resolves.toMatch(/Confirm your Specbench e-mail address/);
-    await screenshot(page, 'accounts-mailbox-phone');
-    // The link points at config.appUrl, not this test server's port: keep its path and query.
-    const link = new URL((await mail.getByRole('link').first().getAttribute('href'))!);
-    expect(link.pathname).toBe('/verify');
-    await page.goto(`${web.url}/verify?token=${encodeURIComponent(link.searchParams.get('token')!)}`);
-    const done = page.getByTestId('verify-done');
-    await done.waitFor();
-    await expect(done.innerText()).resolves.toContain(TECH.email);
-    await screenshot(page, 'accounts-verify-phone');
+      // The link works once: a second visit says so and still offers the way on.
+      await page.goto(`${web.url}/verify?token=${encodeURIComponent(href.searchParams.get('token')!)}`);
+      const failed = page.getByTestId('verify-failed');
+      await expectVisible(failed);
+      await expectText(failed, /already been used/);
+      await screenshot(page, 'accounts-verify-used-phone');
+      return failed;
+    });
 
-    // The link works once: a second visit says so and still offers the way on.
-    await page.goto(`${web.url}/verify?token=${encodeURIComponent(link.searchParams.get('token')!)}`);
-    const failed = page.getByTestId('verify-failed');
-    await failed.waitFor();
-    await expect(failed.innerText()).resolves.toMatch(/already been used/);
-    await screenshot(page, 'accounts-verify-used-phone');
+    await step('sign in: a wrong password is refused, the right one signs in and survives a reload', async () => {
+      await usedLink.getByRole('button', { name: 'Sign in' }).click();
+      const signInScreen = page.getByTestId('sign-in-screen');
+      await expectVisible(signInScreen);
+      await signIn(page, { email: TECH.email, password: 'not-the-password' });
+      await expectText(signInScreen.getByTestId('sign-in-error'), /e-mail address or the password is wrong/);
+      await screenshot(page, 'accounts-sign-in-error-phone');
+      await signIn(page, TECH);
+      await expectVisible(page.getByTestId('search-screen'));
+      await expect(headerAccount(page).innerText()).resolves.toBe(TECH.name);
+      await screenshot(page, 'accounts-home-signed-in-phone');
 
-    await failed.getByRole('button', { name: 'Sign in' }).click();
-    const signInScreen = page.getByTestId('sign-in-screen');
-    await signInScreen.waitFor();
-    await signIn(page, { email: TECH.email, password: 'not-the-password' });
-    await expect(signInScreen.getByTestId('sign-in-error').innerText()).resolves.toMatch(
-      /e-mail address or the password is wrong/,
-    );
-    await screenshot(page, 'accounts-sign-in-error-phone');
-    await signIn(page, TECH);
-    await page.getByTestId('search-screen').waitFor();
-    await expect(headerAccount(page).innerText()).resolves.toBe(TECH.name);
-    await screenshot(page, 'accounts-home-signed-in-phone');
+      await page.reload();
+      await expectVisible(page.getByTestId('search-screen'));
+      await expectVisible(headerAccount(page).getByText(TECH.name), 'the signed-in name in the header');
+    });
 
-    await page.reload();
-    await page.getByTestId('search-screen').waitFor();
-    await expect(headerAccount(page).getByText(TECH.name).waitFor()).resolves.toBeUndefined();
+    await step('a contributor: no users page, the account says Contributor', async () => {
+      // Not an admin: the users page says so instead of listing accounts.
+      await page.goto(`${web.url}/admin/users`);
+      await expectVisible(page.getByTestId('admins-only'));
 
-    // Not an admin: the users page says so instead of listing accounts.
-    await page.goto(`${web.url}/admin/users`);
-    await page.getByTestId('admins-only').waitFor();
-
-    await page.setViewportSize(DESKTOP);
-    await page.goto(web.url);
-    await headerAccount(page).getByText(TECH.name).click();
-    const account = page.getByTestId('account-screen');
-    await account.waitFor();
-    await expect(account.getByTestId('account-role').innerText()).resolves.toBe('Contributor');
-    await expect(account.getByTestId('to-admin-users').count()).resolves.toBe(0);
-    await screenshot(page, 'accounts-account-desktop');
+      await page.setViewportSize(DESKTOP);
+      await page.goto(web.url);
+      await headerAccount(page).getByText(TECH.name).click();
+      const account = page.getByTestId('account-screen');
+      await expectVisible(account);
+      await expect(account.getByTestId('account-role').innerText()).resolves.toBe('Contributor');
+      await expect(account.getByTestId('to-admin-users').count()).resolves.toBe(0);
+      await screenshot(page, 'accounts-account-desktop');
+    });
     expect(errors).toEqual([]);
     await page.close();
   });
@@ -152,7 +159,7 @@ describe('accounts in the browser', () => {
 
     await page.goto(`${web.url}/sign-in`);
     await signIn(page, ADMIN);
-    await page.getByTestId('search-screen').waitFor();
+    await expectVisible(page.getByTestId('search-screen'));
     await headerAccount(page).getByText(ADMIN.name).click();
     await page.getByTestId('account-screen').getByTestId('to-admin-users').click();
 
@@ -168,8 +175,8 @@ describe('accounts in the browser', () => {
 
     await row.getByRole('button', { name: 'Show history' }).click();
     const audit = users.getByTestId('audit-panel');
-    await audit.getByText('Role changed from contributor to editor').waitFor();
-    await expect(audit.innerText()).resolves.toContain(`by ${ADMIN.name}`);
+    await expectVisible(audit.getByText('Role changed from contributor to editor'));
+    await expectText(audit, `by ${ADMIN.name}`);
     await screenshot(page, 'accounts-admin-desktop');
     expect(errors).toEqual([]);
     await page.close();

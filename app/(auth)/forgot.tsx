@@ -1,9 +1,9 @@
 import { useRouter } from 'expo-router';
 import { DevMailHint } from '@/components/account/dev-mail-hint';
 import { EmailForm } from '@/components/account/email-form';
-import { FormAlert } from '@/components/account/form-alert';
-import { FormPanel } from '@/components/account/form-panel';
-import { formFailure } from '@/components/account/form-state';
+import { FormAlert } from '@/components/ui/form-alert';
+import { FormPanel } from '@/components/ui/form-panel';
+import { formFailure } from '@/components/ui/form-failure';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';

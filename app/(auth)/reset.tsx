@@ -1,7 +1,7 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { FormAlert } from '@/components/account/form-alert';
-import { FormPanel } from '@/components/account/form-panel';
-import { formFailure } from '@/components/account/form-state';
+import { FormAlert } from '@/components/ui/form-alert';
+import { FormPanel } from '@/components/ui/form-panel';
+import { formFailure } from '@/components/ui/form-failure';
 import { ResetPasswordForm } from '@/components/account/reset-password-form';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
-import { FormPanel } from '@/components/account/form-panel';
-import { formFailure } from '@/components/account/form-state';
+import { FormPanel } from '@/components/ui/form-panel';
+import { formFailure } from '@/components/ui/form-failure';
 import { SignInForm } from '@/components/account/sign-in-form';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';

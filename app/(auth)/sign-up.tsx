@@ -1,9 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import { DevMailHint } from '@/components/account/dev-mail-hint';
-import { FormAlert } from '@/components/account/form-alert';
-import { FormPanel } from '@/components/account/form-panel';
-import { formFailure } from '@/components/account/form-state';
+import { FormAlert } from '@/components/ui/form-alert';
+import { FormPanel } from '@/components/ui/form-panel';
+import { formFailure } from '@/components/ui/form-failure';
 import { SignUpForm } from '@/components/account/sign-up-form';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';

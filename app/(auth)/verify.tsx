@@ -1,8 +1,8 @@
 import { useEffect, useRef } from 'react';
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { FormAlert } from '@/components/account/form-alert';
-import { FormPanel } from '@/components/account/form-panel';
-import { formFailure } from '@/components/account/form-state';
+import { FormAlert } from '@/components/ui/form-alert';
+import { FormPanel } from '@/components/ui/form-panel';
+import { formFailure } from '@/components/ui/form-failure';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';

@@ -2,12 +2,13 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import { AuditList } from '@/components/account/audit-list';
-import { FormAlert } from '@/components/account/form-alert';
-import { FormPanel } from '@/components/account/form-panel';
-import { formFailure } from '@/components/account/form-state';
+import { FormAlert } from '@/components/ui/form-alert';
+import { FormPanel } from '@/components/ui/form-panel';
+import { formFailure } from '@/components/ui/form-failure';
 import { UserRow } from '@/components/account/user-row';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { MainAndSide } from '@/components/ui/main-and-side';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
@@ -102,20 +103,19 @@ function UserAdmin({ selfId }: { selfId: number }) {
       {update.error ? (
         <FormAlert tone="error" message={formFailure(update.error)!.message} testID="users-error" />
       ) : null}
-      <View style={[styles.columns, wide && styles.columnsWide]}>
-        <View style={styles.main} testID="users-list">
-          {list()}
-        </View>
-        {wide ? (
-          <View style={styles.side}>
-            {selected ? (
+      <MainAndSide
+        mainTestID="users-list"
+        main={list()}
+        side={
+          wide ? (
+            selected ? (
               <AuditSection user={selected} />
             ) : (
               <EmptyState message="Choose “Show history” on an account to see its changes." />
-            )}
-          </View>
-        ) : null}
-      </View>
+            )
+          ) : null
+        }
+      />
     </Screen>
   );
 }
@@ -139,9 +139,5 @@ function AuditSection({ user }: { user: UserDto }) {
 const styles = StyleSheet.create({
   intro: { gap: Spacing.xs },
   search: { maxWidth: 480 },
-  columns: { gap: Spacing.lg },
-  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  main: { flex: 1, minWidth: 0, gap: Spacing.md },
   item: { gap: Spacing.sm },
-  side: { width: 380 },
 });

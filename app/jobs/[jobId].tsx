@@ -1,4 +1,3 @@
-import { StyleSheet, View } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { JobActions } from '@/components/jobs/job-actions';
 import { JobNotes } from '@/components/jobs/job-notes';
@@ -6,6 +5,7 @@ import { JobSummary } from '@/components/jobs/job-summary';
 import { QueueNotice } from '@/components/jobs/queue-notice';
 import { ReadingGroups } from '@/components/jobs/reading-groups';
 import { SignInPrompt } from '@/components/jobs/sign-in-prompt';
+import { MainAndSide } from '@/components/ui/main-and-side';
 import { Screen } from '@/components/ui/screen';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
 import { ApiError } from '@/lib/api/client';
@@ -14,8 +14,6 @@ import type { ReadingDto } from '@/lib/contracts/jobs';
 import { useDownloadCsvMutation, useJobQuery, useUpdateJobMutation } from '@/lib/hooks/use-jobs';
 import { useReadingQueue } from '@/lib/hooks/use-reading-queue';
 import { useSession } from '@/lib/session/session-provider';
-import { Spacing } from '@/lib/theme';
-import { useIsWide } from '@/lib/theme/use-theme';
 
 const jobError = (err: unknown) =>
   err instanceof ApiError && err.status === 404 ? 'There is no job with this number among yours.' : describeError(err);
@@ -24,7 +22,6 @@ export default function JobSheetScreen() {
   const { jobId } = useLocalSearchParams<{ jobId: string }>();
   const id = Number(jobId);
   const router = useRouter();
-  const wide = useIsWide();
   const session = useSession();
   const job = useJobQuery(id, session.status === 'signed-in');
   const update = useUpdateJobMutation();
@@ -94,24 +91,16 @@ export default function JobSheetScreen() {
       <Stack.Screen options={{ title: `Job #${id}` }} />
       <JobSummary job={j} pending={update.isPending} onSetStatus={(status) => update.mutate({ id, status })} />
       <QueueNotice pending={pending} rejected={queue.rejectedFor(id)} onDismiss={queue.dismiss} />
-      <View style={[styles.columns, wide && styles.columnsWide]}>
-        <View style={styles.main}>
-          {j.readings.length + pending.length === 0 ? (
+      <MainAndSide
+        main={
+          j.readings.length + pending.length === 0 ? (
             <EmptyState message="No readings yet. Check a reading on a spec card or in the calculator, then choose “Add to job”." />
           ) : (
             <ReadingGroups readings={j.readings} pending={pending} onRetake={open ? retake : undefined} />
-          )}
-        </View>
-        <View style={[styles.side, wide && styles.sideWide]}>{side}</View>
-      </View>
+          )
+        }
+        side={side}
+      />
     </Screen>
   );
 }
-
-const styles = StyleSheet.create({
-  columns: { gap: Spacing.lg },
-  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
-  main: { flex: 1, minWidth: 0 },
-  side: { gap: Spacing.lg },
-  sideWide: { width: 380 },
-});

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
-import { formFailure } from '@/components/account/form-state';
+import { formFailure } from '@/components/ui/form-failure';
 import { JobList } from '@/components/jobs/job-list';
 import { NewJobForm } from '@/components/jobs/new-job-form';
 import { SignInPrompt } from '@/components/jobs/sign-in-prompt';

@@ -52,10 +52,7 @@ export default function ReviewQueueScreen() {
       ) : (
         <View style={styles.list}>
           {queue.data.map((c) => (
-            <CorrectionCard key={c.id} c={c}>
-              <Text variant="small" color="textMuted">
-                By {c.proposer.name} · {c.proposer.accepted} accepted, {c.proposer.rejected} not accepted so far
-              </Text>
+            <CorrectionCard key={c.id} c={c} showProposer>
               <Button
                 label="Review"
                 onPress={() => router.push(`/review/${c.id}`)}

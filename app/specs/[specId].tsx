@@ -15,11 +15,12 @@ import { TwoColumns } from '@/components/ui/two-columns';
 import { Text } from '@/components/ui/text';
 import { ErrorState, LoadingState } from '@/components/ui/states';
 import { describeError } from '@/lib/api/describe-error';
+import { jobLink } from '@/lib/hooks/use-add-to-job';
 import { useSpecQuery } from '@/lib/hooks/use-library';
 import { useIsWide } from '@/lib/theme/use-theme';
 
 export default function SpecCardScreen() {
-  const { specId } = useLocalSearchParams<{ specId: string }>();
+  const { specId, ...link } = useLocalSearchParams<{ specId: string; job?: string; retake?: string }>();
   const router = useRouter();
   const wide = useIsWide();
   const spec = useSpecQuery(Number(specId));
@@ -49,6 +50,10 @@ export default function SpecCardScreen() {
           unit: s.unit,
           refTempC: s.refTempC,
           material: s.material,
+        }}
+        job={{
+          spec: { id: s.id, modelId: s.model.id, parameter: s.parameter, componentName: s.component.name },
+          ...jobLink(link),
         }}
       />
       {isRestVoltage(s.parameter) ? <BatteryCharge /> : null}

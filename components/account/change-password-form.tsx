@@ -1,10 +1,13 @@
 import { StyleSheet, View } from 'react-native';
-import { Button } from '../ui/button';
-import { TextField } from '../ui/text-field';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { FormAlert } from '../ui/form-alert';
+import { useServerErrors, type FormFailure } from '../ui/form-failure';
+import { FormField } from '../ui/form-field';
+import { SubmitButton } from '../ui/submit-button';
 import { ChangePasswordBody } from '@/lib/contracts/auth';
 import { Spacing } from '@/lib/theme';
-import { FormAlert } from './form-alert';
-import { useFormState, type FormFailure } from './form-state';
 
 export type ChangePasswordFormProps = {
   onSubmit: (values: ChangePasswordBody) => void;
@@ -14,43 +17,45 @@ export type ChangePasswordFormProps = {
   done?: string | null;
 };
 
+/** The form's own check: the request's rules, in the form's words, and the new password typed twice. */
+const ChangePasswordValues = ChangePasswordBody.extend({
+  currentPassword: z.string().min(1, 'Enter your current password.').max(200),
+  confirm: z.string(),
+}).refine((v) => v.confirm === v.newPassword, { path: ['confirm'], message: 'The two passwords differ.' });
+type ChangePasswordValues = z.infer<typeof ChangePasswordValues>;
+
 export function ChangePasswordForm({ onSubmit, pending = false, failure, done }: ChangePasswordFormProps) {
-  const form = useFormState({ currentPassword: '', newPassword: '', confirm: '' });
-  const error = (k: 'currentPassword' | 'newPassword') => form.errors[k] ?? failure?.fields[k];
-  const submit = () => {
-    const { currentPassword, newPassword, confirm } = form.values;
-    const extra = {
-      ...(currentPassword ? {} : { currentPassword: 'Enter your current password.' }),
-      ...(confirm !== newPassword ? { confirm: 'The two passwords differ.' } : {}),
-    };
-    const data = form.check(ChangePasswordBody, { currentPassword, newPassword }, extra);
-    if (data) onSubmit(data);
-  };
+  const { control, handleSubmit, setError } = useForm<ChangePasswordValues>({
+    defaultValues: { currentPassword: '', newPassword: '', confirm: '' },
+    resolver: zodResolver(ChangePasswordValues),
+  });
+  useServerErrors(setError, failure?.fields);
+  const submit = handleSubmit(({ currentPassword, newPassword }) => onSubmit({ currentPassword, newPassword }));
   return (
     <View style={styles.form} testID="change-password-form">
-      <TextField
+      <FormField
+        control={control}
+        name="currentPassword"
         label="Current password"
-        {...form.field('currentPassword')}
-        error={error('currentPassword')}
         secureTextEntry
         autoComplete="current-password"
         autoCapitalize="none"
         testID="current-password"
       />
-      <TextField
+      <FormField
+        control={control}
+        name="newPassword"
         label="New password"
-        {...form.field('newPassword')}
-        error={error('newPassword')}
         hint="At least 12 characters. Other devices are signed out."
         secureTextEntry
         autoComplete="new-password"
         autoCapitalize="none"
         testID="new-password"
       />
-      <TextField
+      <FormField
+        control={control}
+        name="confirm"
         label="New password again"
-        {...form.field('confirm')}
-        error={form.errors.confirm}
         secureTextEntry
         autoComplete="new-password"
         autoCapitalize="none"
@@ -59,10 +64,11 @@ export function ChangePasswordForm({ onSubmit, pending = false, failure, done }:
       />
       {failure ? <FormAlert tone="error" message={failure.message} /> : null}
       {done && !failure ? <FormAlert tone="success" message={done} testID="password-changed" /> : null}
-      <Button
-        label={pending ? 'Changing…' : 'Change password'}
+      <SubmitButton
+        label="Change password"
+        pendingLabel="Changing…"
+        pending={pending}
         onPress={submit}
-        disabled={pending}
         testID="change-password-submit"
       />
     </View>

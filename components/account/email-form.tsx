@@ -1,10 +1,13 @@
 import { StyleSheet, View } from 'react-native';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import type { z } from 'zod';
 import { Button } from '../ui/button';
-import { TextField } from '../ui/text-field';
+import { FormAlert } from '../ui/form-alert';
+import { useServerErrors, type FormFailure } from '../ui/form-failure';
+import { FormField } from '../ui/form-field';
 import { ForgotBody } from '@/lib/contracts/auth';
 import { Spacing } from '@/lib/theme';
-import { FormAlert } from './form-alert';
-import { useFormState, type FormFailure } from './form-state';
 
 export type EmailFormProps = {
   submitLabel: string;
@@ -15,17 +18,18 @@ export type EmailFormProps = {
 
 /** One e-mail address, for asking for a password-reset link. */
 export function EmailForm({ submitLabel, onSubmit, pending = false, failure }: EmailFormProps) {
-  const form = useFormState({ email: '' });
-  const submit = () => {
-    const data = form.check(ForgotBody, form.values);
-    if (data) onSubmit(data.email);
-  };
+  const { control, handleSubmit, setError } = useForm<z.infer<typeof ForgotBody>>({
+    defaultValues: { email: '' },
+    resolver: zodResolver(ForgotBody),
+  });
+  useServerErrors(setError, failure?.fields);
+  const submit = handleSubmit((values) => onSubmit(values.email));
   return (
     <View style={styles.form} testID="email-form">
-      <TextField
+      <FormField
+        control={control}
+        name="email"
         label="E-mail address"
-        {...form.field('email')}
-        error={form.errors.email ?? failure?.fields.email}
         testID="email-input"
         inputMode="email"
         keyboardType="email-address"

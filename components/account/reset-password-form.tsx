@@ -1,10 +1,13 @@
 import { StyleSheet, View } from 'react-native';
-import { Button } from '../ui/button';
-import { TextField } from '../ui/text-field';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { FormAlert } from '../ui/form-alert';
+import { useServerErrors, type FormFailure } from '../ui/form-failure';
+import { FormField } from '../ui/form-field';
+import { SubmitButton } from '../ui/submit-button';
 import { ResetBody } from '@/lib/contracts/auth';
 import { Spacing } from '@/lib/theme';
-import { FormAlert } from './form-alert';
-import { useFormState, type FormFailure } from './form-state';
 
 export type ResetPasswordFormProps = {
   onSubmit: (password: string) => void;
@@ -12,32 +15,36 @@ export type ResetPasswordFormProps = {
   failure?: FormFailure | null;
 };
 
-const NewPasswordOnly = ResetBody.pick({ password: true });
+/** The form's own check: the request's password rule, and the same password typed twice. */
+const NewPasswordTwice = ResetBody.pick({ password: true })
+  .extend({ confirm: z.string() })
+  .refine((v) => v.confirm === v.password, { path: ['confirm'], message: 'The two passwords differ.' });
+type NewPasswordTwice = z.infer<typeof NewPasswordTwice>;
 
 /** A new password, typed twice. */
 export function ResetPasswordForm({ onSubmit, pending = false, failure }: ResetPasswordFormProps) {
-  const form = useFormState({ password: '', confirm: '' });
-  const submit = () => {
-    const differ = form.values.confirm !== form.values.password ? { confirm: 'The two passwords differ.' } : {};
-    const data = form.check(NewPasswordOnly, { password: form.values.password }, differ);
-    if (data) onSubmit(data.password);
-  };
+  const { control, handleSubmit, setError } = useForm<NewPasswordTwice>({
+    defaultValues: { password: '', confirm: '' },
+    resolver: zodResolver(NewPasswordTwice),
+  });
+  useServerErrors(setError, failure?.fields);
+  const submit = handleSubmit((values) => onSubmit(values.password));
   return (
     <View style={styles.form} testID="reset-form">
-      <TextField
+      <FormField
+        control={control}
+        name="password"
         label="New password"
-        {...form.field('password')}
-        error={form.errors.password ?? failure?.fields.password}
         hint="At least 12 characters."
         secureTextEntry
         autoComplete="new-password"
         autoCapitalize="none"
         testID="reset-password"
       />
-      <TextField
+      <FormField
+        control={control}
+        name="confirm"
         label="New password again"
-        {...form.field('confirm')}
-        error={form.errors.confirm}
         secureTextEntry
         autoComplete="new-password"
         autoCapitalize="none"
@@ -45,10 +52,11 @@ export function ResetPasswordForm({ onSubmit, pending = false, failure }: ResetP
         testID="reset-confirm"
       />
       {failure ? <FormAlert tone="error" message={failure.message} testID="reset-error" /> : null}
-      <Button
-        label={pending ? 'Saving…' : 'Set the new password'}
+      <SubmitButton
+        label="Set the new password"
+        pendingLabel="Saving…"
+        pending={pending}
         onPress={submit}
-        disabled={pending}
         testID="reset-submit"
       />
     </View>

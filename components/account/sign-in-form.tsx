@@ -1,10 +1,12 @@
 import { StyleSheet, View } from 'react-native';
-import { Button } from '../ui/button';
-import { TextField } from '../ui/text-field';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { FormAlert } from '../ui/form-alert';
+import { useServerErrors, type FormFailure } from '../ui/form-failure';
+import { FormField } from '../ui/form-field';
+import { SubmitButton } from '../ui/submit-button';
 import { SignInBody } from '@/lib/contracts/auth';
 import { Spacing } from '@/lib/theme';
-import { FormAlert } from './form-alert';
-import { useFormState, type FormFailure } from './form-state';
 
 export type SignInFormProps = {
   onSubmit: (values: SignInBody) => void;
@@ -13,18 +15,18 @@ export type SignInFormProps = {
 };
 
 export function SignInForm({ onSubmit, pending = false, failure }: SignInFormProps) {
-  const form = useFormState({ email: '', password: '' });
-  const error = (k: 'email' | 'password') => form.errors[k] ?? failure?.fields[k];
-  const submit = () => {
-    const data = form.check(SignInBody, form.values);
-    if (data) onSubmit(data);
-  };
+  const { control, handleSubmit, setError } = useForm<SignInBody>({
+    defaultValues: { email: '', password: '' },
+    resolver: zodResolver(SignInBody),
+  });
+  useServerErrors(setError, failure?.fields);
+  const submit = handleSubmit((values) => onSubmit(values));
   return (
     <View style={styles.form} testID="sign-in-form">
-      <TextField
+      <FormField
+        control={control}
+        name="email"
         label="E-mail address"
-        {...form.field('email')}
-        error={error('email')}
         testID="sign-in-email"
         inputMode="email"
         keyboardType="email-address"
@@ -32,10 +34,10 @@ export function SignInForm({ onSubmit, pending = false, failure }: SignInFormPro
         autoCapitalize="none"
         autoCorrect={false}
       />
-      <TextField
+      <FormField
+        control={control}
+        name="password"
         label="Password"
-        {...form.field('password')}
-        error={error('password')}
         testID="sign-in-password"
         secureTextEntry
         autoComplete="current-password"
@@ -43,7 +45,13 @@ export function SignInForm({ onSubmit, pending = false, failure }: SignInFormPro
         onSubmitEditing={submit}
       />
       {failure ? <FormAlert tone="error" message={failure.message} testID="sign-in-error" /> : null}
-      <Button label={pending ? 'Signing in…' : 'Sign in'} onPress={submit} disabled={pending} testID="sign-in-submit" />
+      <SubmitButton
+        label="Sign in"
+        pendingLabel="Signing in…"
+        pending={pending}
+        onPress={submit}
+        testID="sign-in-submit"
+      />
     </View>
   );
 }

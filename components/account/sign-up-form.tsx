@@ -1,10 +1,12 @@
 import { StyleSheet, View } from 'react-native';
-import { Button } from '../ui/button';
-import { TextField } from '../ui/text-field';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { FormAlert } from '../ui/form-alert';
+import { useServerErrors, type FormFailure } from '../ui/form-failure';
+import { FormField } from '../ui/form-field';
+import { SubmitButton } from '../ui/submit-button';
 import { SignUpBody } from '@/lib/contracts/auth';
 import { Spacing } from '@/lib/theme';
-import { FormAlert } from './form-alert';
-import { useFormState, type FormFailure } from './form-state';
 
 export type SignUpFormProps = {
   onSubmit: (values: SignUpBody) => void;
@@ -13,27 +15,27 @@ export type SignUpFormProps = {
 };
 
 export function SignUpForm({ onSubmit, pending = false, failure }: SignUpFormProps) {
-  const form = useFormState({ displayName: '', email: '', password: '' });
-  const error = (k: 'displayName' | 'email' | 'password') => form.errors[k] ?? failure?.fields[k];
-  const submit = () => {
-    const data = form.check(SignUpBody, form.values);
-    if (data) onSubmit(data);
-  };
+  const { control, handleSubmit, setError } = useForm<SignUpBody>({
+    defaultValues: { displayName: '', email: '', password: '' },
+    resolver: zodResolver(SignUpBody),
+  });
+  useServerErrors(setError, failure?.fields);
+  const submit = handleSubmit((values) => onSubmit(values));
   return (
     <View style={styles.form} testID="sign-up-form">
-      <TextField
+      <FormField
+        control={control}
+        name="displayName"
         label="Your name"
-        {...form.field('displayName')}
-        error={error('displayName')}
         testID="sign-up-name"
         hint="Shown beside your corrections and in the header."
         autoComplete="name"
         autoCapitalize="words"
       />
-      <TextField
+      <FormField
+        control={control}
+        name="email"
         label="E-mail address"
-        {...form.field('email')}
-        error={error('email')}
         testID="sign-up-email"
         inputMode="email"
         keyboardType="email-address"
@@ -41,10 +43,10 @@ export function SignUpForm({ onSubmit, pending = false, failure }: SignUpFormPro
         autoCapitalize="none"
         autoCorrect={false}
       />
-      <TextField
+      <FormField
+        control={control}
+        name="password"
         label="Password"
-        {...form.field('password')}
-        error={error('password')}
         testID="sign-up-password"
         hint="At least 12 characters; a short phrase is easiest to remember."
         secureTextEntry
@@ -53,10 +55,11 @@ export function SignUpForm({ onSubmit, pending = false, failure }: SignUpFormPro
         onSubmitEditing={submit}
       />
       {failure ? <FormAlert tone="error" message={failure.message} testID="sign-up-error" /> : null}
-      <Button
-        label={pending ? 'Creating the account…' : 'Create account'}
+      <SubmitButton
+        label="Create account"
+        pendingLabel="Creating the account…"
+        pending={pending}
         onPress={submit}
-        disabled={pending}
         testID="sign-up-submit"
       />
     </View>

@@ -5,16 +5,18 @@ import { useMeterMemory } from '@/lib/hooks/use-meter-memory';
 import { unitsOfKind, type QuantityKind } from '@/lib/units';
 import type { SpecLimits } from '@/lib/verdict';
 import { Spacing } from '@/lib/theme';
+import type { AddToJobTarget } from '@/lib/hooks/use-add-to-job';
 import { AddToJob } from '../jobs/add-to-job';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { QuantityField } from './quantity-field';
 import { VerdictPanel } from './verdict-panel';
 
-export type CalculatorProps = { spec: SpecLimits; kind: QuantityKind; testID?: string };
+/** `job`: where "Add to job" sends the reading (the spec, a job and re-take from the screen's address). */
+export type CalculatorProps = { spec: SpecLimits; kind: QuantityKind; testID?: string; job?: AddToJobTarget };
 
 /** Meter reading in, corrected value and verdict out, recalculated as you type. */
-export function Calculator({ spec, kind, testID = 'calculator' }: CalculatorProps) {
+export function Calculator({ spec, kind, testID = 'calculator', job }: CalculatorProps) {
   const [form, setForm] = useState<CalculatorForm>(() => emptyForm(spec.unit));
   const [memory, remember] = useMeterMemory();
   const units = unitsOfKind(kind);
@@ -81,7 +83,7 @@ export function Calculator({ spec, kind, testID = 'calculator' }: CalculatorProp
       ) : (
         <Text color="textMuted">Type the meter reading to see the verdict.</Text>
       )}
-      <AddToJob input={input} result={result} />
+      <AddToJob input={input} result={result} {...job} />
     </Card>
   );
 }

@@ -22,8 +22,15 @@ export function proposedRange(c: CorrectionDto): string {
     : `${c.proposed.min ?? ''}–${c.proposed.max ?? ''} ${c.proposed.unit}`;
 }
 
+export type CorrectionCardProps = {
+  c: CorrectionDto;
+  /** For editors: who proposed it and how their proposals fared so far. */
+  showProposer?: boolean;
+  children?: ReactNode;
+};
+
 /** One proposal: what, where, proposed values, status and the editor's note. Text is shown as text, never HTML. */
-export function CorrectionCard({ c, children }: { c: CorrectionDto; children?: ReactNode }) {
+export function CorrectionCard({ c, showProposer = false, children }: CorrectionCardProps) {
   return (
     <Card testID={`correction-${c.id}`}>
       <View style={styles.top}>
@@ -51,6 +58,11 @@ export function CorrectionCard({ c, children }: { c: CorrectionDto; children?: R
       {c.decisionNote ? (
         <Text variant="small" testID={`decision-${c.id}`}>
           Note from {c.reviewerName}: {c.decisionNote}
+        </Text>
+      ) : null}
+      {showProposer ? (
+        <Text variant="small" color="textMuted" testID={`proposer-${c.id}`}>
+          By {c.proposer.name} · {c.proposer.accepted} accepted, {c.proposer.rejected} not accepted so far
         </Text>
       ) : null}
       {children}

@@ -1,34 +1,23 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { parseDecimal } from '@/lib/calculator/form';
+import { useController, useForm, useFormState } from 'react-hook-form';
 import { ProposeBody } from '@/lib/contracts/corrections';
 import type { CanonicalUnit } from '@/lib/units';
 import { Spacing } from '@/lib/theme';
-import { Button } from '../ui/button';
+import { useServerErrors } from '../ui/form-failure';
+import { FormField } from '../ui/form-field';
+import { bodyResolver } from '../ui/form-resolver';
+import { SubmitButton } from '../ui/submit-button';
 import { Text } from '../ui/text';
-import { TextField } from '../ui/text-field';
 import { UnitPicker } from '../calculator/unit-picker';
+import {
+  proposalField,
+  proposalServerErrors,
+  toProposeBody,
+  type ProposalFields,
+  type ProposalTarget,
+} from './proposal-body';
 
-export type ProposalFields = {
-  component: string;
-  parameter: string;
-  min: string;
-  nominal: string;
-  max: string;
-  unit: CanonicalUnit;
-  refTempC: string;
-  testPoints: string;
-  conditions: string;
-  title: string;
-  edition: string;
-  page: string;
-  url: string;
-  rationale: string;
-};
-export type ProposalTarget =
-  | { kind: 'change'; specId: number; version: number }
-  | { kind: 'new_spec'; componentId: number }
-  | { kind: 'new_component'; modelId: number };
+export { toProposeBody, type ProposalFields, type ProposalTarget } from './proposal-body';
 
 export type ProposalFormProps = {
   target: ProposalTarget;
@@ -40,31 +29,7 @@ export type ProposalFormProps = {
   onSubmit: (body: ProposeBody) => void;
 };
 
-const num = (s: string) => {
-  const v = parseDecimal(s);
-  return v === undefined ? null : v;
-};
-
-/** Builds the request body from the typed fields (numbers with a decimal comma are accepted). */
-export function toProposeBody(target: ProposalTarget, f: ProposalFields): unknown {
-  const values = {
-    min: num(f.min),
-    nominal: num(f.nominal),
-    max: num(f.max),
-    unit: f.unit,
-    refTempC: num(f.refTempC),
-    testPoints: f.testPoints,
-    conditions: f.conditions,
-  };
-  const citation = { title: f.title, edition: f.edition, page: f.page, url: f.url };
-  const extra =
-    target.kind === 'change'
-      ? {}
-      : target.kind === 'new_spec'
-        ? { parameter: f.parameter }
-        : { component: f.component, parameter: f.parameter };
-  return { ...target, ...extra, values, citation, rationale: f.rationale };
-}
+const DECIMAL = { inputMode: 'decimal', keyboardType: 'decimal-pad' } as const;
 
 /** The correction form: proposed values, the citation (required) and why. Validated with the server's schema. */
 export function ProposalForm({
@@ -76,62 +41,53 @@ export function ProposalForm({
   submitLabel,
   onSubmit,
 }: ProposalFormProps) {
-  const [f, setF] = useState(initial);
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const all = { ...Object.fromEntries(serverErrors.map((e) => [e.path, e.message])), ...errors };
-  const err = (...paths: string[]) => paths.map((p) => all[p]).find(Boolean);
-  const field = (key: keyof ProposalFields, label: string, errorPaths: string[], extra: object = {}) => (
-    <TextField
-      label={label}
-      value={f[key]}
-      onChangeText={(v) => setF({ ...f, [key]: v })}
-      error={err(...errorPaths)}
-      testID={`proposal-${key}`}
-      {...extra}
-    />
+  const { control, handleSubmit, setError } = useForm<ProposalFields, unknown, ProposeBody>({
+    defaultValues: initial,
+    // Sends what was typed, not the parsed form: the server runs the same schema (and its transforms) itself.
+    resolver: bodyResolver(ProposeBody, (v) => toProposeBody(target, v), { field: proposalField, raw: true }),
+  });
+  useServerErrors(setError, proposalServerErrors(serverErrors));
+  const unit = useController({ control, name: 'unit' });
+  const { errors } = useFormState({ control });
+  const field = (name: keyof ProposalFields, label: string, extra: object = {}) => (
+    <FormField control={control} name={name} label={label} testID={`proposal-${name}`} {...extra} />
   );
-  const submit = () => {
-    const body = toProposeBody(target, f);
-    const parsed = ProposeBody.safeParse(body);
-    if (!parsed.success) {
-      setErrors(Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.'), i.message])));
-      return;
-    }
-    setErrors({});
-    // Send what was typed, not the parsed form: the server runs the same schema (and its transforms) itself.
-    onSubmit(body as ProposeBody);
-  };
-  const decimal = { inputMode: 'decimal', keyboardType: 'decimal-pad' };
   return (
     <View style={styles.form} testID="proposal-form">
-      {target.kind === 'new_component' && field('component', 'Component', ['component'])}
-      {target.kind !== 'change' && field('parameter', 'Parameter (e.g. primary winding resistance)', ['parameter'])}
+      {target.kind === 'new_component' && field('component', 'Component')}
+      {target.kind !== 'change' && field('parameter', 'Parameter (e.g. primary winding resistance)')}
       <View style={styles.row}>
-        <View style={styles.cell}>{field('min', 'Minimum', ['values.min'], decimal)}</View>
-        <View style={styles.cell}>{field('nominal', 'Nominal', ['values.nominal'], decimal)}</View>
-        <View style={styles.cell}>{field('max', 'Maximum', ['values.max'], decimal)}</View>
+        <View style={styles.cell}>{field('min', 'Minimum', DECIMAL)}</View>
+        <View style={styles.cell}>{field('nominal', 'Nominal', DECIMAL)}</View>
+        <View style={styles.cell}>{field('max', 'Maximum', DECIMAL)}</View>
       </View>
-      <UnitPicker label="Unit" units={units} value={f.unit} onChange={(unit) => setF({ ...f, unit })} />
-      {err('values.unit') ? (
+      <UnitPicker label="Unit" units={units} value={unit.field.value} onChange={unit.field.onChange} />
+      {unit.fieldState.error ? (
         <Text color="fail" accessibilityRole="alert">
-          {err('values.unit')}
+          {unit.fieldState.error.message}
         </Text>
       ) : null}
-      {field('refTempC', 'Reference temperature °C (optional)', ['values.refTempC'], decimal)}
-      {field('testPoints', 'Test points', ['values.testPoints'], { multiline: true })}
-      {field('conditions', 'Conditions', ['values.conditions'], { multiline: true })}
+      {field('refTempC', 'Reference temperature °C (optional)', DECIMAL)}
+      {field('testPoints', 'Test points', { multiline: true })}
+      {field('conditions', 'Conditions', { multiline: true })}
       <Text variant="heading">Source (required)</Text>
-      {field('title', 'Source title', ['citation.title'])}
+      {field('title', 'Source title')}
       <View style={styles.row}>
-        <View style={styles.cell}>{field('edition', 'Edition', ['citation.edition'])}</View>
-        <View style={styles.cell}>{field('page', 'Page', ['citation.page'])}</View>
+        <View style={styles.cell}>{field('edition', 'Edition')}</View>
+        <View style={styles.cell}>{field('page', 'Page')}</View>
       </View>
-      {field('url', 'Link (optional)', ['citation.url'], { inputMode: 'url', autoCapitalize: 'none' })}
-      {field('rationale', 'Why should it change?', ['rationale'], { multiline: true, numberOfLines: 3 })}
-      <Button
-        label={submitting ? 'Sending…' : submitLabel}
-        onPress={submit}
-        disabled={submitting}
+      {field('url', 'Link (optional)', { inputMode: 'url', autoCapitalize: 'none' })}
+      {field('rationale', 'Why should it change?', { multiline: true, numberOfLines: 3 })}
+      {errors.root?.message ? (
+        <Text color="fail" accessibilityRole="alert">
+          {errors.root.message}
+        </Text>
+      ) : null}
+      <SubmitButton
+        label={submitLabel}
+        pendingLabel="Sending…"
+        pending={submitting}
+        onPress={handleSubmit((body) => onSubmit(body))}
         testID="proposal-submit"
       />
     </View>

@@ -1,10 +1,13 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+import { useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { UpdateJobBody } from '@/lib/contracts/jobs';
 import { Spacing } from '@/lib/theme';
-import { Button } from '../ui/button';
 import { Card } from '../ui/card';
+import { FormField } from '../ui/form-field';
+import { SubmitButton } from '../ui/submit-button';
 import { Text } from '../ui/text';
-import { TextField } from '../ui/text-field';
 
 export type JobNotesProps = {
   notes: string | null;
@@ -13,25 +16,27 @@ export type JobNotesProps = {
   error?: string | null;
 };
 
+const NotesValues = z.object({ notes: UpdateJobBody.shape.notes.unwrap() });
+type NotesValues = z.infer<typeof NotesValues>;
+
 /** The shop's notes on the job (they go on the printed report). */
 export function JobNotes({ notes, onSave, pending, error }: JobNotesProps) {
-  const [text, setText] = useState(notes ?? '');
-  const [shown, setShown] = useState(notes);
-  // A save (or another device) changed the notes: show what the server holds.
-  if (notes !== shown) {
-    setShown(notes);
-    setText(notes ?? '');
-  }
+  const { control, handleSubmit } = useForm<NotesValues>({
+    // A save (or another device) changed the notes: the form shows what the server holds.
+    values: { notes: notes ?? '' },
+    resolver: zodResolver(NotesValues),
+  });
+  const text = useWatch({ control, name: 'notes' }) ?? '';
   const changed = text.trim() !== (notes ?? '').trim();
   return (
     <Card testID="job-notes">
       <Text variant="heading">Notes</Text>
-      <TextField
+      <FormField
+        control={control}
+        name="notes"
         label="Notes for the job and the report"
         hideLabel
         placeholder="Symptoms, what was checked, what was replaced…"
-        value={text}
-        onChangeText={setText}
         multiline
         numberOfLines={4}
         style={styles.input}
@@ -39,10 +44,12 @@ export function JobNotes({ notes, onSave, pending, error }: JobNotesProps) {
         testID="job-notes-field"
       />
       <View style={styles.actions}>
-        <Button
-          label={pending ? 'Saving…' : changed ? 'Save notes' : 'Notes saved'}
-          onPress={() => onSave(text.trim())}
-          disabled={!changed || pending}
+        <SubmitButton
+          label={changed ? 'Save notes' : 'Notes saved'}
+          pendingLabel="Saving…"
+          pending={pending}
+          onPress={handleSubmit((v) => onSave(v.notes))}
+          disabled={!changed}
           variant="secondary"
           testID="job-notes-save"
         />

@@ -1,15 +1,17 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+import { useController, useForm } from 'react-hook-form';
 import { CreateJobBody } from '@/lib/contracts/jobs';
 import type { ModelSummaryDto } from '@/lib/contracts/library';
 import { Spacing } from '@/lib/theme';
-import { FormAlert } from '../account/form-alert';
-import { useFormState, type FormFailure } from '../account/form-state';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ChoiceRow } from '../ui/choice-row';
+import { FormAlert } from '../ui/form-alert';
+import { useServerErrors, type FormFailure } from '../ui/form-failure';
+import { FormField } from '../ui/form-field';
+import { bodyResolver } from '../ui/form-resolver';
+import { SubmitButton } from '../ui/submit-button';
 import { Text } from '../ui/text';
-import { TextField } from '../ui/text-field';
 import { ModelPicker } from './model-picker';
 
 export type NewJobFormProps = {
@@ -26,7 +28,27 @@ export type NewJobFormProps = {
   testID?: string;
 };
 
+type NewJobValues = {
+  inLibrary: boolean;
+  modelId: number | null;
+  machineLabel: string;
+  machineId: string;
+  customerRef: string;
+  notes: string;
+};
+
 const blank = (s: string) => (s.trim() === '' ? undefined : s.trim());
+
+/** The request body for what the form holds: only the model or the words, whichever was chosen. */
+const toBody = (compact: boolean) => (v: NewJobValues) => ({
+  modelId: v.inLibrary ? (v.modelId ?? undefined) : undefined,
+  machineLabel: blank(v.machineLabel),
+  machineId: blank(v.machineId),
+  customerRef: blank(v.customerRef),
+  notes: compact ? undefined : blank(v.notes),
+});
+const pickTheModel = (v: NewJobValues) =>
+  v.inLibrary && v.modelId === null ? { modelId: 'Pick the model, or choose “Not in the library”.' } : {};
 
 /** A new job: a model from the library or a machine described in words, its VIN / frame number, the customer. */
 export function NewJobForm({
@@ -37,77 +59,74 @@ export function NewJobForm({
   onCancel,
   pending,
   failure,
-  compact,
+  compact = false,
   testID = 'new-job-form',
 }: NewJobFormProps) {
-  const form = useFormState({ machineLabel: '', machineId: '', customerRef: '', notes: '' });
-  const [inLibrary, setInLibrary] = useState(true);
-  const [modelId, setModelId] = useState<number | null>(initialModelId);
-  const error = (k: string) => form.errors[k] ?? failure?.fields[k];
-  const submit = () => {
-    const v = form.values;
-    const body = {
-      modelId: inLibrary ? (modelId ?? undefined) : undefined,
-      machineLabel: blank(v.machineLabel),
-      machineId: blank(v.machineId),
-      customerRef: blank(v.customerRef),
-      notes: compact ? undefined : blank(v.notes),
-    };
-    const extra = inLibrary && modelId === null ? { modelId: 'Pick the model, or choose “Not in the library”.' } : {};
-    const data = form.check(CreateJobBody, body, extra);
-    if (data) onSubmit(data);
-  };
+  const { control, handleSubmit, setError } = useForm<NewJobValues, unknown, CreateJobBody>({
+    defaultValues: {
+      inLibrary: true,
+      modelId: initialModelId,
+      machineLabel: '',
+      machineId: '',
+      customerRef: '',
+      notes: '',
+    },
+    resolver: bodyResolver(CreateJobBody, toBody(compact), { extra: pickTheModel }),
+  });
+  useServerErrors(setError, failure?.fields);
+  const inLibrary = useController({ control, name: 'inLibrary' }).field;
+  const model = useController({ control, name: 'modelId' });
   return (
     <Card testID={testID}>
       <Text variant="heading">New job</Text>
       <ChoiceRow
         label="The machine"
-        value={inLibrary}
+        value={inLibrary.value}
         options={[
           { value: true, label: 'A model in the library' },
           { value: false, label: 'Not in the library' },
         ]}
-        onChange={setInLibrary}
+        onChange={inLibrary.onChange}
       />
-      {inLibrary ? (
+      {inLibrary.value ? (
         models ? (
-          <ModelPicker models={models} value={modelId} onChange={setModelId} error={error('modelId')} />
+          <ModelPicker
+            models={models}
+            value={model.field.value}
+            onChange={model.field.onChange}
+            error={model.fieldState.error?.message}
+          />
         ) : (
           <Text color="textMuted">{modelsMessage ?? 'Loading the library’s models…'}</Text>
         )
       ) : null}
-      <TextField
-        label={inLibrary ? 'Machine description (optional)' : 'Machine description'}
+      <FormField
+        control={control}
+        name="machineLabel"
+        label={inLibrary.value ? 'Machine description (optional)' : 'Machine description'}
         placeholder="e.g. customer quad, 250 cc, blue"
-        {...form.field('machineLabel')}
-        error={error('machineLabel')}
         testID="job-machine-label"
       />
       <View style={styles.pair}>
         <View style={styles.cell}>
-          <TextField
+          <FormField
+            control={control}
+            name="machineId"
             label="VIN or frame number"
-            {...form.field('machineId')}
-            error={error('machineId')}
             autoCapitalize="characters"
             autoCorrect={false}
             testID="job-machine-id"
           />
         </View>
         <View style={styles.cell}>
-          <TextField
-            label="Customer reference"
-            {...form.field('customerRef')}
-            error={error('customerRef')}
-            testID="job-customer-ref"
-          />
+          <FormField control={control} name="customerRef" label="Customer reference" testID="job-customer-ref" />
         </View>
       </View>
       {compact ? null : (
-        <TextField
+        <FormField
+          control={control}
+          name="notes"
           label="Notes"
-          {...form.field('notes')}
-          error={error('notes')}
           multiline
           numberOfLines={3}
           style={styles.notes}
@@ -116,10 +135,11 @@ export function NewJobForm({
       )}
       {failure ? <FormAlert tone="error" message={failure.message} /> : null}
       <View style={styles.actions}>
-        <Button
-          label={pending ? 'Creating…' : 'Create the job'}
-          onPress={submit}
-          disabled={pending}
+        <SubmitButton
+          label="Create the job"
+          pendingLabel="Creating…"
+          pending={pending}
+          onPress={handleSubmit((body) => onSubmit(body))}
           testID="create-job"
         />
         {onCancel ? <Button label="Cancel" variant="quiet" onPress={onCancel} /> : null}

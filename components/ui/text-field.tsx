@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useId, useState } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
 import { Radius, Spacing, Type } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
@@ -12,9 +12,15 @@ export type TextFieldProps = TextInputProps & {
   hint?: string;
 };
 
+/**
+ * A labelled text input. The hint or the error under it is tied to the input
+ * (aria-describedby), so a screen reader reads it with the field; a new error is also announced.
+ */
 export function TextField({ label, hideLabel, error, hint, style, onFocus, onBlur, ...rest }: TextFieldProps) {
   const t = useTheme();
   const [focused, setFocused] = useState(false);
+  const id = useId();
+  const note = error ? `${id}-error` : hint ? `${id}-hint` : undefined;
   return (
     <View style={styles.wrap}>
       {!hideLabel && (
@@ -26,6 +32,7 @@ export function TextField({ label, hideLabel, error, hint, style, onFocus, onBlu
         accessibilityLabel={label}
         aria-label={label}
         aria-invalid={!!error}
+        aria-describedby={note}
         placeholderTextColor={t.textMuted}
         style={[
           styles.input,
@@ -44,12 +51,12 @@ export function TextField({ label, hideLabel, error, hint, style, onFocus, onBlu
         {...rest}
       />
       {hint && !error ? (
-        <Text variant="small" color="textMuted">
+        <Text variant="small" color="textMuted" nativeID={`${id}-hint`}>
           {hint}
         </Text>
       ) : null}
       {error ? (
-        <Text variant="small" color="fail" accessibilityRole="alert">
+        <Text variant="small" color="fail" accessibilityRole="alert" nativeID={`${id}-error`}>
           {error}
         </Text>
       ) : null}

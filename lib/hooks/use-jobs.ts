@@ -1,10 +1,19 @@
 /** Job sheets: TanStack Query hooks and their keys. Mutations refresh what they change. */
-import { keepPreviousData, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import {
+  keepPreviousData,
+  skipToken,
+  useMutation,
+  useQuery,
+  useQueryClient,
+  type QueryClient,
+} from '@tanstack/react-query';
 import { createJob, downloadReadingsCsv, getJob, listJobs, updateJob, type JobsFilter } from '../api/jobs';
 import type { JobDetailDto, UpdateJobBody } from '../contracts/jobs';
 
 export const JOBS_KEY = ['jobs'] as const;
 export const JOB_KEY = ['job'] as const;
+/** Not a server answer: the job this device last added a reading to, per user, for this visit. */
+export const LAST_JOB_KEY = ['last-job'] as const;
 
 /** After a reading lands or a job changes: the sheet and the lists (their counts) are stale. */
 export function invalidateJob(qc: QueryClient, jobId: number) {
@@ -24,12 +33,32 @@ export function useJobsQuery(filter: JobsFilter, enabled = true) {
   });
 }
 
-export function useJobQuery(id: number, enabled = true) {
+/** One job sheet; no request while `id` is null (no job chosen yet) or not a job number. */
+export function useJobQuery(id: number | null, enabled = true) {
+  const valid = id !== null && Number.isInteger(id) && id > 0;
   return useQuery({
     queryKey: [...JOB_KEY, id],
-    queryFn: () => getJob(id),
-    enabled: enabled && Number.isInteger(id) && id > 0,
+    queryFn: id === null ? skipToken : () => getJob(id),
+    enabled: enabled && valid,
   });
+}
+
+/**
+ * The job the signed-in user last added a reading to on this device, in this visit (the
+ * next reading most likely belongs to it too), and how to remember a new one. Kept in the
+ * query cache, never fetched, so every "Add to job" panel sees the same memory.
+ */
+export function useLastJob(userId: number | undefined) {
+  const qc = useQueryClient();
+  const queryKey = [...LAST_JOB_KEY, userId ?? null];
+  const last = useQuery<number | null>({
+    queryKey,
+    queryFn: skipToken,
+    initialData: null,
+    staleTime: Infinity,
+    gcTime: Infinity,
+  });
+  return [last.data ?? null, (jobId: number) => qc.setQueryData(queryKey, jobId)] as const;
 }
 
 function useStoreJob() {

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { Radius, Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
-import { Text } from '../ui/text';
+import { Text } from './text';
 
 export type FormAlertProps = { tone: 'error' | 'success'; message: string; testID?: string };
 

@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { Card } from '../ui/card';
-import { Text } from '../ui/text';
+import { Card } from './card';
+import { Text } from './text';
 import { Spacing } from '@/lib/theme';
 
 export type FormPanelProps = { title: string; intro?: string; children: ReactNode; testID?: string };

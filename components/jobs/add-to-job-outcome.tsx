@@ -1,0 +1,40 @@
+import { StyleSheet, View } from 'react-native';
+import type { AddOutcome } from '@/lib/offline/queue-runner';
+import { Spacing } from '@/lib/theme';
+import { Button } from '../ui/button';
+import { Text } from '../ui/text';
+
+export type AddToJobOutcomeProps = { outcome: AddOutcome; jobId: number; onOpen: () => void };
+
+/** What became of a reading sent from the calculator: added, queued on the device, or refused; and the way to its sheet. */
+export function AddToJobOutcome({ outcome, jobId, onOpen }: AddToJobOutcomeProps) {
+  const message =
+    outcome.status === 'sent'
+      ? `Added to job #${jobId}`
+      : outcome.status === 'queued'
+        ? 'Queued — will send when online'
+        : `Not added: ${outcome.message}`;
+  return (
+    <View style={styles.outcome} accessibilityRole="alert" accessibilityLiveRegion="polite">
+      <Text
+        variant="label"
+        color={outcome.status === 'sent' ? 'pass' : outcome.status === 'queued' ? 'text' : 'fail'}
+        testID="add-to-job-outcome"
+      >
+        {message}
+      </Text>
+      <Button
+        label={`Open job sheet #${jobId}`}
+        variant="quiet"
+        onPress={onOpen}
+        style={styles.link}
+        testID="add-to-job-open"
+      />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  outcome: { gap: Spacing.xs },
+  link: { alignSelf: 'flex-start', paddingHorizontal: 0 },
+});

@@ -1,0 +1,86 @@
+/**
+ * "Add to job" under a calculator: which job a reading goes on, the re-take it may
+ * replace, and what became of the last one sent. The screen says what it knows (the
+ * spec, a job and re-take from its address); every reading goes through the device's
+ * queue (use-reading-queue.ts), so a dead connection loses nothing.
+ */
+import { useState } from 'react';
+import type { JobSummaryDto, ReadingDto } from '../contracts/jobs';
+import type { AddOutcome } from '../offline/queue-runner';
+import { toReadingBody } from '../offline/reading-body';
+import { useSession } from '../session/session-provider';
+import type { VerdictInput, VerdictResult } from '../verdict';
+import { useJobQuery, useJobsQuery, useLastJob } from './use-jobs';
+import { useReadingQueue } from './use-reading-queue';
+
+/** What the screen knows about where a reading goes. */
+export type AddToJobTarget = {
+  /** The library spec the reading checks (a spec card); without it the reading goes with a typed label. */
+  spec?: { id: number; modelId: number; parameter: string; componentName: string };
+  /** The job to add to (the address's ?job=); otherwise the job last used, if any. */
+  jobId?: number;
+  /** The reading this one re-takes (the address's &retake=): it stays on the sheet, struck through. */
+  retakeOf?: number;
+};
+
+const positive = (s: string | string[] | undefined) => {
+  const n = Number(Array.isArray(s) ? s[0] : s);
+  return Number.isInteger(n) && n > 0 ? n : undefined;
+};
+
+/** ?job= and &retake= of a calculator's address (links from the job sheet). */
+export function jobLink(params: { job?: string | string[]; retake?: string | string[] }): AddToJobTarget {
+  return { jobId: positive(params.job), retakeOf: positive(params.retake) };
+}
+
+export type AddToJobMode = 'idle' | 'picking' | 'creating';
+type Sent = { for: string; jobId: number; outcome: AddOutcome };
+
+export function useAddToJob({ spec, jobId: linkedJob, retakeOf: linkedRetake }: AddToJobTarget) {
+  const { user } = useSession();
+  const queue = useReadingQueue();
+  const [lastJob, rememberJob] = useLastJob(user?.id);
+  const [jobId, setJobId] = useState<number | null>(linkedJob ?? lastJob);
+  const [retakeOf, setRetakeOf] = useState(linkedRetake);
+  const [mode, setMode] = useState<AddToJobMode>('idle');
+  const [sent, setSent] = useState<Sent | null>(null);
+  const [sending, setSending] = useState(false);
+  const jobs = useJobsQuery({ status: 'open' }, mode === 'picking' || jobId !== null);
+  const retakeJob = useJobQuery(jobId, retakeOf !== undefined);
+  const retaken: ReadingDto | undefined = retakeJob.data?.readings.find((r) => r.id === retakeOf);
+  const chosen: JobSummaryDto | undefined = jobs.data?.find((j) => j.id === jobId);
+
+  /** Sends one reading to job `target`; `label` says what was measured when there is no spec. */
+  const send = async (target: number, input: VerdictInput, result: VerdictResult, label: string) => {
+    setSending(true);
+    rememberJob(target);
+    setJobId(target);
+    setMode('idle');
+    const body = toReadingBody(input, spec ? { specId: spec.id } : { label }, { retakeOf });
+    const preview = {
+      label: spec?.parameter ?? label,
+      componentName: spec?.componentName ?? '',
+      value: input.reading.value,
+      unit: input.reading.unit,
+      verdict: result.verdict,
+    };
+    const outcome = await queue.add({ jobId: target, body, preview });
+    if (outcome.status !== 'rejected') setRetakeOf(undefined);
+    setSent({ for: JSON.stringify(input), jobId: target, outcome });
+    setSending(false);
+  };
+
+  return {
+    jobId,
+    chosen,
+    retakeOf,
+    retaken,
+    jobs,
+    mode,
+    setMode,
+    sending,
+    send,
+    /** What became of the reading sent for `input`; null once the input changed (a new reading). */
+    doneFor: (input: VerdictInput) => (sent?.for === JSON.stringify(input) ? sent : null),
+  };
+}
