@@ -4,19 +4,15 @@ import { JobNotes } from '@/components/jobs/job-notes';
 import { JobSummary } from '@/components/jobs/job-summary';
 import { QueueNotice } from '@/components/jobs/queue-notice';
 import { ReadingGroups } from '@/components/jobs/reading-groups';
-import { SignInPrompt } from '@/components/jobs/sign-in-prompt';
+import { jobGate } from '@/components/jobs/job-gate';
 import { MainAndSide } from '@/components/ui/main-and-side';
 import { Screen } from '@/components/ui/screen';
-import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
-import { ApiError } from '@/lib/api/client';
+import { EmptyState } from '@/components/ui/states';
 import { describeError } from '@/lib/api/describe-error';
 import type { ReadingDto } from '@/lib/contracts/jobs';
 import { useDownloadCsvMutation, useJobQuery, useUpdateJobMutation } from '@/lib/hooks/use-jobs';
 import { useReadingQueue } from '@/lib/hooks/use-reading-queue';
 import { useSession } from '@/lib/session/session-provider';
-
-const jobError = (err: unknown) =>
-  err instanceof ApiError && err.status === 404 ? 'There is no job with this number among yours.' : describeError(err);
 
 export default function JobSheetScreen() {
   const { jobId } = useLocalSearchParams<{ jobId: string }>();
@@ -29,36 +25,14 @@ export default function JobSheetScreen() {
   const csv = useDownloadCsvMutation();
   const queue = useReadingQueue();
 
-  if (session.status === 'restoring')
-    return (
-      <Screen>
-        <LoadingState label="Checking your session" />
-      </Screen>
-    );
-  if (session.status !== 'signed-in')
-    return (
-      <Screen testID="job-sheet">
-        <SignInPrompt />
-      </Screen>
-    );
-  if (!(id > 0))
-    return (
-      <Screen>
-        <ErrorState message="This address does not name a job." />
-      </Screen>
-    );
-  if (job.isPending)
-    return (
-      <Screen>
-        <LoadingState label="Loading the job sheet" />
-      </Screen>
-    );
-  if (job.error)
-    return (
-      <Screen>
-        <ErrorState message={jobError(job.error)} onRetry={job.refetch} />
-      </Screen>
-    );
+  const gate = jobGate({
+    sessionStatus: session.status,
+    validId: id > 0,
+    query: job,
+    loadingLabel: 'Loading the job sheet',
+    testID: 'job-sheet',
+  });
+  if (gate || !job.data) return gate;
 
   const j = job.data;
   const pending = queue.pendingFor(id);

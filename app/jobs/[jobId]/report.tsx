@@ -6,12 +6,11 @@ import { LiabilityNote } from '@/components/jobs/liability-note';
 import { PrintButton } from '@/components/jobs/print-button';
 import { ReportHeader } from '@/components/jobs/report-header';
 import { ReportReading } from '@/components/jobs/report-reading';
-import { SignInPrompt } from '@/components/jobs/sign-in-prompt';
+import { jobGate } from '@/components/jobs/job-gate';
 import { SupersededList } from '@/components/jobs/superseded-list';
 import { Screen } from '@/components/ui/screen';
-import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
+import { EmptyState } from '@/components/ui/states';
 import { Text } from '@/components/ui/text';
-import { describeError } from '@/lib/api/describe-error';
 import { useJobQuery } from '@/lib/hooks/use-jobs';
 import { useSession } from '@/lib/session/session-provider';
 import { Spacing } from '@/lib/theme';
@@ -23,36 +22,14 @@ export default function JobReportScreen() {
   const job = useJobQuery(id, session.status === 'signed-in');
   const [printedAt] = useState(() => new Date().toISOString());
 
-  if (session.status === 'restoring')
-    return (
-      <Screen>
-        <LoadingState label="Checking your session" />
-      </Screen>
-    );
-  if (session.status !== 'signed-in')
-    return (
-      <Screen testID="job-report">
-        <SignInPrompt />
-      </Screen>
-    );
-  if (!(id > 0))
-    return (
-      <Screen>
-        <ErrorState message="This address does not name a job." />
-      </Screen>
-    );
-  if (job.isPending)
-    return (
-      <Screen>
-        <LoadingState label="Preparing the report" />
-      </Screen>
-    );
-  if (job.error)
-    return (
-      <Screen>
-        <ErrorState message={describeError(job.error)} onRetry={job.refetch} />
-      </Screen>
-    );
+  const gate = jobGate({
+    sessionStatus: session.status,
+    validId: id > 0,
+    query: job,
+    loadingLabel: 'Preparing the report',
+    testID: 'job-report',
+  });
+  if (gate || !job.data) return gate;
 
   const j = job.data;
   const current = j.readings.filter((r) => r.supersededBy === null);
