@@ -62,10 +62,11 @@ export const needsRehash = (hash: string) => bcrypt.getRounds(hash) !== config.B
 /**
  * Compared against when the e-mail is unknown, so timing does not reveal which accounts
  * exist: it has the configured cost, as every real hash has (a cheaper dummy answered
- * unknown addresses in half the time). Made once, on first use.
+ * unknown addresses in half the time). Made at start-up, off the event loop's critical path.
  */
 let dummyHash: Promise<string> | null = null;
 export function dummyPasswordHash(): Promise<string> {
   dummyHash ??= bcrypt.hash('not-a-real-password-at-all', config.BCRYPT_COST);
   return dummyHash;
 }
+void dummyPasswordHash();
