@@ -8,19 +8,21 @@ import { diffSnapshots, valuesOfSnapshot } from '@/lib/contracts/spec-snapshot';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
+import type { SignedInUser } from '@/server/auth/roles';
 import { markLibraryChanged } from '../search/search.service';
 import { Spec } from './spec.entity';
 import { SpecRevision } from './spec-revision.entity';
 import { checkValues, inSpecTransaction, lockSpec, writeSpecChange } from './spec-write';
-import { getSpec } from './spec.service';
+import { checkVisible, getSpec } from './spec.service';
 
-/** Newest first, each with its changes against the revision before it. */
-export async function listRevisions(specId: number): Promise<RevisionListDto> {
+/** Newest first, each with its changes against the revision before it (a draft's only for editors). */
+export async function listRevisions(specId: number, viewer: SignedInUser | undefined): Promise<RevisionListDto> {
   const spec = await AppDataSource.getRepository(Spec).findOne({
     where: { id: specId },
-    select: { id: true, version: true },
+    select: { id: true, version: true, status: true },
   });
   if (!spec) throw AppError.notFound('spec', specId);
+  checkVisible(spec, viewer);
   const revisions = await AppDataSource.getRepository(SpecRevision).find({
     where: { specId },
     order: { version: 'ASC' },
