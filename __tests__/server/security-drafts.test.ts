@@ -129,4 +129,33 @@ describe('other paths that take a spec id', () => {
     const sheet = await request(app).get(`/api/jobs/${job.id}`).set(contributor).expect(200);
     expect(sheet.body.readings).toHaveLength(0);
   });
+
+  it('a proposal on a spec turned draft since shows its proposer none of the draft’s values; an editor sees them', async () => {
+    const spec = await createSpec('published');
+    const proposal = (
+      await request(app)
+        .post('/api/corrections')
+        .set(contributor)
+        .send({
+          kind: 'change',
+          specId: spec.id,
+          version: spec.version,
+          citation: { title: 'Invented Service Bulletin SB-9', edition: 'Rev. 1', page: '2' },
+          rationale: 'A later bulletin.',
+          values: { min: 410, max: 570, unit: 'ohm' },
+        })
+        .expect(201)
+    ).body;
+    await request(app)
+      .patch(`/api/specs/${spec.id}`)
+      .set(editor)
+      .send({ version: spec.version, reason: 'Being rechecked', status: 'draft', notes: SECRET_NOTE, max: 7777.5 })
+      .expect(200);
+    const mine = (await request(app).get(`/api/corrections/${proposal.id}`).set(contributor).expect(200)).body;
+    expect(mine.fields.every((f: { current: unknown }) => f.current === null)).toBe(true);
+    expect(mine.currentVersion).toBeNull();
+    expect(JSON.stringify(mine)).not.toMatch(/7777\.5|supplier unconfirmed/);
+    const theirs = (await request(app).get(`/api/corrections/${proposal.id}`).set(editor).expect(200)).body;
+    expect(theirs.fields.find((f: { field: string }) => f.field === 'max').current).toBe(7777.5);
+  });
 });

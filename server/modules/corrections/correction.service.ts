@@ -136,7 +136,7 @@ export async function editProposal(user: SignedInUser, id: number, b: EditPropos
     if (b.rationale) c.rationale = b.rationale;
     return m.getRepository(Correction).save(c);
   });
-  return toReview(saved);
+  return toReview(saved, user);
 }
 
 export async function withdraw(user: SignedInUser, id: number): Promise<CorrectionReviewDto> {
@@ -146,7 +146,7 @@ export async function withdraw(user: SignedInUser, id: number): Promise<Correcti
     c.decidedAt = new Date();
     return m.getRepository(Correction).save(c);
   });
-  return toReview(saved);
+  return toReview(saved, user);
 }
 
 export async function decide(
