@@ -100,20 +100,23 @@ describe('a published spec', () => {
   });
 });
 
+/** A contributor's proposed change to the spec. */
+const proposeOn = (spec: { id: number; version: number }) =>
+  request(app)
+    .post('/api/corrections')
+    .set(contributor)
+    .send({
+      kind: 'change',
+      specId: spec.id,
+      version: spec.version,
+      citation: { title: 'Invented Service Bulletin SB-9', edition: 'Rev. 1', page: '2' },
+      rationale: 'A later bulletin.',
+      values: { min: 410, max: 570, unit: 'ohm' },
+    });
+
 describe('other paths that take a spec id', () => {
   it('a contributor proposing a correction to a draft gets 404', async () => {
-    const draft = await createSpec('draft');
-    const res = await request(app)
-      .post('/api/corrections')
-      .set(contributor)
-      .send({
-        kind: 'change',
-        specId: draft.id,
-        version: draft.version,
-        citation: { title: 'Invented Service Bulletin SB-9', edition: 'Rev. 1', page: '2' },
-        rationale: 'Probing for drafts.',
-        values: { min: 410, max: 570, unit: 'ohm' },
-      });
+    const res = await proposeOn(await createSpec('draft'));
     expect(res.status).toBe(404);
   });
 
@@ -132,20 +135,7 @@ describe('other paths that take a spec id', () => {
 
   it('a proposal on a spec turned draft since shows its proposer none of the draft’s values; an editor sees them', async () => {
     const spec = await createSpec('published');
-    const proposal = (
-      await request(app)
-        .post('/api/corrections')
-        .set(contributor)
-        .send({
-          kind: 'change',
-          specId: spec.id,
-          version: spec.version,
-          citation: { title: 'Invented Service Bulletin SB-9', edition: 'Rev. 1', page: '2' },
-          rationale: 'A later bulletin.',
-          values: { min: 410, max: 570, unit: 'ohm' },
-        })
-        .expect(201)
-    ).body;
+    const proposal = (await proposeOn(spec).expect(201)).body;
     await request(app)
       .patch(`/api/specs/${spec.id}`)
       .set(editor)
