@@ -62,8 +62,9 @@ describe('the absolute session lifetime', () => {
     });
 
   it('is 30 days from sign-in: refreshing on day 29 does not extend it, and on day 30 it has ended', async () => {
-    const t0 = Date.now();
     const { cookie } = await signedIn();
+    // Taken after the sign-in answered: the session ends 30 days after a moment before this one.
+    const t0 = Date.now();
 
     fakeDateAt(t0 + 29 * DAY);
     const day29 = await refresh(cookie).expect(200);
@@ -77,8 +78,8 @@ describe('the absolute session lifetime', () => {
   });
 
   it('refuses the access tokens of a session past its end', async () => {
-    const t0 = Date.now();
     const { cookie } = await signedIn();
+    const t0 = Date.now();
     fakeDateAt(t0 + 30 * DAY - 60_000);
     const { accessToken } = (await refresh(cookie).expect(200)).body;
     await me(accessToken).expect(200);
