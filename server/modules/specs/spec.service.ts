@@ -5,7 +5,8 @@ import { AppError } from '@/server/errors/app-error';
 import { roleAtLeast, type SignedInUser } from '@/server/auth/roles';
 import { Spec } from './spec.entity';
 import { SpecRevision } from './spec-revision.entity';
-import { toComponent, toModelRef, toRevision, toSource, toSpecSummary, specValuesOf } from './spec.mapper';
+import { toRevision, toSpecSummary, specValuesOf } from './spec.mapper';
+import { toComponent, toModelRef, toSource } from '../library/library.mapper';
 import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
 
 /**
