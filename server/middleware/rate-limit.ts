@@ -1,10 +1,12 @@
 import type { Request } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
+import { rateLimitStore } from '../http/rate-limit-store';
 import { sendProblem } from './error-handler';
 
 /**
- * A limiter that answers 429 problem details with Retry-After. Each createApp() makes
- * its own limiters (in-memory), so one test file cannot exhaust another's.
+ * A limiter that answers 429 problem details with Retry-After. Its counters live in
+ * MariaDB (rate-limit-store.ts), so the limit holds across replicas; a store that fails
+ * (the database is down) lets the request through to fail on its own.
  */
 export function limiter(name: string, limit: number, windowMs: number, key?: (req: Request) => string) {
   return rateLimit({
@@ -12,6 +14,8 @@ export function limiter(name: string, limit: number, windowMs: number, key?: (re
     limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    store: rateLimitStore(name),
+    passOnStoreError: true,
     keyGenerator: (req) => `${name}:${ipKeyGenerator(req.ip ?? '')}${key ? `:${key(req)}` : ''}`,
     handler: (req, res) => {
       const reset = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
