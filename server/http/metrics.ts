@@ -1,8 +1,8 @@
 /**
  * /metrics in Prometheus text format (prom-client): request latency by route, the
  * database pool, the outbox backlog and the search index's age, beside Node's own
- * process metrics. Only loopback peers (the socket address, never X-Forwarded-For) or a
- * caller with `Authorization: Bearer $METRICS_TOKEN` may read it.
+ * process metrics. Only direct loopback peers (the socket address, and no proxy headers:
+ * the dev mailbox's rule) or a caller with `Authorization: Bearer $METRICS_TOKEN` may read it.
  */
 import { timingSafeEqual } from 'node:crypto';
 import type { RequestHandler } from 'express';
@@ -12,6 +12,7 @@ import { ROUTE_RULES } from '@/server/auth/route-rules';
 import { config } from '@/server/config';
 import { AppDataSource } from '@/server/db/data-source';
 import { sendProblem } from '@/server/middleware/error-handler';
+import { isDirectLoopbackPeer } from '@/server/modules/mail/dev-mailbox.router';
 import { within } from './lifecycle';
 
 export const registry = new client.Registry();
@@ -115,17 +116,8 @@ function tokenMatches(header: string | undefined): boolean {
   return given.length === want.length && timingSafeEqual(given, want);
 }
 
-export function isLoopback(address: string | undefined): boolean {
-  return address === '127.0.0.1' || address === '::1' || address === '::ffff:127.0.0.1';
-}
-
-/** A peer on this machine, asking directly: a request relayed by a proxy (even a local one) is not. */
-function localAndDirect(req: Parameters<RequestHandler>[0]): boolean {
-  return isLoopback(req.socket.remoteAddress) && !req.headers['x-forwarded-for'] && !req.headers.forwarded;
-}
-
 export const metricsEndpoint: RequestHandler = async (req, res) => {
-  if (!localAndDirect(req) && !tokenMatches(req.headers.authorization)) {
+  if (!isDirectLoopbackPeer(req) && !tokenMatches(req.headers.authorization)) {
     return sendProblem(res, { status: 404, code: 'not_found', detail: `No route for ${req.method} ${req.path}.` });
   }
   if (AppDataSource.isInitialized) await collectOutbox().catch(() => undefined);

@@ -1,0 +1,309 @@
+/**
+ * `npm run cluster -- --check [--galera]`: what two replicas behind nginx must show (issue 15),
+ * run by scripts/cluster.sh once the replicas are ready. Prints one line per check and ends
+ * with `N passed, N failed` (non-zero exit on a failure).
+ */
+import { spawn } from 'node:child_process';
+import fs from 'node:fs';
+import http from 'node:http';
+import path from 'node:path';
+
+const DIR = process.env.CLUSTER_DIR as string;
+const LB = Number(process.env.LB_PORT);
+const A = Number(process.env.A_PORT);
+const B = Number(process.env.B_PORT);
+const GALERA = process.env.GALERA === '1';
+const PASSWORD = process.env.DEMO_PASSWORD ?? 'bench-demo-2026';
+/** nginx's fail_timeout in scripts/cluster.sh. */
+const BALANCER_FAIL_TIMEOUT_MS = 2000;
+
+type Answer = { status: number; headers: http.IncomingHttpHeaders; body: any; ms: number }; // eslint-disable-line @typescript-eslint/no-explicit-any -- answers of many shapes
+
+/** One request on a fresh connection; a network failure answers status 0. */
+function call(port: number, method: string, urlPath: string, body?: unknown, headers: Record<string, string> = {}) {
+  const started = Date.now();
+  const data = body === undefined ? undefined : JSON.stringify(body);
+  return new Promise<Answer>((resolve) => {
+    const req = http.request(
+      {
+        host: '127.0.0.1',
+        port,
+        method,
+        path: urlPath,
+        agent: false,
+        timeout: 15_000,
+        headers: { ...(data ? { 'Content-Type': 'application/json' } : {}), ...headers },
+      },
+      (res) => {
+        let text = '';
+        res.on('data', (c: Buffer) => (text += c.toString()));
+        res.on('end', () => {
+          let parsed: unknown = text;
+          try {
+            parsed = JSON.parse(text);
+          } catch {
+            // not JSON: keep the text
+          }
+          resolve({ status: res.statusCode ?? 0, headers: res.headers, body: parsed, ms: Date.now() - started });
+        });
+      },
+    );
+    req.on('timeout', () => req.destroy(new Error('timeout')));
+    req.on('error', () => resolve({ status: 0, headers: {}, body: null, ms: Date.now() - started }));
+    req.end(data);
+  });
+}
+
+const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+const results: { name: string; ok: boolean; note: string }[] = [];
+async function check(name: string, fn: () => Promise<string>) {
+  try {
+    const note = await fn();
+    results.push({ name, ok: true, note });
+    console.log(`ok    ${name}: ${note}`);
+  } catch (err) {
+    results.push({ name, ok: false, note: (err as Error).message });
+    console.log(`FAIL  ${name}: ${(err as Error).message}`);
+  }
+}
+function expect(cond: unknown, message: string): asserts cond {
+  if (!cond) throw new Error(message);
+}
+
+let auth: Record<string, string> = {};
+let specId = 0;
+
+async function signIn() {
+  const res = await call(LB, 'POST', '/api/auth/sign-in', { email: 'editor@specbench.example', password: PASSWORD });
+  expect(res.status === 200, `sign-in through the balancer answered ${res.status}`);
+  auth = { Authorization: `Bearer ${res.body.accessToken}` };
+  const [a, b] = await Promise.all([
+    call(A, 'GET', '/api/auth/me', undefined, auth),
+    call(B, 'GET', '/api/auth/me', undefined, auth),
+  ]);
+  expect(a.status === 200 && b.status === 200, `the token answered ${a.status} on A and ${b.status} on B`);
+  return 'signed in through the balancer; the token works on replica A and on replica B';
+}
+
+async function rateLimitShared() {
+  const email = `cluster-limit-${Date.now()}@shop.specbench.example`;
+  const served = { A: 0, B: 0 };
+  for (let i = 1; i <= 25; i += 1) {
+    const port = i % 2 ? A : B;
+    const res = await call(port, 'POST', '/api/auth/sign-in', { email, password: 'wrong-password-123' });
+    if (res.status === 429) {
+      expect(served.A >= 3 && served.B >= 3, `limited before both replicas served (${JSON.stringify(served)})`);
+      expect(i <= 12, `first 429 only at attempt ${i}: each replica counts on its own`);
+      return `attempt ${i} refused (429) after ${served.A} attempts on A and ${served.B} on B`;
+    }
+    served[port === A ? 'A' : 'B'] += 1;
+  }
+  throw new Error('25 wrong passwords across the two replicas and no 429');
+}
+
+async function firstSpec(): Promise<{ id: number; version: number }> {
+  const models = await call(LB, 'GET', '/api/models');
+  const model = await call(LB, 'GET', `/api/models/${models.body[0].id}`);
+  const id = model.body.components.flatMap((c: { specs: { id: number }[] }) => c.specs)[0].id as number;
+  const spec = await call(A, 'GET', `/api/specs/${id}`);
+  return { id, version: spec.body.version };
+}
+
+async function editVisible() {
+  const spec = await firstSpec();
+  specId = spec.id;
+  const notes = `Cluster check ${Date.now()}`;
+  const edit = await call(
+    A,
+    'PATCH',
+    `/api/specs/${spec.id}`,
+    { version: spec.version, reason: 'cluster check', notes },
+    auth,
+  );
+  expect(edit.status === 200, `edit on A answered ${edit.status}: ${JSON.stringify(edit.body)}`);
+  const t0 = Date.now();
+  let revisionsMs = -1;
+  let cardMs = -1;
+  while (Date.now() - t0 < 10_000 && (revisionsMs < 0 || cardMs < 0)) {
+    const [revs, card] = await Promise.all([
+      call(B, 'GET', `/api/specs/${spec.id}/revisions`),
+      call(B, 'GET', `/api/specs/${spec.id}`),
+    ]);
+    if (revisionsMs < 0 && JSON.stringify(revs.body).includes('cluster check')) revisionsMs = Date.now() - t0;
+    if (cardMs < 0 && card.body?.notes === notes) cardMs = Date.now() - t0;
+    await sleep(50);
+  }
+  expect(revisionsMs >= 0 && revisionsMs <= 1000, `the revision showed on B after ${revisionsMs} ms`);
+  return `revision visible on B after ${revisionsMs} ms; B's spec card after ${cardMs} ms`;
+}
+
+async function mailbox(port: number): Promise<{ to: string }[]> {
+  return (await call(port, 'GET', '/dev/mailbox.json')).body;
+}
+
+async function outboxOnce() {
+  const tag = Date.now();
+  const emails = [1, 2, 3, 4].map((i) => `cluster-mail-${tag}-${i}@shop.specbench.example`);
+  for (const email of emails) {
+    const res = await call(LB, 'POST', '/api/auth/sign-up', {
+      email,
+      displayName: 'Cluster Check',
+      password: 'plug-gap-feeler-0.7',
+    });
+    expect(res.status === 202, `sign-up answered ${res.status}`);
+  }
+  const count = async () => {
+    const all = [...(await mailbox(A)), ...(await mailbox(B))];
+    return emails.map((e) => all.filter((m) => m.to.includes(e)).length);
+  };
+  for (let i = 0; i < 40 && (await count()).some((n) => n === 0); i += 1) await sleep(250);
+  await sleep(1500); // a second sender would show by now
+  const counts = await count();
+  expect(
+    counts.every((n) => n === 1),
+    `messages per address across both replicas: ${counts.join(', ')}`,
+  );
+  return `${emails.length} confirmation mails, each sent once by one of the two workers`;
+}
+
+/** Steady reads and readings through the balancer while `during` runs. */
+async function underLoad(during: () => Promise<void>) {
+  const job = await call(LB, 'POST', '/api/jobs', { machineLabel: 'Cluster check bench engine' }, auth);
+  expect(job.status === 201, `job create answered ${job.status}`);
+  let running = true;
+  const stats = { reads: 0, readFailures: 0, writes: 0, writeFailures: 0, acknowledged: new Set<string>() };
+  const reader = async () => {
+    while (running) {
+      const res = await call(LB, 'GET', `/api/specs/${specId}`);
+      stats.reads += 1;
+      if (res.status !== 200) stats.readFailures += 1;
+    }
+  };
+  const writer = async (w: number) => {
+    for (let i = 0; running; i += 1) {
+      const key = `cluster-${w}-${i}-${Date.now()}`;
+      const body = {
+        spec: { min: 3.57, max: 4.83, unit: 'ohm' },
+        reading: { value: 4.1, unit: 'Ω' },
+        label: 'Cluster check coil',
+      };
+      // The offline queue's rule: resend with the same key until an answer comes.
+      for (let attempt = 0; attempt < 20; attempt += 1) {
+        const res = await call(LB, 'POST', `/api/jobs/${job.body.id}/readings`, body, {
+          ...auth,
+          'Idempotency-Key': key,
+        });
+        stats.writes += 1;
+        if (res.status === 200 || res.status === 201) {
+          stats.acknowledged.add(key);
+          break;
+        }
+        stats.writeFailures += 1;
+        await sleep(200);
+      }
+    }
+  };
+  const load = Promise.all([reader(), reader(), reader(), writer(1), writer(2)]);
+  await sleep(1000);
+  await during();
+  await sleep(1000);
+  running = false;
+  await load;
+  const sheet = await call(LB, 'GET', `/api/jobs/${job.body.id}`, undefined, auth);
+  const keys: string[] = sheet.body.readings.map((r: { idempotencyKey: string }) => r.idempotencyKey);
+  const missing = [...stats.acknowledged].filter((k) => !keys.includes(k));
+  const twice = keys.length - new Set(keys).size;
+  return { ...stats, acknowledged: stats.acknowledged.size, missing: missing.length, twice };
+}
+
+const pidOf = (file: string) => Number(fs.readFileSync(path.join(DIR, file), 'utf8'));
+async function waitFor(port: number, urlPath: string, ms = 60_000) {
+  for (const t0 = Date.now(); Date.now() - t0 < ms; await sleep(200))
+    if ((await call(port, 'GET', urlPath)).status === 200) return;
+  throw new Error(`:${port}${urlPath} not ready after ${ms} ms`);
+}
+async function waitExit(pid: number) {
+  for (let i = 0; i < 300; i += 1) {
+    try {
+      process.kill(pid, 0);
+    } catch {
+      return;
+    }
+    await sleep(100);
+  }
+  throw new Error(`process ${pid} did not exit`);
+}
+function launch(script: string) {
+  spawn('bash', [path.join(DIR, script)], { detached: true, stdio: 'ignore' }).unref();
+}
+async function restartReplica(name: 'a' | 'b', signal: NodeJS.Signals) {
+  const pid = pidOf(`replica-${name}.pid`);
+  process.kill(pid, signal);
+  await waitExit(pid);
+  if (signal === 'SIGKILL') await sleep(1500); // traffic meets the dead replica for a while
+  launch(`replica-${name}.sh`);
+  await waitFor(name === 'a' ? A : B, '/api/health/ready');
+}
+
+async function rollingRestart() {
+  const s = await underLoad(async () => {
+    await restartReplica('a', 'SIGTERM');
+    // Until nginx's fail_timeout (2 s) has passed it may still count A out: only then stop B.
+    await sleep(BALANCER_FAIL_TIMEOUT_MS + 500);
+    await restartReplica('b', 'SIGTERM');
+  });
+  expect(s.readFailures === 0 && s.writeFailures === 0, `failed requests: ${JSON.stringify(s)}`);
+  expect(s.missing === 0 && s.twice === 0, `readings lost or doubled: ${JSON.stringify(s)}`);
+  return `${s.reads} reads and ${s.acknowledged} readings while A then B restarted: 0 failed, none lost`;
+}
+
+async function replicaKilled() {
+  const s = await underLoad(() => restartReplica('b', 'SIGKILL'));
+  expect(s.missing === 0 && s.twice === 0, `acknowledged readings lost or doubled: ${JSON.stringify(s)}`);
+  return `replica B killed mid-traffic: ${s.acknowledged} acknowledged readings all kept (${s.readFailures} reads and ${s.writeFailures} writes failed and were retried)`;
+}
+
+async function concurrentEdits() {
+  const spec = await firstSpec();
+  const edit = (port: number, n: number) =>
+    call(
+      port,
+      'PATCH',
+      `/api/specs/${spec.id}`,
+      { version: spec.version, reason: 'two writers', notes: `Writer ${n} ${Date.now()}` },
+      auth,
+    );
+  const statuses = (await Promise.all([edit(A, 1), edit(B, 2)])).map((r) => r.status).sort();
+  expect(statuses.join() === '200,409', `two writers on two nodes answered ${statuses.join(' and ')}`);
+  return 'two edits of one spec through node 1 and node 2: one 200, one 409';
+}
+
+async function nodeKilled() {
+  const s = await underLoad(async () => {
+    const pid = pidOf('node2/pid');
+    process.kill(pid, 'SIGKILL');
+    await waitExit(pid);
+    await sleep(3000);
+    launch('node2/start.sh'); // rejoins (state transfer) while traffic goes on through nodes 1 and 3
+  });
+  expect(s.missing === 0 && s.twice === 0, `acknowledged readings lost or doubled: ${JSON.stringify(s)}`);
+  return `Galera node 2 killed mid-traffic: ${s.acknowledged} acknowledged readings all kept (${s.writeFailures} write attempts failed and were retried)`;
+}
+
+async function main() {
+  await check('sign in on one replica, use on the other', signIn);
+  await check('sign-in rate limit holds across both replicas', rateLimitShared);
+  await check('an edit through A is visible on B', editVisible);
+  await check('each outbox message sent once', outboxOnce);
+  await check('rolling restart under load', rollingRestart);
+  await check('a replica killed mid-traffic', replicaKilled);
+  if (GALERA) {
+    await check('concurrent edits through two Galera nodes', concurrentEdits);
+    await check('a Galera node killed mid-traffic', nodeKilled);
+  }
+  const failed = results.filter((r) => !r.ok).length;
+  console.log(`${results.length - failed} passed, ${failed} failed`);
+  process.exit(failed ? 1 : 0);
+}
+
+void main();
