@@ -3,7 +3,7 @@
  * run by scripts/cluster.sh once the replicas are ready. Prints one line per check and ends
  * with `N passed, N failed` (non-zero exit on a failure).
  */
-import { spawn } from 'node:child_process';
+import { execFileSync, spawn } from 'node:child_process';
 import fs from 'node:fs';
 import http from 'node:http';
 import path from 'node:path';
@@ -213,7 +213,13 @@ async function underLoad(during: () => Promise<void>) {
   const keys: string[] = sheet.body.readings.map((r: { idempotencyKey: string }) => r.idempotencyKey);
   const missing = [...stats.acknowledged].filter((k) => !keys.includes(k));
   const twice = keys.length - new Set(keys).size;
-  return { ...stats, acknowledged: stats.acknowledged.size, missing: missing.length, twice };
+  return {
+    ...stats,
+    jobId: job.body.id as number,
+    acknowledged: stats.acknowledged.size,
+    missing: missing.length,
+    twice,
+  };
 }
 
 const pidOf = (file: string) => Number(fs.readFileSync(path.join(DIR, file), 'utf8'));
@@ -264,18 +270,42 @@ async function replicaKilled() {
 }
 
 async function concurrentEdits() {
-  const spec = await firstSpec();
-  const edit = (port: number, n: number) =>
-    call(
-      port,
-      'PATCH',
-      `/api/specs/${spec.id}`,
-      { version: spec.version, reason: 'two writers', notes: `Writer ${n} ${Date.now()}` },
-      auth,
+  const rounds = 5;
+  for (let round = 1; round <= rounds; round += 1) {
+    const spec = await firstSpec();
+    const edit = (port: number, n: number) =>
+      call(
+        port,
+        'PATCH',
+        `/api/specs/${spec.id}`,
+        { version: spec.version, reason: 'two writers', notes: `Writer ${n} ${Date.now()}` },
+        auth,
+      );
+    const statuses = (await Promise.all([edit(A, 1), edit(B, 2)])).map((r) => r.status).sort();
+    expect(
+      statuses.join() === '200,409',
+      `round ${round}: two writers on two nodes answered ${statuses.join(' and ')}`,
     );
-  const statuses = (await Promise.all([edit(A, 1), edit(B, 2)])).map((r) => r.status).sort();
-  expect(statuses.join() === '200,409', `two writers on two nodes answered ${statuses.join(' and ')}`);
-  return 'two edits of one spec through node 1 and node 2: one 200, one 409';
+  }
+  return `${rounds} rounds of two edits of one spec through node 1 and node 2: each one 200 and one 409`;
+}
+
+/** SQL on one Galera node over its socket (as the OS user, like the scripts). */
+function nodeSql(n: number, sql: string): string {
+  const socket = path.join(DIR, `node${n}/s`);
+  return execFileSync('mariadb', ['--no-defaults', '--protocol=socket', '-S', socket, '-Nse', sql], {
+    encoding: 'utf8',
+  }).trim();
+}
+async function waitSynced(n: number, ms = 120_000) {
+  for (const t0 = Date.now(); Date.now() - t0 < ms; await sleep(500)) {
+    try {
+      if (nodeSql(n, "SHOW STATUS LIKE 'wsrep_local_state_comment'").endsWith('Synced')) return Date.now() - t0;
+    } catch {
+      // still starting
+    }
+  }
+  throw new Error(`node ${n} not Synced after ${ms} ms`);
 }
 
 async function nodeKilled() {
@@ -287,7 +317,15 @@ async function nodeKilled() {
     launch('node2/start.sh'); // rejoins (state transfer) while traffic goes on through nodes 1 and 3
   });
   expect(s.missing === 0 && s.twice === 0, `acknowledged readings lost or doubled: ${JSON.stringify(s)}`);
-  return `Galera node 2 killed mid-traffic: ${s.acknowledged} acknowledged readings all kept (${s.writeFailures} write attempts failed and were retried)`;
+  const rejoinMs = await waitSynced(2);
+  const counts = [1, 2, 3].map((n) =>
+    Number(nodeSql(n, `SELECT COUNT(*) FROM specbench_cluster.readings WHERE job_id = ${s.jobId}`)),
+  );
+  expect(
+    counts.every((c) => c === counts[0] && c >= s.acknowledged),
+    `readings per node: ${counts.join(', ')}`,
+  );
+  return `Galera node 2 killed mid-traffic: ${s.acknowledged} acknowledged readings all kept (${s.writeFailures} write attempts failed and were retried); node 2 rejoined ${rejoinMs} ms after the load and holds the same ${counts[0]} rows as nodes 1 and 3`;
 }
 
 async function main() {

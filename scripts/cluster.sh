@@ -52,6 +52,7 @@ cleanup() {
   stop_pidfile "$CLUSTER_DIR/nginx.pid" QUIT
   if [ "$GALERA" = 1 ]; then
     for n in 3 2 1; do stop_pidfile "$CLUSTER_DIR/node$n/pid"; done
+    rm -rf "$CLUSTER_DIR"/node{1,2,3}/data # ~200 MB each; logs stay for a look
   else
     db_sql "DROP DATABASE IF EXISTS specbench_cluster;" 2>/dev/null || true
     if [ "$DB_STARTED_HERE" = 1 ]; then db_stop; fi
@@ -76,7 +77,7 @@ galera_node_start() { # galera_node_start <n> [extra mariadbd flags]
   cat >"$d/start.sh" <<EOF
 #!/usr/bin/env bash
 exec mariadbd --defaults-file="$d/my.cnf" --user="$(id -un)" --datadir="$d/data" --socket="$d/s" \\
-  --pid-file="$d/pid" --log-error="$d/log" --tmpdir="$d/tmp" --port=${NODE_SQL[$n]} --bind-address=127.0.0.1 \\
+  --pid-file="$d/pid" --log-error="$d/mysqld.log" --tmpdir="$d/tmp" --port=${NODE_SQL[$n]} --bind-address=127.0.0.1 \\
   --skip-name-resolve --local-infile=0 --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \\
   --max-connections=200 --binlog-format=ROW --default-storage-engine=InnoDB --innodb-autoinc-lock-mode=2 \\
   --wsrep-on=ON --wsrep-provider=/usr/lib/galera/libgalera_smm.so --wsrep-cluster-name=specbench \\
@@ -93,8 +94,8 @@ galera_wait_synced() {
     [ "$(node_sql "$1" "SHOW STATUS LIKE 'wsrep_local_state_comment'" 2>/dev/null | cut -f2)" = Synced ] && return 0
     sleep 0.2
   done
-  echo "Galera node $1 did not reach Synced; see $CLUSTER_DIR/node$1/log" >&2
-  tail -20 "$CLUSTER_DIR/node$1/log" >&2
+  echo "Galera node $1 did not reach Synced; see $CLUSTER_DIR/node$1/mysqld.log" >&2
+  tail -20 "$CLUSTER_DIR/node$1/mysqld.log" >&2
   return 1
 }
 
