@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
-# npm run cluster [-- --galera] [-- --check]
+# npm run cluster [-- --galera] [-- --check | --bench]
+#   npm run test:cluster = --check, npm run bench:cluster = --bench
 #
 # More than one server, on loopback: two app replicas behind nginx (Debian's package) as the
 # load balancer, on either the project's single MariaDB or, with --galera, a three-node MariaDB
@@ -14,12 +15,13 @@
 #                on 3320 (node 1 first, the others as backups), replica B through 3330 (node 2 first)
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 
-GALERA=0 CHECK=0
+GALERA=0 CHECK=0 BENCH=0
 for arg in "$@"; do
   case "$arg" in
     --galera) GALERA=1 ;;
     --check) CHECK=1 ;;
-    *) echo "usage: npm run cluster -- [--galera] [--check]" >&2; exit 2 ;;
+    --bench) BENCH=1 ;;
+    *) echo "usage: npm run cluster -- [--galera] [--check | --bench]" >&2; exit 2 ;;
   esac
 done
 
@@ -227,7 +229,20 @@ wait_ready "$A_PORT"
 wait_ready "$B_PORT"
 log "cluster: replicas ready: http://127.0.0.1:$LB_PORT (logs in $CLUSTER_DIR)"
 
-if [ "$CHECK" = 1 ]; then
+bench_reads() { # bench_reads <label> <port>
+  log "bench: $1"
+  BENCH_URL="http://127.0.0.1:$2" BENCH_SECONDS="${BENCH_SECONDS:-15}" \
+    npx tsx --tsconfig server/tsconfig.json scripts/bench-api.ts
+}
+
+if [ "$BENCH" = 1 ]; then
+  # Spec reads at 50 connections (scripts/bench-api.ts), the load generator on the same 2 cores.
+  bench_reads "one replica directly, no balancer" "$A_PORT"
+  bench_reads "balancer, two replicas" "$LB_PORT"
+  stop_pidfile "$CLUSTER_DIR/replica-b.pid"
+  sleep 3 # past nginx's fail_timeout: B is simply gone
+  bench_reads "balancer, one replica" "$LB_PORT"
+elif [ "$CHECK" = 1 ]; then
   CLUSTER_DIR="$CLUSTER_DIR" LB_PORT="$LB_PORT" A_PORT="$A_PORT" B_PORT="$B_PORT" GALERA="$GALERA" \
     DB_A="$DB_A" DB_B="$DB_B" npx tsx --tsconfig server/tsconfig.json scripts/cluster-check.ts
 else
