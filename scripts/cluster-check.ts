@@ -295,6 +295,7 @@ function nodeSql(n: number, sql: string): string {
   const socket = path.join(DIR, `node${n}/s`);
   return execFileSync('mariadb', ['--no-defaults', '--protocol=socket', '-S', socket, '-Nse', sql], {
     encoding: 'utf8',
+    stdio: ['ignore', 'pipe', 'ignore'],
   }).trim();
 }
 async function waitSynced(n: number, ms = 120_000) {
@@ -328,6 +329,81 @@ async function nodeKilled() {
   return `Galera node 2 killed mid-traffic: ${s.acknowledged} acknowledged readings all kept (${s.writeFailures} write attempts failed and were retried); node 2 rejoined ${rejoinMs} ms after the load and holds the same ${counts[0]} rows as nodes 1 and 3`;
 }
 
+/** A CSV upload as multipart/form-data (field `file`), through the balancer. */
+function upload(csv: string) {
+  const boundary = `----specbench${Date.now()}`;
+  const body =
+    `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="cluster-check.csv"\r\n` +
+    `Content-Type: text/csv\r\n\r\n${csv}\r\n--${boundary}--\r\n`;
+  return new Promise<Answer>((resolve, reject) => {
+    const req = http.request(
+      {
+        host: '127.0.0.1',
+        port: LB,
+        method: 'POST',
+        path: '/api/imports',
+        agent: false,
+        headers: { ...auth, 'Content-Type': `multipart/form-data; boundary=${boundary}` },
+      },
+      (res) => {
+        let text = '';
+        res.on('data', (c: Buffer) => (text += c.toString()));
+        res.on('end', () =>
+          resolve({ status: res.statusCode ?? 0, headers: res.headers, body: JSON.parse(text), ms: 0 }),
+        );
+      },
+    );
+    req.on('error', reject);
+    req.end(body);
+  });
+}
+
+async function importWhileNodeDown() {
+  const header = fs.readFileSync(path.join(__dirname, '../data/demo-library.csv'), 'utf8').split('\n')[0];
+  const make = `Clusterwerk ${Date.now()}`;
+  const rows = Array.from({ length: 40 }, (_, i) =>
+    [
+      make,
+      `C${i}`,
+      2020,
+      2022,
+      'test rig',
+      'Ignition coil',
+      'Primary winding resistance',
+      2.4,
+      2.8,
+      3.2,
+      'Ω',
+      20,
+      'copper',
+      'pins 1-2',
+      'engine cold',
+      'Clusterwerk bench notes',
+      '1st edition',
+      '4',
+      '',
+      '',
+    ].join(','),
+  );
+  const preview = await upload([header, ...rows].join('\r\n') + '\r\n');
+  expect(preview.status === 201, `upload answered ${preview.status}: ${JSON.stringify(preview.body).slice(0, 300)}`);
+  const pid = pidOf('node3/pid');
+  process.kill(pid, 'SIGTERM');
+  await waitExit(pid);
+  const commit = await call(LB, 'POST', `/api/imports/${preview.body.id}/commit`, {}, auth);
+  expect(commit.status === 200, `commit with node 3 stopped answered ${commit.status}`);
+  launch('node3/start.sh');
+  const rejoinMs = await waitSynced(3);
+  const q = `SELECT COUNT(*) FROM specbench_cluster.specs s JOIN specbench_cluster.components c ON c.id = s.component_id
+    JOIN specbench_cluster.vehicle_models m ON m.id = c.model_id JOIN specbench_cluster.makes k ON k.id = m.make_id WHERE k.name = '${make}'`;
+  const counts = [1, 2, 3].map((n) => Number(nodeSql(n, q)));
+  expect(
+    counts.every((c) => c === rows.length),
+    `specs of the import per node: ${counts.join(', ')}`,
+  );
+  return `${rows.length} specs committed while node 3 was stopped; node 3 rejoined after ${rejoinMs} ms and all three nodes hold all ${rows.length}`;
+}
+
 async function main() {
   await check('sign in on one replica, use on the other', signIn);
   await check('sign-in rate limit holds across both replicas', rateLimitShared);
@@ -338,6 +414,7 @@ async function main() {
   if (GALERA) {
     await check('concurrent edits through two Galera nodes', concurrentEdits);
     await check('a Galera node killed mid-traffic', nodeKilled);
+    await check('an import commit while a node is stopped and started again', importWhileNodeDown);
   }
   const failed = results.filter((r) => !r.ok).length;
   console.log(`${results.length - failed} passed, ${failed} failed`);

@@ -74,6 +74,8 @@ galera_node_start() { # galera_node_start <n> [extra mariadbd flags]
       --auth-root-authentication-method=socket --skip-test-db --skip-name-resolve >/dev/null
   fi
   # A private defaults file: the SST scripts read option files themselves (STACK.md, Galera).
+  # wsrep-sync-wait=1: a read waits until its node has applied what the cluster committed, so an
+  # edit through one node is read back through another (the version a 409 compares with).
   printf '[mysqld]\ninnodb_buffer_pool_size=64M\n[sst]\nsst-log-archive-dir=%s\nsockopt=bind=127.0.0.1\n' \
     "$d/sst_log_archive" >"$d/my.cnf"
   cat >"$d/start.sh" <<EOF
@@ -82,7 +84,7 @@ exec mariadbd --defaults-file="$d/my.cnf" --user="$(id -un)" --datadir="$d/data"
   --pid-file="$d/pid" --log-error="$d/mysqld.log" --tmpdir="$d/tmp" --port=${NODE_SQL[$n]} --bind-address=127.0.0.1 \\
   --skip-name-resolve --local-infile=0 --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \\
   --max-connections=200 --binlog-format=ROW --default-storage-engine=InnoDB --innodb-autoinc-lock-mode=2 \\
-  --wsrep-on=ON --wsrep-provider=/usr/lib/galera/libgalera_smm.so --wsrep-cluster-name=specbench \\
+  --wsrep-on=ON --wsrep-provider=/usr/lib/galera/libgalera_smm.so --wsrep-cluster-name=specbench --wsrep-sync-wait=1 \\
   --wsrep-node-name=node$n --wsrep-cluster-address=$GCOMM_ADDRESS --wsrep-node-address=127.0.0.1:${NODE_GCOMM[$n]} \\
   --wsrep-provider-options="gmcast.listen_addr=tcp://127.0.0.1:${NODE_GCOMM[$n]};ist.recv_addr=127.0.0.1:${NODE_IST[$n]};gcache.size=64M" \\
   --wsrep-sst-method=mariabackup --wsrep-sst-receive-address=127.0.0.1:${NODE_SST[$n]} "\$@"

@@ -66,6 +66,17 @@ function isDatabaseDown(err: unknown): boolean {
   );
 }
 
+/**
+ * InnoDB deadlocks and Galera certification failures (both error 1213) and lock-wait
+ * timeouts that no service turned into a 409: nothing was written, so the client may simply
+ * send it again (503 + Retry-After keeps an offline reading queued), never a 500.
+ */
+function isWriteConflict(err: unknown): boolean {
+  const e = err as { code?: string; driverError?: { code?: string } };
+  const code = e?.code ?? e?.driverError?.code;
+  return code === 'ER_LOCK_DEADLOCK' || code === 'ER_LOCK_WAIT_TIMEOUT';
+}
+
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof AppError) {
     if (err.status >= 500 && err.status !== 503) req.log?.error({ err }, err.message);
@@ -88,6 +99,14 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
       status: 503,
       code: 'unavailable',
       detail: 'The database is not reachable right now. Try again in a moment.',
+    });
+  }
+  if (isWriteConflict(err)) {
+    req.log?.warn({ err }, 'write conflict');
+    return sendProblem(res, {
+      status: 503,
+      code: 'write_conflict',
+      detail: 'Another change reached the same records at the same moment, so nothing was saved. Send it again.',
     });
   }
   if (req.log) req.log.error({ err }, `${req.method} ${req.path} failed`);
