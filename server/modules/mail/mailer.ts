@@ -13,6 +13,7 @@ import type { EntityManager } from 'typeorm';
 import { config } from '@/server/config';
 import { AppDataSource } from '@/server/db/data-source';
 import { within } from '@/server/http/lifecycle';
+import { logger } from '@/server/http/logging';
 import { fakeSmtp } from './fake-smtp';
 import type { OutboxMessage } from './outbox-message.entity';
 import { OutboxRepository, type Mail } from './outbox.repository';
@@ -90,7 +91,7 @@ export function startOutboxWorker(intervalMs = config.OUTBOX_POLL_MS) {
   timer = setInterval(() => {
     if (current || !AppDataSource.isInitialized) return;
     current = deliverDue()
-      .catch((err) => console.error('outbox:', (err as Error).message))
+      .catch((err) => logger.warn({ err }, 'outbox: delivery run failed'))
       .finally(() => {
         current = null;
       });
