@@ -172,6 +172,9 @@ http {
       proxy_set_header X-Forwarded-For \$proxy_add_x_forwarded_for;
       proxy_set_header X-Forwarded-Proto \$scheme;
       proxy_set_header X-Request-Id \$request_id;
+      # Which replica answered (loopback addresses only): a rolling restart waits until the
+      # restarted replica answers through the balancer again before stopping the next.
+      add_header X-Upstream \$upstream_addr always;
       # Retried on the other replica: refused or failed connections (any method: nothing was
       # sent), and 502/503/504 answers for idempotent methods only (no non_idempotent flag).
       proxy_next_upstream error timeout http_502 http_503 http_504;
