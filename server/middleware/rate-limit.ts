@@ -4,6 +4,7 @@
  */
 import type { Request } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
+import { rateLimitStore } from '../http/rate-limit-store';
 import { sendProblem } from './error-handler';
 
 export type LimiterOptions = {
@@ -16,9 +17,9 @@ export type LimiterOptions = {
 };
 
 /**
- * A limiter that answers 429 problem details with Retry-After (seconds until the window
- * frees a slot; the body's `retryAfter` says the same). Each createApp() makes its own
- * limiters (in-memory), so one test file cannot exhaust another's.
+ * A limiter that answers 429 problem details with Retry-After. Its counters live in
+ * MariaDB (rate-limit-store.ts), so the limit holds across replicas; a store that fails
+ * (the database is down) lets the request through to fail on its own.
  */
 export function limiter(
   name: string,
@@ -32,6 +33,8 @@ export function limiter(
     limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    store: rateLimitStore(name),
+    passOnStoreError: true,
     keyGenerator: (req) => {
       const client = options.acrossClients && key ? '*' : ipKeyGenerator(req.ip ?? '');
       return `${name}:${client}${key ? `:${key(req)}` : ''}`;
