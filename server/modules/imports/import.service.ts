@@ -9,7 +9,7 @@ import { checkCsvBytes, decodeCsv, validateSpecCsv, type RowProblem, type Valida
 import type { ImportBatchSummaryDto, ImportPreviewDto, ImportPreviewQuery } from '@/lib/contracts/imports';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
-import { markLibraryChanged } from '../search/search.service';
+import { lastRevisionId, markLibraryChanged, recordImportChanges } from '../library/library-changes';
 import { ImportBatch, type ImportCounts } from './import-batch.entity';
 import { planImport, type PlannedRow } from './import-plan';
 import { applyImport, type Actor } from './import-apply';
@@ -139,7 +139,9 @@ async function commitLocked(
       `Import #${id} failed validation, so there is nothing to commit. Fix the file and upload it again.`,
     );
   batch.reason = reason ?? `CSV import of ${batch.fileName}`;
+  const revisionsBefore = await lastRevisionId(m);
   await applyImport(m, id, actor, batch.reason, batch.counts);
+  await recordImportChanges(m, id, revisionsBefore);
   Object.assign(batch, {
     status: 'committed',
     committedAt: new Date(),
@@ -186,7 +188,9 @@ export async function importCsvNow(
       ...uploaderOf({ fileName, bytes: Buffer.from(text, 'utf8') }, actor),
       reason,
     });
+    const revisionsBefore = await lastRevisionId(m);
     await applyImport(m, batch.id, actor, reason, counts);
+    await recordImportChanges(m, batch.id, revisionsBefore);
     await m.getRepository(ImportBatch).update(batch.id, {
       status: 'committed',
       committedAt: new Date(),
