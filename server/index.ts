@@ -6,11 +6,13 @@ import { AppDataSource } from './db/data-source';
 import { createApp } from './app';
 import { fakeSmtp } from './modules/mail/fake-smtp';
 import { startOutboxWorker, stopOutboxWorker } from './modules/mail/mailer';
+import { startImportCleanup, stopImportCleanup } from './modules/imports/import-cleanup';
 
 let server: Server | undefined;
 
 function shutdown(code: number) {
   stopOutboxWorker();
+  stopImportCleanup();
   void fakeSmtp.stop();
   const done = () =>
     AppDataSource.destroy()
@@ -45,6 +47,7 @@ async function main() {
     );
   }
   startOutboxWorker();
+  startImportCleanup();
   server = createApp().listen(config.PORT, config.HOST, () => {
     const where =
       config.HOST === '127.0.0.1' ? `http://localhost:${config.PORT}` : `http://${config.HOST}:${config.PORT}`;

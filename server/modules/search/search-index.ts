@@ -1,16 +1,20 @@
 /**
  * An in-memory, typo-tolerant index of the published specs, built for a million of them.
  * Each spec has a slot; each term (term-vocabulary.ts) a posting list of slots with the
- * field's weight, in growable typed arrays. A query word stands for a few terms (exact,
- * prefix, fuzzy), whose postings add into dense per-slot scores; every word must match
- * some field (make, model, years, variant, component, parameter or a synonym of theirs).
- * The work per query is bounded: at most MAX_QUERY_WORDS words and POSTING_BUDGET posting
- * entries, best terms first. Specs are added, replaced and removed one at a time (a removed
- * slot is skipped until the next full build), so an edit needs no rebuild.
+ * field's weight, in growable typed arrays (postings.ts). A query word stands for a few
+ * terms (exact, prefix, fuzzy); every word must match some field (make, model, years,
+ * variant, component, parameter or a synonym of theirs). Words are taken cheapest first and
+ * each later one only scores the slots every earlier one matched, so a year or a very
+ * common word costs no more than the candidates left; when no spec matches every word, the
+ * best partial matches are scored instead. The work is bounded: at most MAX_QUERY_WORDS
+ * words and POSTING_BUDGET posting entries per query. Specs are added, replaced and removed
+ * one at a time (a removed slot is skipped until the next full build), so an edit needs no
+ * rebuild.
  */
 import { SEARCH_MAX_WORDS } from '@/lib/contracts/library';
-import { FIELD_WEIGHT, STOP_WORDS, cachedSynonymTokens, cachedTokens, tokenize, yearOf } from './search-tokens';
+import { FIELD_WEIGHT, STOP_WORDS, cachedSynonymTokens, tokenize, yearOf } from './search-tokens';
 import { TermVocabulary, type TermMatch } from './term-vocabulary';
+import { Posting, Scratch, SlotTable } from './postings';
 
 export { tokenize } from './search-tokens';
 
@@ -30,68 +34,30 @@ export type SearchMatch<D extends SearchDoc = SearchDoc> = { doc: D; score: numb
 
 /** Words of a query that are looked up; the API refuses longer queries (lib/contracts/library.ts). */
 export const MAX_QUERY_WORDS = SEARCH_MAX_WORDS;
-/** Posting entries one query may visit, over all its words. */
-const POSTING_BUDGET = 3_000_000;
+/** Posting entries one query may visit, over all its words and both passes. */
+const POSTING_BUDGET = 4_000_000;
 
-class Posting {
-  slots = new Int32Array(4);
-  weights = new Uint8Array(4);
-  length = 0;
-  push(slot: number, weight: number) {
-    if (this.length === this.slots.length) {
-      const slots = new Int32Array(this.length * 2);
-      slots.set(this.slots);
-      this.slots = slots;
-      const weights = new Uint8Array(this.length * 2);
-      weights.set(this.weights);
-      this.weights = weights;
-    }
-    this.slots[this.length] = slot;
-    this.weights[this.length] = weight;
-    this.length += 1;
-  }
-}
-
-/** Per-slot working arrays, reused by every query (search is synchronous, so one set suffices). */
-class Scratch {
-  score = new Float32Array(0);
-  best = new Float32Array(0);
-  hits = new Uint8Array(0);
-  touched = new Int32Array(0);
-  wordTouched = new Int32Array(0);
-  fit(n: number) {
-    if (this.score.length >= n) return;
-    const size = Math.max(1024, Math.ceil(n * 1.25));
-    this.score = new Float32Array(size);
-    this.best = new Float32Array(size);
-    this.hits = new Uint8Array(size);
-    this.touched = new Int32Array(size);
-    this.wordTouched = new Int32Array(size);
-  }
-}
+type Word = { year: number | null; terms: TermMatch[]; cost: number };
 
 export class SearchIndex<D extends SearchDoc = SearchDoc> {
   private readonly vocabulary = new TermVocabulary();
   private readonly postings: Posting[] = [];
-  private readonly slots: (D | null)[] = [];
-  private readonly slotOf = new Map<number, number>();
-  private yearFrom = new Int16Array(1024);
-  private yearTo = new Int16Array(1024);
+  private readonly table = new SlotTable<D>();
   private readonly scratch = new Scratch();
-  private removed = 0;
+  /** Term ids of a field's text, per distinct text (a million specs share a few thousand names). */
+  private readonly textTerms = new Map<string, Int32Array>();
 
   constructor(docs: Iterable<D> = []) {
     for (const d of docs) this.upsert(d);
   }
 
-  /** Published specs in the index. */
   get size() {
-    return this.slotOf.size;
+    return this.table.live;
   }
 
   /** Share of slots held by removed or replaced specs (a full build reclaims them). */
   get wasted() {
-    return this.slots.length === 0 ? 0 : this.removed / this.slots.length;
+    return this.table.wasted;
   }
 
   get termCount() {
@@ -99,52 +65,48 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
   }
 
   has(specId: number) {
-    return this.slotOf.has(specId);
+    return this.table.has(specId);
+  }
+
+  private termsOf(text: string): Int32Array {
+    let ids = this.textTerms.get(text);
+    if (!ids) {
+      if (this.textTerms.size > 300_000) this.textTerms.clear();
+      ids = Int32Array.from(tokenize(text), (t) => this.vocabulary.intern(t));
+      this.textTerms.set(text, ids);
+    }
+    return ids;
   }
 
   /** Adds the spec, or replaces the one with its id. */
   upsert(doc: D) {
-    this.remove(doc.specId);
-    const slot = this.slots.length;
-    this.slots.push(doc);
-    this.slotOf.set(doc.specId, slot);
-    if (slot >= this.yearFrom.length) {
-      const grow = (a: Int16Array) => {
-        const b = new Int16Array(a.length * 2);
-        b.set(a);
-        return b;
-      };
-      this.yearFrom = grow(this.yearFrom);
-      this.yearTo = grow(this.yearTo);
-    }
-    this.yearFrom[slot] = doc.yearFrom;
-    this.yearTo[slot] = doc.yearTo ?? 9999;
-    const weights = new Map<number, number>();
-    const add = (tokens: string[], weight: number) => {
-      for (const t of tokens) {
-        const id = this.vocabulary.intern(t);
-        if ((weights.get(id) ?? 0) < weight) weights.set(id, weight);
+    const slot = this.table.add(doc);
+    const mark = this.scratch.marks(this.vocabulary.size + 64);
+    const post = (ids: Int32Array, weight: number) => {
+      for (const id of ids) {
+        if (mark.slot[id] === slot + 1 && mark.weight[id] >= weight) continue;
+        if (mark.slot[id] !== slot + 1) {
+          mark.slot[id] = slot + 1;
+          (this.postings[id] ??= new Posting()).push(slot, weight);
+        } else this.postings[id].raise(slot, weight);
+        mark.weight[id] = weight;
       }
     };
-    add(cachedTokens(doc.parameter), FIELD_WEIGHT.parameter);
-    add(cachedTokens(doc.component), FIELD_WEIGHT.component);
-    add(cachedTokens(doc.model), FIELD_WEIGHT.model);
-    add(cachedTokens(doc.make), FIELD_WEIGHT.make);
-    add(cachedTokens(doc.variant), FIELD_WEIGHT.variant);
-    add(cachedSynonymTokens(doc.component, doc.parameter), FIELD_WEIGHT.synonym);
-    for (const [id, weight] of weights) (this.postings[id] ??= new Posting()).push(slot, weight);
+    post(this.termsOf(doc.parameter), FIELD_WEIGHT.parameter);
+    post(this.termsOf(doc.component), FIELD_WEIGHT.component);
+    post(this.termsOf(doc.model), FIELD_WEIGHT.model);
+    post(this.termsOf(doc.make), FIELD_WEIGHT.make);
+    post(this.termsOf(doc.variant), FIELD_WEIGHT.variant);
+    const synonyms = cachedSynonymTokens(doc.component, doc.parameter);
+    if (synonyms.length) post(this.termsOf(synonyms.join(' ')), FIELD_WEIGHT.synonym);
   }
 
   remove(specId: number) {
-    const slot = this.slotOf.get(specId);
-    if (slot === undefined) return;
-    this.slots[slot] = null;
-    this.slotOf.delete(specId);
-    this.removed += 1;
+    this.table.remove(specId);
   }
 
-  /** The terms a query word may stand for, best first. */
-  private termsFor(word: string): TermMatch[] {
+  /** The terms a query word may stand for, best first, and how many posting entries they hold. */
+  private lookUp(word: string): Word {
     const terms = new Map<number, number>();
     const exact = this.vocabulary.id(word);
     if (exact !== undefined) terms.set(exact, 1);
@@ -152,81 +114,74 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
     for (const { term, quality } of this.vocabulary.fuzzy(word)) {
       if ((terms.get(term) ?? 0) < quality) terms.set(term, quality);
     }
-    return [...terms].map(([term, quality]) => ({ term, quality })).sort((a, b) => b.quality - a.quality);
+    const list = [...terms].map(([term, quality]) => ({ term, quality })).sort((a, b) => b.quality - a.quality);
+    const year = yearOf(word);
+    const cost = list.reduce((n, t) => n + (this.postings[t.term]?.length ?? 0), 0);
+    return { year, terms: list, cost: year === null ? cost : this.table.slots.length };
   }
 
-  /** Adds one word's best match per slot into the scores; returns the posting entries it visited. */
-  private scoreWord(word: string, budget: number, touchedCount: number): { visited: number; touched: number } {
-    const { best, score, hits, touched, wordTouched } = this.scratch;
-    let n = 0;
+  /**
+   * Adds one word's best match per slot into the scores. With `only` (the number of words
+   * already taken), slots that missed an earlier word are passed over. Returns the entries visited.
+   */
+  private scoreWord(w: Word, budget: number, only: number | null): number {
+    const s = this.scratch;
+    const { alive, yearFrom, yearTo } = this.table;
+    const eligible = (slot: number) => alive[slot] === 1 && (only === null || s.hits[slot] === only);
     let visited = 0;
-    const offer = (slot: number, q: number) => {
-      if (q > best[slot]) {
-        if (best[slot] === 0) wordTouched[n++] = slot;
-        best[slot] = q;
+    if (w.year !== null && only !== null && only > 0) {
+      for (let i = 0; i < s.count; i += 1) {
+        const slot = s.touched[i];
+        if (s.hits[slot] === only && yearFrom[slot] <= w.year && w.year <= yearTo[slot]) s.offer(slot, 1);
       }
-    };
-    for (const { term, quality } of this.termsFor(word)) {
+      visited += s.count;
+    } else if (w.year !== null) {
+      for (let slot = 0; slot < alive.length && slot < this.table.slots.length; slot += 1) {
+        if (eligible(slot) && yearFrom[slot] <= w.year && w.year <= yearTo[slot]) s.offer(slot, 1);
+      }
+      visited += this.table.slots.length;
+    }
+    for (const { term, quality } of w.terms) {
       const p = this.postings[term];
       if (!p || visited >= budget) continue;
       const end = Math.min(p.length, budget - visited);
       visited += end;
-      for (let i = 0; i < end; i += 1) {
-        const slot = p.slots[i];
-        if (this.slots[slot] !== null) offer(slot, (quality * p.weights[i]) / 10);
+      const { slots, weights } = p;
+      const hits = s.hits;
+      const q = quality / 10;
+      if (only === null) {
+        for (let i = 0; i < end; i += 1) if (alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
+      } else {
+        for (let i = 0; i < end; i += 1)
+          if (hits[slots[i]] === only && alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
       }
     }
-    const year = yearOf(word);
-    if (year !== null) {
-      visited += this.slots.length;
-      for (let slot = 0; slot < this.slots.length; slot += 1) {
-        if (this.slots[slot] !== null && this.yearFrom[slot] <= year && year <= this.yearTo[slot]) offer(slot, 1);
-      }
+    s.commitWord();
+    return visited;
+  }
+
+  /** Scores every word over the index (`all`: each word only where the earlier ones all matched). */
+  private pass(words: Word[], all: boolean, budget: number): number {
+    this.scratch.reset();
+    for (let k = 0; k < words.length; k += 1) {
+      budget = Math.max(0, budget - this.scoreWord(words[k], budget, all ? k : null));
+      if (all && this.scratch.count === 0) break;
     }
-    for (let i = 0; i < n; i += 1) {
-      const slot = wordTouched[i];
-      if (hits[slot] === 0) touched[touchedCount++] = slot;
-      score[slot] += best[slot];
-      hits[slot] += 1;
-      best[slot] = 0;
-    }
-    return { visited, touched: touchedCount };
+    return budget;
   }
 
   search(query: string, limit: number): { matches: SearchMatch<D>[]; total: number } {
-    const words = [...new Set(tokenize(query).filter((w) => !STOP_WORDS.has(w)))].slice(0, MAX_QUERY_WORDS);
-    if (words.length === 0) return { matches: [], total: 0 };
-    this.scratch.fit(this.slots.length);
-    const { score, hits, touched } = this.scratch;
-    let budget = POSTING_BUDGET;
-    let count = 0;
-    for (const word of words) {
-      const r = this.scoreWord(word, budget, count);
-      budget = Math.max(0, budget - r.visited);
-      count = r.touched;
+    const unique = [...new Set(tokenize(query).filter((w) => !STOP_WORDS.has(w)))].slice(0, MAX_QUERY_WORDS);
+    if (unique.length === 0) return { matches: [], total: 0 };
+    const words = unique.map((w) => this.lookUp(w)).sort((a, b) => a.cost - b.cost);
+    this.scratch.fit(this.table.slots.length);
+    const left = this.pass(words, true, POSTING_BUDGET);
+    let needed = words.length;
+    if (!this.scratch.hasHits(needed)) {
+      // No spec matches every word: show the ones that match the most.
+      this.pass(words, false, left);
+      needed = this.scratch.mostHits();
     }
-    // Every word must match; when no spec matches them all, the best partial matches are shown.
-    let most = 0;
-    for (let i = 0; i < count; i += 1) most = Math.max(most, hits[touched[i]]);
-    const needed = Math.min(words.length, most);
-    const top: SearchMatch<D>[] = [];
-    let total = 0;
-    const better = (a: SearchMatch<D>, b: SearchMatch<D>) => b.score - a.score || a.doc.specId - b.doc.specId;
-    for (let i = 0; i < count; i += 1) {
-      const slot = touched[i];
-      const enough = needed > 0 && hits[slot] >= needed;
-      const s = score[slot];
-      score[slot] = 0;
-      hits[slot] = 0;
-      if (!enough) continue;
-      total += 1;
-      const match = { doc: this.slots[slot]!, score: s / words.length };
-      if (top.length === limit && better(match, top[top.length - 1]) >= 0) continue;
-      let j = top.length;
-      while (j > 0 && better(match, top[j - 1]) < 0) j -= 1;
-      top.splice(j, 0, match);
-      if (top.length > limit) top.pop();
-    }
-    return { matches: top, total };
+    return this.scratch.top(needed, limit, words.length, this.table.slots);
   }
 }
