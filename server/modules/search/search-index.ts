@@ -36,6 +36,8 @@ export type SearchMatch<D extends SearchDoc = SearchDoc> = { doc: D; score: numb
 export const MAX_QUERY_WORDS = SEARCH_MAX_WORDS;
 /** Posting entries one query may visit, over all its words and both passes. */
 const POSTING_BUDGET = 4_000_000;
+/** What checking one candidate's own terms costs, in posting entries walked (measured roughly). */
+const FORWARD_COST = 24;
 
 type Word = { year: number | null; terms: TermMatch[]; cost: number };
 
@@ -92,13 +94,7 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
         mark.weight[id] = weight;
       }
     };
-    post(this.termsOf(doc.parameter), FIELD_WEIGHT.parameter);
-    post(this.termsOf(doc.component), FIELD_WEIGHT.component);
-    post(this.termsOf(doc.model), FIELD_WEIGHT.model);
-    post(this.termsOf(doc.make), FIELD_WEIGHT.make);
-    post(this.termsOf(doc.variant), FIELD_WEIGHT.variant);
-    const synonyms = cachedSynonymTokens(doc.component, doc.parameter);
-    if (synonyms.length) post(this.termsOf(synonyms.join(' ')), FIELD_WEIGHT.synonym);
+    for (const [ids, weight] of this.fieldsOf(doc)) post(ids, weight);
   }
 
   remove(specId: number) {
@@ -141,6 +137,8 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
       }
       visited += this.table.slots.length;
     }
+    if (only !== null && only > 0 && w.year === null && s.count * FORWARD_COST < w.cost)
+      return visited + this.scoreCandidates(w, only);
     for (const { term, quality } of w.terms) {
       const p = this.postings[term];
       if (!p || visited >= budget) continue;
@@ -158,6 +156,43 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
     }
     s.commitWord();
     return visited;
+  }
+
+  /** The spec's fields as term ids with their weights (the texts' ids are cached). */
+  private fieldsOf(doc: D): [Int32Array, number][] {
+    const synonyms = cachedSynonymTokens(doc.component, doc.parameter);
+    return [
+      [this.termsOf(doc.parameter), FIELD_WEIGHT.parameter],
+      [this.termsOf(doc.component), FIELD_WEIGHT.component],
+      [this.termsOf(doc.model), FIELD_WEIGHT.model],
+      [this.termsOf(doc.make), FIELD_WEIGHT.make],
+      [this.termsOf(doc.variant), FIELD_WEIGHT.variant],
+      [this.termsOf(synonyms.join(' ')), FIELD_WEIGHT.synonym],
+    ];
+  }
+
+  /**
+   * A later word when few candidates are left: each candidate's own terms are checked
+   * against the word's, instead of walking the word's (long) postings.
+   */
+  private scoreCandidates(w: Word, only: number): number {
+    const s = this.scratch;
+    const quality = new Map(w.terms.map((t) => [t.term, t.quality]));
+    for (let i = 0; i < s.count; i += 1) {
+      const slot = s.touched[i];
+      const doc = this.table.slots[slot];
+      if (s.hits[slot] !== only || doc === null) continue;
+      let best = 0;
+      for (const [ids, weight] of this.fieldsOf(doc)) {
+        for (const id of ids) {
+          const q = quality.get(id);
+          if (q !== undefined && (q * weight) / 10 > best) best = (q * weight) / 10;
+        }
+      }
+      if (best > 0) s.offer(slot, best);
+    }
+    s.commitWord();
+    return s.count * FORWARD_COST;
   }
 
   /** Scores every word over the index (`all`: each word only where the earlier ones all matched). */
