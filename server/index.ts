@@ -7,6 +7,7 @@ import { createApp } from './app';
 import { fakeSmtp } from './modules/mail/fake-smtp';
 import { startOutboxWorker, stopOutboxWorker } from './modules/mail/mailer';
 import { startImportCleanup, stopImportCleanup } from './modules/imports/import-cleanup';
+import { searchEngine } from './modules/search/search.service';
 
 let server: Server | undefined;
 
@@ -48,6 +49,8 @@ async function main() {
   }
   startOutboxWorker();
   startImportCleanup();
+  // Build the search index now, not on the first search.
+  void searchEngine.rebuild().catch((err) => console.error('Search index build failed:', err));
   server = createApp().listen(config.PORT, config.HOST, () => {
     const where =
       config.HOST === '127.0.0.1' ? `http://localhost:${config.PORT}` : `http://${config.HOST}:${config.PORT}`;

@@ -13,6 +13,8 @@ const PAGE = 5000;
 
 export class LibraryFollower {
   private cursor: number | null = null;
+  /** Moves on every resetTo: a poll under way when the reader rebuilt must not move the cursor past the reset. */
+  private resets = 0;
   private timer: ReturnType<typeof setInterval> | null = null;
   private polling: Promise<void> | null = null;
   private again = false;
@@ -49,6 +51,7 @@ export class LibraryFollower {
   /** Replays from `id`: the caller has just read the library as it stood at that change. */
   resetTo(id: number) {
     this.cursor = id;
+    this.resets += 1;
   }
 
   /** One poll; overlapping calls share it and one more poll runs after it. */
@@ -76,10 +79,12 @@ export class LibraryFollower {
       return;
     }
     for (;;) {
+      const resets = this.resets;
       const changes = await changesAfter(this.cursor, PAGE);
       if (changes.length === 0) return;
       const ids = [...new Set(changes.map((c) => c.specId))];
       for (const listener of this.listeners) await listener(ids);
+      if (resets !== this.resets) continue;
       this.cursor = changes[changes.length - 1].id;
       if (changes.length < PAGE) return;
     }

@@ -17,6 +17,16 @@ const PAGE = 5000;
 const REBUILD_AT = 50_000;
 const MAX_WASTED = 0.3;
 
+/** Specs added between two turns of the event loop (each takes some microseconds). */
+const SLICE = 500;
+
+async function addInSlices(index: SearchIndex<IndexedSpec>, docs: IndexedSpec[]) {
+  for (let i = 0; i < docs.length; i += SLICE) {
+    for (let j = i; j < Math.min(docs.length, i + SLICE); j += 1) index.upsert(docs[j]);
+    if (i + SLICE < docs.length) await yieldToLoop();
+  }
+}
+
 export type SearchStats = { specs: number; terms: number; buildMs: number | null; builtAt: string | null };
 
 export class SearchEngine {
@@ -52,7 +62,7 @@ export class SearchEngine {
     const next = new SearchIndex<IndexedSpec>();
     for (let after = 0; ;) {
       const page = await loadPublishedPage(after, PAGE);
-      for (const doc of page) next.upsert(doc);
+      await addInSlices(next, page);
       if (page.length < PAGE) break;
       after = page[page.length - 1].specId;
       await yieldToLoop();
@@ -76,7 +86,7 @@ export class SearchEngine {
       const index = this.index;
       const published = new Set(docs.map((d) => d.specId));
       for (const id of slice) if (!published.has(id)) index.remove(id);
-      for (const doc of docs) index.upsert(doc);
+      await addInSlices(index, docs);
     }
     if (this.index.wasted > MAX_WASTED && this.index.size > 10_000) void this.rebuild();
   }
