@@ -12,7 +12,7 @@
  * rebuild.
  */
 import { SEARCH_MAX_WORDS } from '@/lib/contracts/library';
-import { FIELD_WEIGHT, STOP_WORDS, cachedSynonymTokens, tokenize, yearOf } from './search-tokens';
+import { FIELD_WEIGHT, STOP_WORDS, cachedSynonymTokens, isNumber, tokenize, yearOf } from './search-tokens';
 import { TermVocabulary, type TermMatch } from './term-vocabulary';
 import { Posting, Scratch, SlotTable } from './postings';
 
@@ -35,7 +35,7 @@ export type SearchMatch<D extends SearchDoc = SearchDoc> = { doc: D; score: numb
 /** Words of a query that are looked up; the API refuses longer queries (lib/contracts/library.ts). */
 export const MAX_QUERY_WORDS = SEARCH_MAX_WORDS;
 /** Posting entries one query may visit, over all its words and both passes. */
-const POSTING_BUDGET = 4_000_000;
+const POSTING_BUDGET = 2_500_000;
 /** What checking one candidate's own terms costs, in posting entries walked (measured roughly). */
 const FORWARD_COST = 24;
 
@@ -106,7 +106,9 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
     const terms = new Map<number, number>();
     const exact = this.vocabulary.id(word);
     if (exact !== undefined) terms.set(exact, 1);
-    if (word.length >= 2) for (const id of this.vocabulary.prefixed(word)) terms.set(id, 0.85);
+    // Two letters prefix too many words to say anything; two digits (a displacement) do not.
+    if (word.length >= 3 || (word.length === 2 && isNumber(word)))
+      for (const id of this.vocabulary.prefixed(word)) terms.set(id, 0.85);
     for (const { term, quality } of this.vocabulary.fuzzy(word)) {
       if ((terms.get(term) ?? 0) < quality) terms.set(term, quality);
     }
