@@ -3,7 +3,14 @@
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 ensure_npm
 cd "$ROOT"
-npx tsx --tsconfig server/tsconfig.json scripts/bench-search.ts
+
+# Search at 1 000 000 invented specs (issue 14): the library is loaded once into
+# specbench_bench_search (several minutes) and kept for later runs while unchanged.
+db_state="$(bash "$ROOT/scripts/db.sh" start)"
+search_status=0
+DB_NAME=specbench_bench_search npx tsx --tsconfig server/tsconfig.json scripts/bench-search.ts || search_status=$?
+if [ "$db_state" = started ]; then bash "$ROOT/scripts/db.sh" stop; fi
+[ "$search_status" -eq 0 ] || exit "$search_status"
 
 # CSV import: 50 000 invented rows validated, previewed and committed, against MariaDB's own
 # bulk load of the same file, in the throwaway database specbench_bench (created, migrated
