@@ -11,6 +11,7 @@ import { enforceRouteRules } from './auth/access';
 import { passport } from './auth/passport';
 import { config } from './config';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { methodNotAllowed } from './middleware/method-not-allowed';
 import { healthRouter } from './modules/health/health.router';
 import { modelRouter } from './modules/library/model.router';
 import { searchRouter } from './modules/search/search.router';
@@ -65,6 +66,7 @@ export function createApp(options: { webDist?: string | null } = {}) {
   app.use(passport.initialize());
 
   const api = express.Router();
+  api.use(methodNotAllowed(api));
   api.use(enforceRouteRules);
   for (const [prefix, router] of apiRouters()) api.use(prefix, router);
   api.use(notFoundHandler);

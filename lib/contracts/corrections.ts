@@ -7,22 +7,11 @@ import { z } from 'zod';
 import { parseUnit } from '../units';
 import { specValueIssues } from './curation';
 import { CORRECTION_STATUSES, type CorrectionKind, type CorrectionStatus } from './enums';
+import { safeText } from './text';
 
-const line = (label: string, max: number) =>
-  z
-    .string({ error: `${label} must be text` })
-    .trim()
-    .max(max, `${label}: at most ${max} characters`)
-    .refine((s) => !/[\r\n\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(s), `${label} must be one line of plain text`);
-const para = (label: string, max: number) =>
-  z
-    .string({ error: `${label} must be text` })
-    .trim()
-    .max(max, `${label}: at most ${max} characters`)
-    .refine(
-      (s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(s),
-      `${label} contains an invisible control character`,
-    );
+/** One line of plain text, or a paragraph (lib/contracts/text.ts). */
+const line = (label: string, max: number) => safeText(max, { label });
+const para = (label: string, max: number) => safeText(max, { label, multiline: true });
 const limit = z.number({ error: 'must be a number or null' }).finite().nullable().default(null);
 
 export const ProposedValues = z
@@ -52,10 +41,7 @@ export const CitationInput = z
     title: line('source title', 200).refine((s) => s.length > 0, 'source title is required'),
     edition: line('source edition', 200).default(''),
     page: line('source page', 40).refine((s) => s.length > 0, 'source page is required'),
-    url: z
-      .string()
-      .trim()
-      .max(500)
+    url: safeText(500, { label: 'url' })
       .refine((s) => s === '' || /^https?:\/\/\S+$/i.test(s), 'url must start with http:// or https://')
       .nullable()
       .optional()
@@ -126,7 +112,7 @@ export const RejectBody = z
 export const CorrectionsQuery = z.object({
   status: z.enum(CORRECTION_STATUSES).optional(),
   mine: z.enum(['true', 'false']).optional(),
-  make: z.string().trim().max(120).optional(),
+  make: safeText(120, { label: 'make' }).optional(),
   modelId: z.coerce.number().int().positive().optional(),
 });
 

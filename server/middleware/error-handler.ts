@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../errors/app-error';
+import { isLockContention } from '../db/deadlock-retry';
 
 const TITLES: Record<number, string> = {
   400: 'Bad request',
@@ -8,6 +9,7 @@ const TITLES: Record<number, string> = {
   404: 'Not found',
   409: 'Conflict',
   413: 'Payload too large',
+  405: 'Method not allowed',
   415: 'Unsupported media type',
   422: 'Unprocessable content',
   429: 'Too many requests',
@@ -37,6 +39,28 @@ export const notFoundHandler: RequestHandler = (req, res) => {
   sendProblem(res, { status: 404, code: 'not_found', detail: `No route for ${req.method} ${req.path}.` });
 };
 
+/** Why body-parser could not read a request body, by its error `type`. */
+function unreadableBody(err: { type?: string; charset?: string; encoding?: string }): { code: string; detail: string } {
+  switch (err.type) {
+    case 'entity.too.large':
+      return { code: 'payload_too_large', detail: 'The request body is too large.' };
+    case 'entity.parse.failed':
+      return { code: 'bad_request', detail: 'The request body could not be read (malformed JSON?).' };
+    case 'charset.unsupported':
+      return {
+        code: 'unsupported_charset',
+        detail: `The request body's charset "${String(err.charset ?? '').slice(0, 40)}" is not supported; send JSON in UTF-8 (Content-Type: application/json; charset=utf-8).`,
+      };
+    case 'encoding.unsupported':
+      return {
+        code: 'unsupported_encoding',
+        detail: `The request body's Content-Encoding "${String(err.encoding ?? '').slice(0, 40)}" is not supported; send it uncompressed, or as gzip, deflate or br.`,
+      };
+    default:
+      return { code: 'bad_request', detail: 'The request body could not be read.' };
+  }
+}
+
 /** Database connection failures become 503 so clients retry instead of giving up. */
 const DB_DOWN = new Set([
   'ECONNREFUSED',
@@ -55,6 +79,12 @@ function isDatabaseDown(err: unknown): boolean {
   );
 }
 
+/** 503 with Retry-After: the same request may well succeed in a moment. */
+function retryLater(res: Parameters<RequestHandler>[1], seconds: number, code: string, detail: string) {
+  res.setHeader('Retry-After', String(seconds));
+  sendProblem(res, { status: 503, code, detail: `${detail} Try again in a moment.` });
+}
+
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof AppError) {
     if (err.status >= 500) console.error(err);
@@ -63,22 +93,11 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   // body-parser and multer errors carry an HTTP status of their own.
   const status =
     (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
-  if (typeof status === 'number' && status >= 400 && status < 500) {
-    const code = (err as { type?: string }).type === 'entity.too.large' ? 'payload_too_large' : 'bad_request';
-    const detail =
-      code === 'payload_too_large'
-        ? 'The request body is too large.'
-        : 'The request body could not be read (malformed JSON?).';
-    return sendProblem(res, { status, code, detail });
-  }
-  if (isDatabaseDown(err)) {
-    res.setHeader('Retry-After', '2');
-    return sendProblem(res, {
-      status: 503,
-      code: 'unavailable',
-      detail: 'The database is not reachable right now. Try again in a moment.',
-    });
-  }
+  if (typeof status === 'number' && status >= 400 && status < 500)
+    return sendProblem(res, { status, ...unreadableBody(err) });
+  if (isLockContention(err))
+    return retryLater(res, 1, 'busy', 'Someone else is changing the same records right now. Nothing was saved.');
+  if (isDatabaseDown(err)) return retryLater(res, 2, 'unavailable', 'The database is not reachable right now.');
   console.error(`${req.method} ${req.originalUrl} failed:`, err);
   sendProblem(res, {
     status: 500,

@@ -6,7 +6,7 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import type { ReadingBody, ReadingDto } from '@/lib/contracts/jobs';
-import { AppDataSource } from '@/server/db/data-source';
+import { writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import type { SignedInUser } from '@/server/auth/roles';
 import { judge, toVerdictInput } from '../verdicts/verdict.service';
@@ -40,7 +40,7 @@ export async function addReading(
 ): Promise<AddedReading> {
   const idempotencyKey = key ?? randomUUID();
   try {
-    return await AppDataSource.transaction(async (m) => {
+    return await writeTransaction(async (m) => {
       await lockOpenJob(m, user, jobId);
       const readings = m.withRepository(ReadingRepository);
       const existing = await readings.findByKey(jobId, idempotencyKey);
