@@ -16,14 +16,14 @@ jest.setTimeout(300_000);
 const app = createApp({ webDist: null });
 
 type Layer = { route?: { path: string; methods: Record<string, boolean> } };
-/** 'METHOD /api/path' of every POST and PATCH route, from the router stack. */
-const writeRoutes = () =>
+/** 'METHOD /api/path' of every route with one of these methods, from the router stack. */
+const routes = (...methods: string[]) =>
   apiRouters().flatMap(([prefix, router]) =>
     (router as unknown as { stack: Layer[] }).stack
       .filter((l) => l.route)
       .flatMap((l) =>
         Object.keys(l.route!.methods)
-          .filter((m) => m === 'post' || m === 'patch')
+          .filter((m) => methods.includes(m))
           .map((m) => `${m.toUpperCase()} /api${prefix}${l.route!.path === '/' ? '' : l.route!.path}`),
       ),
   );
@@ -205,7 +205,7 @@ async function probe(key: string, send: (r: request.Test) => request.Test): Prom
 
 describe('every POST and PATCH route with odd input', () => {
   it('has a sample body for every write route', () => {
-    expect(writeRoutes().sort()).toEqual(Object.keys(SAMPLES).sort());
+    expect(routes('post', 'patch').sort()).toEqual(Object.keys(SAMPLES).sort());
   });
 
   it.each(Object.keys(SAMPLES))('%s never answers 5xx', async (key) => {
@@ -233,6 +233,32 @@ describe('every POST and PATCH route with odd input', () => {
           `refresh cookie ${cookie.slice(0, 12)}`,
           await probe(key, (r) => r.set('Cookie', `sb_refresh=${cookie}`).send({})),
         );
+    expect(failures).toEqual([]);
+  });
+});
+
+/** Odd path ids and query values, percent-encoded as a client would send them. */
+const ODD_IDS = ['1e308', '-1', '0x10', '1.5', '%00', '%ED%A0%80', '%E2%80%AE', '9'.repeat(400), '%2F..%2F'];
+const ODD_QUERY = ['%00', '%ED%A0%80', '%E2%80%AEx', 'x'.repeat(5000), '%FF%FE', 'a&q=b&q=c', '[]', '1e308'];
+
+describe('every GET route with odd ids and query values', () => {
+  it.each(routes('get'))('%s never answers 5xx', async (key) => {
+    const failures: string[] = [];
+    const [, path] = key.split(' ');
+    const urls = [
+      ...(path.includes(':id') ? ODD_IDS.map((id) => path.replace(':id', id)) : []),
+      ...ODD_QUERY.flatMap((v) =>
+        ['q', 'make', 'modelId', 'limit', 'offset', 'status', 'mine'].map((name) => `${urlOf(path)}?${name}=${v}`),
+      ),
+    ];
+    for (const url of urls) {
+      const res = await request(app)
+        .get(url)
+        .set(await authHeader('admin', 'fuzz-reader'))
+        .set('X-Forwarded-For', clientAddress());
+      probes += 1;
+      if (res.status >= 500) failures.push(`${url.slice(0, 80)}: ${res.status} ${res.body?.code ?? ''}`);
+    }
     expect(failures).toEqual([]);
   });
 });
