@@ -10,8 +10,11 @@ import cookieParser from 'cookie-parser';
 import { enforceRouteRules } from './auth/access';
 import { passport } from './auth/passport';
 import { config } from './config';
+import { requestLogger } from './http/logging';
+import { measureRequests, metricsEndpoint } from './http/metrics';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { methodNotAllowed } from './middleware/method-not-allowed';
+import { noStoreForPrivate } from './middleware/no-store';
 import { healthRouter } from './modules/health/health.router';
 import { modelRouter } from './modules/library/model.router';
 import { searchRouter } from './modules/search/search.router';
@@ -44,6 +47,7 @@ export function apiRouters(): [string, express.Router][] {
 
 export function createApp(options: { webDist?: string | null } = {}) {
   const app = express();
+  app.use(requestLogger, measureRequests);
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
   app.use(
@@ -66,11 +70,13 @@ export function createApp(options: { webDist?: string | null } = {}) {
   app.use(passport.initialize());
 
   const api = express.Router();
+  api.use(noStoreForPrivate);
   api.use(methodNotAllowed(api));
   api.use(enforceRouteRules);
   for (const [prefix, router] of apiRouters()) api.use(prefix, router);
   api.use(notFoundHandler);
   app.use('/api', api);
+  app.get('/metrics', metricsEndpoint);
   if (config.NODE_ENV !== 'production') app.use('/dev', devMailboxRouter);
 
   const webDist = options.webDist === undefined ? config.webDist : options.webDist;

@@ -327,7 +327,7 @@ describe('retryDeadlocks', () => {
 
 describe('lock contention that outlasts the retries', () => {
   it.each(['ER_LOCK_DEADLOCK', 'ER_LOCK_WAIT_TIMEOUT'])(
-    '%s answers 503 busy with Retry-After, not 500',
+    '%s answers 503 write_conflict with Retry-After, not 500',
     async (code) => {
       const failing = express();
       failing.get('/', () => {
@@ -335,7 +335,7 @@ describe('lock contention that outlasts the retries', () => {
       });
       failing.use(errorHandler);
       const res = await request(failing).get('/');
-      expectProblem(res, 503, 'busy');
+      expectProblem(res, 503, 'write_conflict');
       expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
     },
   );

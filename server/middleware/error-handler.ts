@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../errors/app-error';
 import { isLockContention } from '../db/deadlock-retry';
+import { requestIdOf } from '../http/logging';
 
 const TITLES: Record<number, string> = {
   400: 'Bad request',
@@ -19,8 +20,12 @@ const TITLES: Record<number, string> = {
 
 type Problem = { status: number; code: string; detail: string; [key: string]: unknown };
 
+/** Seconds a client (or balancer) should wait before retrying a 503. */
+const RETRY_AFTER_S = 2;
+
 export function sendProblem(res: Parameters<RequestHandler>[1], problem: Problem) {
   const { status, code, detail, ...extras } = problem;
+  if (status === 503 && !res.getHeader('Retry-After')) res.setHeader('Retry-After', String(RETRY_AFTER_S));
   // Extras come first so they can never overwrite the standard members.
   res
     .status(status)
@@ -32,12 +37,36 @@ export function sendProblem(res: Parameters<RequestHandler>[1], problem: Problem
       status,
       detail,
       code,
+      requestId: requestIdOf(res),
     });
 }
 
 export const notFoundHandler: RequestHandler = (req, res) => {
   sendProblem(res, { status: 404, code: 'not_found', detail: `No route for ${req.method} ${req.path}.` });
 };
+
+/** Database connection failures become 503 so clients retry instead of giving up. */
+const DB_DOWN = new Set([
+  'ECONNREFUSED',
+  'PROTOCOL_CONNECTION_LOST',
+  'ETIMEDOUT',
+  'ER_CON_COUNT_ERROR',
+  'ECONNRESET',
+  'EPIPE',
+  // A query that outlived DB_QUERY_TIMEOUT_MS (client side) or MAX_STATEMENT_TIME (server side).
+  'PROTOCOL_SEQUENCE_TIMEOUT',
+]);
+/** MariaDB's ER_STATEMENT_TIMEOUT (mysql2 has no name for it). */
+const STATEMENT_TIMEOUT = 1969;
+function isDatabaseDown(err: unknown): boolean {
+  const e = err as { code?: string; errno?: number; driverError?: { code?: string; errno?: number }; message?: string };
+  const code = e?.code ?? e?.driverError?.code;
+  return (
+    (code !== undefined && DB_DOWN.has(code)) ||
+    (e?.errno ?? e?.driverError?.errno) === STATEMENT_TIMEOUT ||
+    /Connection lost|connect ECONNREFUSED|Pool is closed/i.test(e?.message ?? '')
+  );
+}
 
 /** Why body-parser could not read a request body, by its error `type`. */
 function unreadableBody(err: { type?: string; charset?: string; encoding?: string }): { code: string; detail: string } {
@@ -61,33 +90,9 @@ function unreadableBody(err: { type?: string; charset?: string; encoding?: strin
   }
 }
 
-/** Database connection failures become 503 so clients retry instead of giving up. */
-const DB_DOWN = new Set([
-  'ECONNREFUSED',
-  'PROTOCOL_CONNECTION_LOST',
-  'ETIMEDOUT',
-  'ER_CON_COUNT_ERROR',
-  'ECONNRESET',
-  'EPIPE',
-]);
-function isDatabaseDown(err: unknown): boolean {
-  const e = err as { code?: string; driverError?: { code?: string }; message?: string };
-  const code = e?.code ?? e?.driverError?.code;
-  return (
-    (code !== undefined && DB_DOWN.has(code)) ||
-    /Connection lost|connect ECONNREFUSED|Pool is closed/i.test(e?.message ?? '')
-  );
-}
-
-/** 503 with Retry-After: the same request may well succeed in a moment. */
-function retryLater(res: Parameters<RequestHandler>[1], seconds: number, code: string, detail: string) {
-  res.setHeader('Retry-After', String(seconds));
-  sendProblem(res, { status: 503, code, detail: `${detail} Try again in a moment.` });
-}
-
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof AppError) {
-    if (err.status >= 500) console.error(err);
+    if (err.status >= 500 && err.status !== 503) req.log?.error({ err }, err.message);
     return sendProblem(res, { status: err.status, code: err.code, detail: err.message, ...err.extras });
   }
   // body-parser and multer errors carry an HTTP status of their own.
@@ -95,10 +100,27 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
   if (typeof status === 'number' && status >= 400 && status < 500)
     return sendProblem(res, { status, ...unreadableBody(err) });
-  if (isLockContention(err))
-    return retryLater(res, 1, 'busy', 'Someone else is changing the same records right now. Nothing was saved.');
-  if (isDatabaseDown(err)) return retryLater(res, 2, 'unavailable', 'The database is not reachable right now.');
-  console.error(`${req.method} ${req.originalUrl} failed:`, err);
+  if (isDatabaseDown(err)) {
+    req.log?.warn({ err }, 'database unavailable');
+    return sendProblem(res, {
+      status: 503,
+      code: 'unavailable',
+      detail: 'The database is not reachable right now. Try again in a moment.',
+    });
+  }
+  // Deadlocks that outlasted writeTransaction's retries (server/db/deadlock-retry.ts), Galera
+  // certification failures (also 1213) and lock-wait timeouts: nothing was written, so the
+  // client may simply send it again (503 + Retry-After keeps an offline reading queued).
+  if (isLockContention(err)) {
+    req.log?.warn({ err }, 'write conflict');
+    return sendProblem(res, {
+      status: 503,
+      code: 'write_conflict',
+      detail: 'Another change reached the same records at the same moment, so nothing was saved. Send it again.',
+    });
+  }
+  if (req.log) req.log.error({ err }, `${req.method} ${req.path} failed`);
+  else console.error(`${req.method} ${req.originalUrl} failed:`, err);
   sendProblem(res, {
     status: 500,
     code: 'internal',
