@@ -13,6 +13,7 @@ import { config } from './config';
 import { requestLogger } from './http/logging';
 import { measureRequests, metricsEndpoint } from './http/metrics';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { methodNotAllowed } from './middleware/method-not-allowed';
 import { noStoreForPrivate } from './middleware/no-store';
 import { healthRouter } from './modules/health/health.router';
 import { modelRouter } from './modules/library/model.router';
@@ -74,6 +75,7 @@ export function createApp(options: AppOptions = {}) {
 
   const api = express.Router();
   api.use(noStoreForPrivate);
+  api.use(methodNotAllowed(api));
   api.use(enforceRouteRules);
   for (const [prefix, router] of apiRouters(options)) api.use(prefix, router);
   api.use(notFoundHandler);

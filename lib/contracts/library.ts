@@ -5,6 +5,7 @@
 import { z } from 'zod';
 import type { CanonicalUnit, Material, QuantityKind, RevisionOrigin, SpecStatus } from './enums';
 import type { SpecSnapshot, SpecValues } from './spec-fields';
+import { safeText } from './text';
 
 export type { QuantityKind } from './enums';
 
@@ -36,7 +37,7 @@ export const SearchQuery = z.object({
 export type SearchQuery = z.infer<typeof SearchQuery>;
 
 export const ModelsQuery = z.object({
-  make: z.string().trim().max(120).optional(),
+  make: safeText(120, { label: 'make' }).optional(),
 });
 export type ModelsQuery = z.infer<typeof ModelsQuery>;
 

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../errors/app-error';
+import { isLockContention } from '../db/deadlock-retry';
 import { requestIdOf } from '../http/logging';
 
 const TITLES: Record<number, string> = {
@@ -9,6 +10,7 @@ const TITLES: Record<number, string> = {
   404: 'Not found',
   409: 'Conflict',
   413: 'Payload too large',
+  405: 'Method not allowed',
   415: 'Unsupported media type',
   422: 'Unprocessable content',
   429: 'Too many requests',
@@ -66,15 +68,26 @@ function isDatabaseDown(err: unknown): boolean {
   );
 }
 
-/**
- * InnoDB deadlocks and Galera certification failures (both error 1213) and lock-wait
- * timeouts that no service turned into a 409: nothing was written, so the client may simply
- * send it again (503 + Retry-After keeps an offline reading queued), never a 500.
- */
-function isWriteConflict(err: unknown): boolean {
-  const e = err as { code?: string; driverError?: { code?: string } };
-  const code = e?.code ?? e?.driverError?.code;
-  return code === 'ER_LOCK_DEADLOCK' || code === 'ER_LOCK_WAIT_TIMEOUT';
+/** Why body-parser could not read a request body, by its error `type`. */
+function unreadableBody(err: { type?: string; charset?: string; encoding?: string }): { code: string; detail: string } {
+  switch (err.type) {
+    case 'entity.too.large':
+      return { code: 'payload_too_large', detail: 'The request body is too large.' };
+    case 'entity.parse.failed':
+      return { code: 'bad_request', detail: 'The request body could not be read (malformed JSON?).' };
+    case 'charset.unsupported':
+      return {
+        code: 'unsupported_charset',
+        detail: `The request body's charset "${String(err.charset ?? '').slice(0, 40)}" is not supported; send JSON in UTF-8 (Content-Type: application/json; charset=utf-8).`,
+      };
+    case 'encoding.unsupported':
+      return {
+        code: 'unsupported_encoding',
+        detail: `The request body's Content-Encoding "${String(err.encoding ?? '').slice(0, 40)}" is not supported; send it uncompressed, or as gzip, deflate or br.`,
+      };
+    default:
+      return { code: 'bad_request', detail: 'The request body could not be read.' };
+  }
 }
 
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
@@ -85,14 +98,8 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   // body-parser and multer errors carry an HTTP status of their own.
   const status =
     (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
-  if (typeof status === 'number' && status >= 400 && status < 500) {
-    const code = (err as { type?: string }).type === 'entity.too.large' ? 'payload_too_large' : 'bad_request';
-    const detail =
-      code === 'payload_too_large'
-        ? 'The request body is too large.'
-        : 'The request body could not be read (malformed JSON?).';
-    return sendProblem(res, { status, code, detail });
-  }
+  if (typeof status === 'number' && status >= 400 && status < 500)
+    return sendProblem(res, { status, ...unreadableBody(err) });
   if (isDatabaseDown(err)) {
     req.log?.warn({ err }, 'database unavailable');
     return sendProblem(res, {
@@ -101,7 +108,10 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
       detail: 'The database is not reachable right now. Try again in a moment.',
     });
   }
-  if (isWriteConflict(err)) {
+  // Deadlocks that outlasted writeTransaction's retries (server/db/deadlock-retry.ts), Galera
+  // certification failures (also 1213) and lock-wait timeouts: nothing was written, so the
+  // client may simply send it again (503 + Retry-After keeps an offline reading queued).
+  if (isLockContention(err)) {
     req.log?.warn({ err }, 'write conflict');
     return sendProblem(res, {
       status: 503,

@@ -9,6 +9,7 @@ import type { AcceptBody, CorrectionReviewDto, EditProposalBody, ProposeBody } f
 import type { z } from 'zod';
 import { specValueIssues } from '@/lib/contracts/curation';
 import { AppDataSource } from '@/server/db/data-source';
+import { writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import { roleAtLeast, type SignedInUser } from '@/server/auth/roles';
 import { Component } from '../library/component.entity';
@@ -71,7 +72,7 @@ function checkAgainst(parameter: string, values: ProposeBody['values']) {
 }
 
 export async function propose(user: SignedInUser, b: ProposeBody): Promise<CorrectionReviewDto> {
-  const saved = await AppDataSource.transaction(async (m) => {
+  const saved = await writeTransaction(async (m) => {
     const t = await target(m, b, user);
     checkAgainst(t.parameter, b.values);
     const proposed = {
@@ -122,7 +123,7 @@ async function lockPending(m: EntityManager, id: number, ownerId?: number): Prom
 }
 
 export async function editProposal(user: SignedInUser, id: number, b: EditProposalBody): Promise<CorrectionReviewDto> {
-  const saved = await AppDataSource.transaction(async (m) => {
+  const saved = await writeTransaction(async (m) => {
     const c = await lockPending(m, id, user.id);
     if (b.values) {
       checkAgainst(c.proposed.parameter, b.values);
@@ -140,7 +141,7 @@ export async function editProposal(user: SignedInUser, id: number, b: EditPropos
 }
 
 export async function withdraw(user: SignedInUser, id: number): Promise<CorrectionReviewDto> {
-  const saved = await AppDataSource.transaction(async (m) => {
+  const saved = await writeTransaction(async (m) => {
     const c = await lockPending(m, id, user.id);
     c.status = 'withdrawn';
     c.decidedAt = new Date();
@@ -154,7 +155,7 @@ export async function decide(
   id: number,
   decision: { accept: true; body: z.infer<typeof AcceptBody> } | { accept: false; note: string },
 ): Promise<CorrectionReviewDto> {
-  const saved = await AppDataSource.transaction(async (m) => {
+  const saved = await writeTransaction(async (m) => {
     const c = await lockPending(m, id);
     if (decision.accept) c.specId = await applyCorrection(m, c, editor, decision.body.confirmStale === true);
     Object.assign(c, {

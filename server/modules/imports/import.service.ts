@@ -9,6 +9,7 @@ import { checkCsvBytes, decodeCsv, validateSpecCsv, type RowProblem, type Valida
 import { MAX_CSV_ROWS } from '@/lib/csv/parse';
 import type { ImportBatchSummaryDto, ImportPreviewDto, ImportPreviewQuery } from '@/lib/contracts/imports';
 import { AppDataSource } from '@/server/db/data-source';
+import { writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import { lastRevisionId, markLibraryChanged, recordImportChanges } from '../library/library-changes';
 import { ImportBatch, type ImportCounts } from './import-batch.entity';
@@ -108,7 +109,7 @@ export async function previewValidated(
 ): Promise<ImportPreviewDto> {
   if (checked.tooManyRows) throw tooManyRows(upload, checked);
   if (checked.fileErrors.length) return rejectFile(upload, actor, checked.fileErrors);
-  const batch = await AppDataSource.transaction(async (m) =>
+  const batch = await writeTransaction(async (m) =>
     stageBatch(m, checked, await planImport(m, checked.accepted), uploaderOf(upload, actor)),
   );
   return buildPreview(AppDataSource.manager, batch, page);
@@ -159,9 +160,13 @@ async function commitLocked(
   return m.getRepository(ImportBatch).save(batch);
 }
 
-/** Writes every accepted row and one revision per changed spec, in one transaction, once. */
+/**
+ * Writes every accepted row and one revision per changed spec, in one transaction, once.
+ * Two commits creating the same new makes can deadlock in InnoDB; the victim runs again
+ * and then finds the other's specs (409) or nothing in its way.
+ */
 export async function commitImport(id: number, actor: Actor, reason?: string): Promise<ImportBatchSummaryDto> {
-  const batch = await AppDataSource.transaction((m) => commitLocked(m, id, actor, reason));
+  const batch = await writeTransaction((m) => commitLocked(m, id, actor, reason));
   if (batch.counts.created + batch.counts.updated > 0) markLibraryChanged();
   return toBatchSummary(batch);
 }
@@ -186,7 +191,7 @@ export async function importCsvNow(
       checked.fileErrors.map((e) => ({ path: problemPath(e), message: e.reason })),
     );
   }
-  const summary = await AppDataSource.transaction(async (m): Promise<ImportSummary> => {
+  const summary = await writeTransaction(async (m): Promise<ImportSummary> => {
     const plan = (await planImport(m, checked.accepted)).map((p) =>
       options.createOnly && p.action === 'update' ? { ...p, action: 'unchanged' as const, changes: [] } : p,
     );

@@ -9,7 +9,7 @@ import { specValueIssues } from '@/lib/contracts/curation';
 import type { SpecValues } from '@/lib/contracts/spec-fields';
 import { diffSnapshots, snapshotOfSpec } from '@/lib/contracts/spec-snapshot';
 import { parseUnit } from '@/lib/units';
-import { AppDataSource } from '@/server/db/data-source';
+import { isLockContention, writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
 import { foldKey } from '../library/keys';
@@ -32,11 +32,10 @@ export class StaleSpec extends Error {
 
 export async function inSpecTransaction<T>(fn: (m: EntityManager) => Promise<T>): Promise<T> {
   try {
-    return await AppDataSource.transaction(fn);
+    return await writeTransaction(fn);
   } catch (err) {
     if (err instanceof StaleSpec) throw AppError.conflict(err.message, { current: await getSpec(err.specId) });
-    const code = (err as { driverError?: { code?: string } }).driverError?.code;
-    if (code === 'ER_LOCK_DEADLOCK' || code === 'ER_LOCK_WAIT_TIMEOUT')
+    if (isLockContention(err))
       throw AppError.conflict('Someone else is saving this spec right now. Load it again and retry.');
     throw err;
   }
