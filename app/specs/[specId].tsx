@@ -8,7 +8,7 @@ import { modelTitle } from '@/lib/format/model-title';
 import { RevisionHistory } from '@/components/curation/revision-history';
 import { EditSpecButton } from '@/components/curation/edit-spec-button';
 import { SafetyNotes } from '@/components/library/safety-notes';
-import { cautionCategories, isRestVoltage } from '@/lib/specs/classify';
+import { cautionCategories, defaultMode, isRestVoltage } from '@/lib/specs/classify';
 import { SpecValues } from '@/components/library/spec-values';
 import { Screen } from '@/components/ui/screen';
 import { TwoColumns } from '@/components/ui/two-columns';
@@ -18,6 +18,7 @@ import { describeError } from '@/lib/api/describe-error';
 import { jobLink } from '@/lib/hooks/use-add-to-job';
 import { useSpecQuery } from '@/lib/hooks/use-library';
 import { useIsWide } from '@/lib/theme/use-theme';
+import type { SpecLimits } from '@/lib/verdict';
 
 export default function SpecCardScreen() {
   const { specId, ...link } = useLocalSearchParams<{ specId: string; job?: string; retake?: string }>();
@@ -38,6 +39,8 @@ export default function SpecCardScreen() {
       </Screen>
     );
   const s = spec.data;
+  // mode, nearLimit and engineRpm are optional spec fields: used when the library states them.
+  const stated = s as Partial<Pick<SpecLimits, 'mode' | 'nearLimit' | 'engineRpm'>>;
   const check = (
     <>
       <SafetyNotes categories={cautionCategories(s.component.name, s.parameter)} />
@@ -50,6 +53,9 @@ export default function SpecCardScreen() {
           unit: s.unit,
           refTempC: s.refTempC,
           material: s.material,
+          mode: stated.mode ?? defaultMode(s.parameter, s.quantityKind),
+          nearLimit: stated.nearLimit,
+          engineRpm: stated.engineRpm,
         }}
         job={{
           spec: { id: s.id, modelId: s.model.id, parameter: s.parameter, componentName: s.component.name },

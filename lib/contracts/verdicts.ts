@@ -6,11 +6,15 @@
  */
 import { z } from 'zod';
 import type { VerdictStep } from '../verdict';
+import { MEASUREMENT_MODES } from './enums';
 
 /** Any JSON number, finite or not: non-finite values are refused by the engine with 422. */
 const Num = z.custom<number>((v) => typeof v === 'number', { message: 'must be a number' });
 const UnitText = z.string({ error: 'unit is required' }).trim().min(1, 'unit is required').max(12);
 const QuantityBody = z.object({ value: Num, unit: UnitText }).strict();
+const Mode = z.enum(MEASUREMENT_MODES, { error: `mode must be one of ${MEASUREMENT_MODES.join(', ')}` });
+/** The reading, with the mode the meter was on (refused with 422 when it is not the spec's). */
+const ReadingQuantity = z.object({ value: Num, unit: UnitText, mode: Mode.optional() }).strict();
 
 export const SpecLimitsBody = z
   .object({
@@ -21,6 +25,10 @@ export const SpecLimitsBody = z
     refTempC: Num.optional(),
     material: z.enum(['copper', 'none']).optional(),
     nearLimitPct: Num.optional(),
+    /** The near-limit band as an amount in the spec's unit. */
+    nearLimit: Num.optional(),
+    mode: Mode.optional(),
+    engineRpm: Num.optional(),
   })
   .strict();
 
@@ -28,7 +36,7 @@ export const SpecLimitsBody = z
 export const VerdictFields = z.object({
   specId: z.number().int().positive().optional(),
   spec: SpecLimitsBody.optional(),
-  reading: QuantityBody,
+  reading: ReadingQuantity,
   leadResistance: QuantityBody.optional(),
   seriesResistance: z.object({ value: Num, unit: UnitText, tolerancePct: Num.optional() }).strict().optional(),
   temperatureC: Num.optional(),
@@ -49,6 +57,10 @@ export type VerdictResponse = {
   expandedUncertainty: number | null;
   conformanceProbability: number | null;
   reason: string;
+  /** The verdict in plain workshop words, corrections first. */
+  explanation: string;
+  /** The value as shown, with the precision the reading carried ('88.40'). */
+  valueText: string;
   steps: VerdictStep[];
   zones: { lower?: number; upper?: number; nearBand?: number; interval?: [number, number] };
   /** The spec the reading was judged against, when given by id. */
