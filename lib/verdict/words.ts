@@ -53,7 +53,7 @@ function where(w: WordsInput): string {
         return `${range(spec)}, but ${accuracy} is wider than the tolerance itself: this meter cannot decide. Use a more accurate range.`;
       }
       if (c.value.eq(limit)) {
-        return `exactly on ${limitOf(spec, side)}: on the line, so neither a clear pass nor a fail. Measure again${U === null ? ', and enter the meter’s accuracy' : ''}.`;
+        return `exactly on ${limitOf(spec, side)}: on the line, so neither a clear pass nor a fail. Measure again${U === null ? ", and enter the meter's accuracy" : ''}.`;
       }
       return `${range(spec)}, but so close to the ${side === 'upper' ? 'top' : 'bottom'} that ${accuracy} could put it ${side === 'upper' ? 'over' : 'under'}.`;
     case 'conditional-fail':
