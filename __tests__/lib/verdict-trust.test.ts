@@ -4,6 +4,8 @@
  */
 import { calculate, countHint, emptyForm } from '@/lib/calculator/form';
 import { memorise, recall, EMPTY_MEMORY } from '@/lib/calculator/memory';
+import { ReadingBody } from '@/lib/contracts/jobs';
+import { toReadingBody } from '@/lib/offline/reading-body';
 import { conformanceProbability, evaluateReading, VerdictInputError, type VerdictInput } from '@/lib/verdict';
 
 const inputError = (input: VerdictInput) => {
@@ -221,5 +223,21 @@ describe('words first (item 9) and hints in the spec’s unit (item 10)', () => 
     const error = inputError({ spec: { min: 0.9, max: 0.7, unit: 'V' }, reading: { value: 0.8, unit: 'V' } });
     expect(error?.field).toBe('spec.min');
     expect(error?.message).toBe('The minimum (0.9 V) is above the maximum (0.7 V): check the limits.');
+  });
+});
+
+describe('the job reading body forwards the modes (continuity and diode checks go on a job like any reading)', () => {
+  it('keeps reading.mode, and spec.mode, nearLimit and engineRpm for limits typed by hand', () => {
+    const input: VerdictInput = {
+      spec: { max: 0.5, unit: 'Ω', mode: 'continuity', nearLimit: 0.05, engineRpm: null },
+      reading: { value: 0.2, unit: 'Ω', mode: 'continuity' },
+    };
+    const body = toReadingBody(input, { label: 'main fuse' });
+    expect(body).toMatchObject({
+      spec: { max: 0.5, unit: 'Ω', mode: 'continuity', nearLimit: 0.05 },
+      reading: { value: 0.2, unit: 'Ω', mode: 'continuity' },
+    });
+    expect(ReadingBody.safeParse(body).success).toBe(true);
+    expect(toReadingBody(input, { specId: 7 }).reading).toEqual({ value: 0.2, unit: 'Ω', mode: 'continuity' });
   });
 });

@@ -62,7 +62,7 @@ export function Calculator({ spec, kind, testID = 'calculator', job }: Calculato
       <Text variant="label" color="primary" testID="mode-instruction">
         {modeInstruction(mode, spec.engineRpm)}
       </Text>
-      {field('reading', mode ? 'Meter reading' : 'Gauge reading', 'readingUnit')}
+      {field('reading', 'Meter reading', 'readingUnit')}
       {errors.spec ? (
         <Text color="fail" accessibilityRole="alert" testID="spec-error">
           {errors.spec}

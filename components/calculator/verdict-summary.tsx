@@ -7,9 +7,11 @@ import { Text } from '../ui/text';
 
 const WORD = { pass: 'PASS', marginal: 'MARGINAL', fail: 'FAIL' } as const;
 
-// On the web the summary sticks to the top of the page while the technician scrolls to the optional
-// fields, so the verdict stays beside the reading being typed (react-native-web passes `sticky` through).
-const STICKY = Platform.OS === 'web' ? ({ position: 'sticky', top: 0, zIndex: 2 } as unknown as ViewStyle) : null;
+// On the web the summary sticks to the bottom of the screen while the reading field is in view (before
+// the summary has scrolled up to its place) and to the top while the optional fields below are typed,
+// so the verdict stays beside the reading (react-native-web passes `sticky` through to CSS).
+const STICKY =
+  Platform.OS === 'web' ? ({ position: 'sticky', top: 0, bottom: 0, zIndex: 2 } as unknown as ViewStyle) : null;
 
 /** The verdict word, the value and the plain-words explanation, right under the reading field. */
 export function VerdictSummary({ result }: { result: VerdictResult }) {
