@@ -1,5 +1,12 @@
 /**
  * The Specbench verdict engine (DESIGN.md §3): pure functions shared by client and server.
+ *
+ * Arithmetic: every operation on typed values — unit conversion, lead and series subtraction,
+ * and every comparison with a limit, limit ± U or near-limit band edge — is exact decimal
+ * arithmetic with decimal.js (lib/units/exact.ts, ./corrections, ./decision), so a reading typed
+ * on a limit is judged as its digits say. Uncertainties and p_c are floating point (they are
+ * estimates); the temperature ratio is rounded at 60 digits. Display keeps the reading's own
+ * precision (VerdictResult.valueText).
  */
 export { evaluateReading } from './evaluate';
 export { VerdictInputError } from './types';
