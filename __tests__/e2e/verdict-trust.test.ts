@@ -43,7 +43,7 @@ it('a kΩ secondary winding takes the leads in Ω; a minimum-only rest voltage o
     openCalculator(page, '650 Moorland', 'Secondary winding resistance without plug cap'),
   );
   await step('the meter mode is the first instruction', () =>
-    expectText(calc.getByTestId('mode-instruction'), 'Meter on ohms', 'the mode instruction'),
+    expectText(calc.getByTestId('mode-instruction'), 'Meter on resistance (Ω)', 'the mode instruction'),
   );
   await step('type 16.3 kΩ: the verdict appears right under the reading', async () => {
     await calc.getByLabel('Meter reading', { exact: true }).fill('16.3');

@@ -156,7 +156,7 @@ describe('measurement modes (item 7)', () => {
 
   it('the first step names the meter mode and the engine speed', () => {
     const result = evaluateReading({ spec: stator, reading: { value: 62, unit: 'V', mode: 'ac_voltage' } });
-    expect(result.steps[0].label).toBe('Meter reading (AC volts, engine at 5 000 rpm)');
+    expect(result.steps[0].label).toBe('Meter reading on AC volts (rms), engine at 5 000 rpm');
     expect(result.verdict).toBe('pass');
   });
 

@@ -18,7 +18,6 @@ import { describeError } from '@/lib/api/describe-error';
 import { jobLink } from '@/lib/hooks/use-add-to-job';
 import { useSpecQuery } from '@/lib/hooks/use-library';
 import { useIsWide } from '@/lib/theme/use-theme';
-import type { SpecLimits } from '@/lib/verdict';
 
 export default function SpecCardScreen() {
   const { specId, ...link } = useLocalSearchParams<{ specId: string; job?: string; retake?: string }>();
@@ -39,8 +38,6 @@ export default function SpecCardScreen() {
       </Screen>
     );
   const s = spec.data;
-  // mode, nearLimit and engineRpm are optional spec fields: used when the library states them.
-  const stated = s as Partial<Pick<SpecLimits, 'mode' | 'nearLimit' | 'engineRpm'>>;
   const check = (
     <>
       <SafetyNotes categories={cautionCategories(s.component.name, s.parameter)} />
@@ -53,9 +50,10 @@ export default function SpecCardScreen() {
           unit: s.unit,
           refTempC: s.refTempC,
           material: s.material,
-          mode: stated.mode ?? defaultMode(s.parameter, s.quantityKind),
-          nearLimit: stated.nearLimit,
-          engineRpm: stated.engineRpm,
+          // A spec without a stated mode is read in the one its parameter's words imply.
+          mode: s.mode ?? defaultMode(s.parameter, s.quantityKind),
+          nearLimit: s.nearLimit,
+          engineRpm: s.engineRpm,
         }}
         job={{
           spec: { id: s.id, modelId: s.model.id, parameter: s.parameter, componentName: s.component.name },

@@ -9,21 +9,6 @@ export type { CanonicalUnit, QuantityKind } from '../units';
 /** Every quantity a spec can measure, in the order the database enum lists them. */
 export const QUANTITY_KINDS = ['resistance', 'voltage', 'current', 'length'] as const satisfies readonly QuantityKind[];
 
-/**
- * How the meter is set for a check: DC, AC (rms) or peak volts, ohms, the diode range (forward
- * voltage), continuity, or current. A gap measured with feeler gauges has no meter mode.
- */
-export const MEASUREMENT_MODES = [
-  'dc_voltage',
-  'ac_voltage',
-  'peak_voltage',
-  'resistance',
-  'diode_forward',
-  'continuity',
-  'current',
-] as const;
-export type MeasurementMode = (typeof MEASUREMENT_MODES)[number];
-
 /** A winding's material: copper resistance is corrected for temperature; none is not. */
 export const MATERIALS = ['copper', 'none'] as const;
 export type Material = (typeof MATERIALS)[number];

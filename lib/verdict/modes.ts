@@ -4,7 +4,7 @@
  * takes the plain mode of its quantity (volts → DC volts); the library's classifier
  * (lib/specs/classify.ts defaultMode) can do better from the parameter's words.
  */
-import { MEASUREMENT_MODES, type MeasurementMode } from '../contracts/enums';
+import { MEASUREMENT_MODE_LABEL, MEASUREMENT_MODES, type MeasurementMode } from '../contracts/enums';
 import type { QuantityKind } from '../units';
 
 export { MEASUREMENT_MODES, type MeasurementMode };
@@ -19,16 +19,13 @@ export const MODE_KIND: Readonly<Record<MeasurementMode, QuantityKind>> = {
   current: 'current',
 };
 
-/** The meter setting in a technician's words. */
-export const MODE_WORDS: Readonly<Record<MeasurementMode, string>> = {
-  dc_voltage: 'DC volts',
-  ac_voltage: 'AC volts',
-  peak_voltage: 'peak volts (through a peak-reading adapter)',
-  resistance: 'ohms',
-  diode_forward: 'the diode range (forward voltage)',
-  continuity: 'continuity (or the lowest ohms range)',
-  current: 'amps',
-};
+/** The meter setting in a sentence: 'AC volts (rms)', 'resistance (Ω)' (the contracts' labels). */
+export const MODE_WORDS: Readonly<Record<MeasurementMode, string>> = Object.fromEntries(
+  MEASUREMENT_MODES.map((m) => {
+    const label = MEASUREMENT_MODE_LABEL[m];
+    return [m, /^[A-Z][a-z]/.test(label) ? label.charAt(0).toLowerCase() + label.slice(1) : label];
+  }),
+) as Record<MeasurementMode, string>;
 
 export const isMeasurementMode = (v: unknown): v is MeasurementMode =>
   typeof v === 'string' && (MEASUREMENT_MODES as readonly string[]).includes(v);
@@ -47,8 +44,8 @@ export function modeInstruction(mode: MeasurementMode | null, engineRpm?: number
   return engineRpm != null ? `${meter}, engine at ${grouped(engineRpm)} rpm` : meter;
 }
 
-/** The first step's label: 'Meter reading (AC volts, engine at 5 000 rpm)'; a gap: 'Gauge reading'. */
+/** The first step's label: 'Meter reading on AC volts (rms), engine at 5 000 rpm'; a gap: 'Gauge reading'. */
 export function readingLabel(mode: MeasurementMode | null, engineRpm?: number | null): string {
   if (!mode) return 'Gauge reading';
-  return `Meter reading (${modeInstruction(mode, engineRpm).replace(/^Meter on /, '')})`;
+  return `Meter reading on ${modeInstruction(mode, engineRpm).replace(/^Meter on /, '')}`;
 }

@@ -30,8 +30,6 @@ async function specLimits(body: VerdictBody): Promise<{ limits: SpecLimits; vers
   const spec = await AppDataSource.getRepository(Spec).findOneBy({ id: body.specId!, status: 'published' });
   if (!spec) throw AppError.notFound('spec', body.specId);
   const unit = spec.unit as CanonicalUnit;
-  // The spec fields mode, nearLimit and engineRpm are read when the entity has them.
-  const stated = spec as Partial<Pick<SpecLimits, 'mode' | 'nearLimit' | 'engineRpm'>>;
   return {
     limits: {
       min: spec.min,
@@ -40,9 +38,9 @@ async function specLimits(body: VerdictBody): Promise<{ limits: SpecLimits; vers
       unit,
       refTempC: spec.refTempC,
       material: spec.material,
-      mode: stated.mode ?? defaultMode(spec.parameter, unitKind(unit)),
-      nearLimit: stated.nearLimit ?? null,
-      engineRpm: stated.engineRpm ?? null,
+      mode: spec.mode ?? defaultMode(spec.parameter, unitKind(unit)),
+      nearLimit: spec.nearLimit,
+      engineRpm: spec.engineRpm,
     },
     version: spec.version,
   };
