@@ -62,6 +62,12 @@ it('a kΩ secondary winding takes the leads in Ω; a minimum-only rest voltage o
     await leads.scrollIntoViewIfNeeded();
     expect(await onScreen(page, 'verdict-summary')).toBe(true);
     await page.screenshot({ path: path.join(SCREENSHOTS, 'verdict-trust-leads-phone-view.png') });
+    // …and when the last optional field, the meter's count, is scrolled to (the summary sticks to the top).
+    const count = calc.getByLabel('One count is worth', { exact: true });
+    await count.scrollIntoViewIfNeeded();
+    await count.focus();
+    expect(await onScreen(page, 'verdict-summary')).toBe(true);
+    await page.screenshot({ path: path.join(SCREENSHOTS, 'verdict-trust-meter-phone-view.png') });
   });
   await step('the working shows the subtraction in Ω with its result', async () => {
     await calc.getByTestId('show-working').click();
