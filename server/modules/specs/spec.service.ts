@@ -1,24 +1,16 @@
 /** Reading specs: one spec with its citation, place in the library and full history. */
 import type { SpecDetailDto } from '@/lib/contracts/library';
-import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
-import { Spec } from './spec.entity';
-import { SpecRevision } from './spec-revision.entity';
+import { RevisionRepository, SpecRepository } from './spec.repository';
 import { toRevision, toSpecSummary, specValuesOf } from './spec.mapper';
 import { toComponent, toModelRef, toSource } from '../library/library.mapper';
 import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
 import { libraryFollower } from '../library/library-follower';
 
 export async function getSpec(id: number): Promise<SpecDetailDto> {
-  const spec = await AppDataSource.getRepository(Spec).findOne({
-    where: { id },
-    relations: { component: { model: { make: true } }, source: true },
-  });
+  const spec = await SpecRepository.findCard(id);
   if (!spec) throw AppError.notFound('spec', id);
-  const revisions = await AppDataSource.getRepository(SpecRevision).find({
-    where: { specId: id },
-    order: { version: 'DESC' },
-  });
+  const revisions = await RevisionRepository.historyOf(id, 'DESC');
   return {
     ...toSpecSummary(spec),
     ...specValuesOf(spec),
