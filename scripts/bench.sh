@@ -17,7 +17,7 @@ if [ "$db_state" = started ]; then bash "$ROOT/scripts/db.sh" stop; fi
 # and dropped by the script). MariaDB is started when it is not running, and stopped again.
 db_state="$(bash "$ROOT/scripts/db.sh" start)"
 import_status=0
-DB_NAME=specbench_bench npx tsx --tsconfig server/tsconfig.json scripts/bench-import.ts || import_status=$?
+DB_NAME=specbench_bench DB_USER="$BENCH_DB_USER" DB_PASSWORD="$BENCH_DB_PASSWORD" npx tsx --tsconfig server/tsconfig.json scripts/bench-import.ts || import_status=$?
 if [ "$db_state" = started ]; then bash "$ROOT/scripts/db.sh" stop; fi
 [ "$import_status" -eq 0 ] || exit "$import_status"
 

@@ -10,7 +10,10 @@ import cookieParser from 'cookie-parser';
 import { enforceRouteRules } from './auth/access';
 import { passport } from './auth/passport';
 import { config } from './config';
+import { requestLogger } from './http/logging';
+import { measureRequests, metricsEndpoint } from './http/metrics';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { noStoreForPrivate } from './middleware/no-store';
 import { healthRouter } from './modules/health/health.router';
 import { modelRouter } from './modules/library/model.router';
 import { searchRouter } from './modules/search/search.router';
@@ -47,6 +50,7 @@ export type AppOptions = { webDist?: string | null; searchEngine?: SearchEngine 
 
 export function createApp(options: AppOptions = {}) {
   const app = express();
+  app.use(requestLogger, measureRequests);
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
   app.use(
@@ -69,10 +73,12 @@ export function createApp(options: AppOptions = {}) {
   app.use(passport.initialize());
 
   const api = express.Router();
+  api.use(noStoreForPrivate);
   api.use(enforceRouteRules);
   for (const [prefix, router] of apiRouters(options)) api.use(prefix, router);
   api.use(notFoundHandler);
   app.use('/api', api);
+  app.get('/metrics', metricsEndpoint);
   if (config.NODE_ENV !== 'production') app.use('/dev', devMailboxRouter);
 
   const webDist = options.webDist === undefined ? config.webDist : options.webDist;

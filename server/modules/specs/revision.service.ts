@@ -7,16 +7,18 @@ import type { SpecDetailDto } from '@/lib/contracts/library';
 import { diffSnapshots, valuesOfSnapshot } from '@/lib/contracts/spec-snapshot';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
+import type { SignedInUser } from '@/server/auth/roles';
 import { markLibraryChanged } from '../search/search.service';
 import type { SpecRevision } from './spec-revision.entity';
 import { RevisionRepository, SpecRepository } from './spec.repository';
 import { checkValues, inSpecTransaction, lockSpec, writeSpecChange } from './spec-write';
-import { getSpec } from './spec.service';
+import { checkVisible, getSpec } from './spec.service';
 
-/** Newest first, each with its changes against the revision before it. */
-export async function listRevisions(specId: number): Promise<RevisionListDto> {
+/** Newest first, each with its changes against the revision before it (a draft's only for editors). */
+export async function listRevisions(specId: number, viewer: SignedInUser | undefined): Promise<RevisionListDto> {
   const spec = await SpecRepository.versionOf(specId);
   if (!spec) throw AppError.notFound('spec', specId);
+  checkVisible(spec, viewer);
   const revisions = await RevisionRepository.historyOf(specId, 'ASC');
   const withDiffs = revisions.map((r, i): RevisionDiffDto => ({
     id: r.id,

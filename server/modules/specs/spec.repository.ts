@@ -24,9 +24,9 @@ export const SpecRepository = AppDataSource.getRepository(Spec).extend({
   findByParameterKey(componentId: number, parameterKey: string): Promise<Spec | null> {
     return this.findOneBy({ componentId, parameterKey });
   },
-  /** Only the id and version, or null when there is no such spec. */
-  versionOf(id: number): Promise<Pick<Spec, 'id' | 'version'> | null> {
-    return this.findOne({ where: { id }, select: { id: true, version: true } });
+  /** Only the id, version and status, or null when there is no such spec. */
+  versionOf(id: number): Promise<Pick<Spec, 'id' | 'version' | 'status'> | null> {
+    return this.findOne({ where: { id }, select: { id: true, version: true, status: true } });
   },
 });
 

@@ -1,11 +1,24 @@
 /** Reading specs: one spec with its citation, place in the library and full history. */
 import type { SpecDetailDto } from '@/lib/contracts/library';
 import { AppError } from '@/server/errors/app-error';
+import { roleAtLeast, type SignedInUser } from '@/server/auth/roles';
 import { RevisionRepository, SpecRepository } from './spec.repository';
 import { toRevision, toSpecSummary, specValuesOf } from './spec.mapper';
 import { toComponent, toModelRef, toSource } from '../library/library.mapper';
 import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
 import { libraryFollower } from '../library/library-follower';
+
+/**
+ * Drafts are the editors' work in progress: to everyone below editor (and to anonymous
+ * visitors) a draft spec does not exist, on every path that reads a spec by id, as in
+ * search, model sheets and verdicts.
+ */
+export const seesDrafts = (viewer: SignedInUser | undefined) => !!viewer && roleAtLeast(viewer.role, 'editor');
+
+/** 404 unless the spec is published or the viewer may see drafts. */
+export function checkVisible(spec: { id: number; status: string }, viewer: SignedInUser | undefined) {
+  if (spec.status !== 'published' && !seesDrafts(viewer)) throw AppError.notFound('spec', spec.id);
+}
 
 export async function getSpec(id: number): Promise<SpecDetailDto> {
   const spec = await SpecRepository.findCard(id);
@@ -37,7 +50,13 @@ libraryFollower.subscribe((ids) => {
   for (const id of ids) cache.delete(id);
 });
 
-export async function readSpec(id: number): Promise<SpecDetailDto> {
+export async function readSpec(id: number, viewer: SignedInUser | undefined): Promise<SpecDetailDto> {
+  const dto = await cachedSpec(id);
+  checkVisible(dto, viewer);
+  return dto;
+}
+
+async function cachedSpec(id: number): Promise<SpecDetailDto> {
   libraryFollower.start();
   const hit = cache.get(id);
   if (hit && Date.now() - hit.at < CACHE_TTL_MS) return hit.dto;
