@@ -130,18 +130,19 @@ function cellCountProblem(cells: string[], width: number, line: number): RowProb
   return null;
 }
 
-/**
- * Parses a spec CSV (header row required). `line` is the physical 1-based line where each
- * record starts. When the header is unusable, `rows` is empty. Rows with the wrong number
- * of cells are left out and reported in `rowErrors` with their line (the rest of the file is
- * fine); `fileErrors` mean the file cannot be used.
- */
 /** Rows a file may have (the importer's limit, README "CSV import"); a longer file is refused whole. */
 export const MAX_CSV_ROWS = 200_000;
 
 /** Cell-count problems kept (the count of rejected rows is kept in full by the validator). */
 const MAX_ROW_ERRORS = 1000;
 
+/**
+ * Parses a spec CSV (header row required), record by record. `line` is the physical 1-based
+ * line where each record starts. When the header is unusable, `rows` is empty. Rows with the
+ * wrong number of cells are left out and reported in `rowErrors` with their line (the rest of
+ * the file is fine); `fileErrors` mean the file cannot be used. A file of more than `maxRows`
+ * rows stops at once with `tooManyRows`.
+ */
 export function parseSpecCsvDetailed(input: string, maxRows = MAX_CSV_ROWS): DetailedParse {
   const text = input.startsWith('\uFEFF') ? input.slice(1) : input;
   const result: DetailedParse = { rows: [], fileErrors: [], rowErrors: [], rowErrorCount: 0 };
