@@ -309,6 +309,7 @@ export type RunDto = {
   symptom: string;
   system: System;
   status: 'active' | 'concluded';
+  stepCount: number;
   currentStep: RunStepDto | null;
   finding: (Finding & { stepId: string }) | null;
   results: RunResultDto[];

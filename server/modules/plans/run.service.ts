@@ -48,6 +48,7 @@ function toRunDto(run: PlanRun, results: PlanRunResult[], parts: JobModelParts):
     symptom: run.symptom,
     system: run.system,
     status: run.status,
+    stepCount: run.steps.length,
     currentStep: toRunStep(run.steps, run.currentStep, parts),
     finding: run.finding,
     results: results.filter((r) => !r.undone).map((r) => toResultDto(r, run)),
