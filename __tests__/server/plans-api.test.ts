@@ -1,6 +1,7 @@
 /** The plan library: list / read (public), the editors' writes, revisions, the plan file, and bad plans (422 naming the step). */
 import request from 'supertest';
 import { createApp } from '@/server/app';
+import { AppDataSource } from '@/server/db/data-source';
 import { useTestDatabase } from '../helpers/test-db';
 import { authHeader } from '../helpers/auth';
 import { expectProblem } from '../helpers/problems';
@@ -227,5 +228,58 @@ describe('the plan file', () => {
     expect(res.body.errors[0].path).toBe('plans.1.steps.0.next.pass.step');
     const list = await request(app).get('/api/plans?q=imported').expect(200);
     expect(list.body).toEqual([]);
+  });
+});
+
+describe('PUT /api/components/:id/connector', () => {
+  const face = {
+    rows: 1,
+    columns: 2,
+    numbering: 'left-to-right',
+    view: 'harness',
+    key: 'top',
+    pins: [
+      { number: 1, name: 'Signal', wire: 'white/red' },
+      { number: 2, name: 'Ground', wire: null },
+    ],
+  };
+  const someComponent = async () => (await AppDataSource.query('SELECT id FROM components ORDER BY id LIMIT 1'))[0].id;
+
+  it('sets and removes a component connector for an editor', async () => {
+    const id = await someComponent();
+    const res = await request(app)
+      .put(`/api/components/${id}/connector`)
+      .set(await editor())
+      .send({ connector: face });
+    expect(res.status).toBe(200);
+    expect(res.body.connector.pins).toHaveLength(2);
+    await request(app)
+      .put(`/api/components/${id}/connector`)
+      .set(await editor())
+      .send({ connector: null })
+      .expect(200);
+  });
+
+  it('refuses a pin beyond rows × columns (400), contributors (403), a missing component (404)', async () => {
+    const id = await someComponent();
+    const bad = { ...face, pins: [{ number: 3, name: 'X', wire: null }] };
+    const res = await request(app)
+      .put(`/api/components/${id}/connector`)
+      .set(await editor())
+      .send({ connector: bad });
+    expectProblem(res, 400, 'validation_failed');
+    expect(res.body.errors[0].path).toBe('connector.pins');
+    const c = await request(app)
+      .put(`/api/components/${id}/connector`)
+      .set(await authHeader('contributor'))
+      .send({ connector: face });
+    expectProblem(c, 403, 'forbidden');
+    expectProblem(
+      await request(app)
+        .put('/api/components/999999/connector')
+        .set(await editor())
+        .send({ connector: face }),
+      404,
+    );
   });
 });
