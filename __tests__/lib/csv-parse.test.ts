@@ -12,6 +12,9 @@ const VALID: Record<SpecCsvColumn, string> = {
   nominal: '3.2',
   max: '3.5',
   unit: 'Ω',
+  mode: '',
+  near_limit: '',
+  engine_rpm: '',
   ref_temp_c: '20',
   material: 'copper',
   test_points: 'orange/white (+) to ground',
@@ -23,6 +26,7 @@ const VALID: Record<SpecCsvColumn, string> = {
   notes: '',
 };
 const HEADER = SPEC_CSV_COLUMNS.join(',');
+const WIDTH = SPEC_CSV_COLUMNS.length;
 const quote = (v: string) => (/[",\r\n]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v);
 const record = (over: Partial<Record<SpecCsvColumn, string>> = {}) =>
   SPEC_CSV_COLUMNS.map((c) => quote(over[c] ?? VALID[c])).join(',');
@@ -136,13 +140,15 @@ describe('lib/csv parseSpecCsv file-level problems', () => {
       'too many cells on line 3',
       `${HEADER}\r\n${record()}\r\n${record()},extra\r\n`,
       3,
-      /21 cells but the header has 20 columns; a value that contains a comma must be put in double quotes/,
+      new RegExp(
+        `${WIDTH + 1} cells but the header has ${WIDTH} columns; a value that contains a comma must be put in double quotes`,
+      ),
     ],
     [
       'too few cells on line 2',
       `${HEADER}\r\n${record().replace(/,[^,]*,[^,]*$/, '')}\r\n`,
       2,
-      /18 cells but the header has 20 columns/,
+      new RegExp(`${WIDTH - 2} cells but the header has ${WIDTH} columns`),
     ],
   ])('when given %s, reports it on line %d', (_name, text, line, reason) => {
     const parsed = parseSpecCsv(text);

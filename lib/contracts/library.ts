@@ -4,7 +4,7 @@
  */
 import { z } from 'zod';
 import type { CanonicalUnit, Material, QuantityKind, RevisionOrigin, SpecStatus } from './enums';
-import type { SpecSnapshot } from './spec-fields';
+import type { SpecSnapshot, SpecValues } from './spec-fields';
 
 export type { QuantityKind } from './enums';
 
@@ -93,17 +93,15 @@ export type RevisionDto = {
   snapshot: Partial<SpecSnapshot>;
 };
 
-export type SpecDetailDto = SpecSummaryDto & {
-  testPoints: string | null;
-  conditions: string | null;
-  notes: string | null;
-  sourcePage: string | null;
-  source: SourceDto | null;
-  component: ComponentDto;
-  model: ModelRefDto;
-  updatedAt: string;
-  revisions: RevisionDto[];
-};
+/** A spec card: every value field of the list (lib/contracts/spec-fields.ts), its citation, place and history. */
+export type SpecDetailDto = SpecSummaryDto &
+  Omit<SpecValues, 'sourceId'> & {
+    source: SourceDto | null;
+    component: ComponentDto;
+    model: ModelRefDto;
+    updatedAt: string;
+    revisions: RevisionDto[];
+  };
 
 export type SearchHitDto = {
   specId: number;

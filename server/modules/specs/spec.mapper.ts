@@ -1,6 +1,7 @@
 /** Entities → DTOs. Services return DTOs, never entities. */
 import type { ComponentDto, ModelRefDto, RevisionDto, SourceDto, SpecSummaryDto } from '@/lib/contracts/library';
 import { formatRange } from '@/lib/units';
+import { COLUMN_FIELDS, type SpecValues } from '@/lib/contracts/spec-fields';
 import type { Spec } from './spec.entity';
 import type { SpecRevision } from './spec-revision.entity';
 import type { VehicleModel } from '../library/vehicle-model.entity';
@@ -23,6 +24,11 @@ export function toSpecSummary(s: Spec): SpecSummaryDto {
     version: s.version,
     display: formatRange(s.min, s.nominal, s.max, s.unit),
   };
+}
+
+/** Every value field of the list, as the spec card shows it. */
+export function specValuesOf(s: Spec): Omit<SpecValues, 'sourceId'> {
+  return Object.fromEntries(COLUMN_FIELDS.map((f) => [f.key, s[f.key]])) as Omit<SpecValues, 'sourceId'>;
 }
 
 export function toModelRef(m: VehicleModel): ModelRefDto {

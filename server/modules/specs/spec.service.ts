@@ -4,7 +4,7 @@ import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import { Spec } from './spec.entity';
 import { SpecRevision } from './spec-revision.entity';
-import { toComponent, toModelRef, toRevision, toSource, toSpecSummary } from './spec.mapper';
+import { toComponent, toModelRef, toRevision, toSource, toSpecSummary, specValuesOf } from './spec.mapper';
 import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
 
 export async function getSpec(id: number): Promise<SpecDetailDto> {
@@ -19,10 +19,7 @@ export async function getSpec(id: number): Promise<SpecDetailDto> {
   });
   return {
     ...toSpecSummary(spec),
-    testPoints: spec.testPoints,
-    conditions: spec.conditions,
-    notes: spec.notes,
-    sourcePage: spec.sourcePage,
+    ...specValuesOf(spec),
     source: spec.source ? toSource(spec.source) : null,
     component: toComponent(spec.component),
     model: toModelRef(spec.component.model),
