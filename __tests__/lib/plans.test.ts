@@ -1,9 +1,11 @@
 /** lib/plans: the graph rules, which models a plan fits, and which way a run goes. */
 import { readFileSync } from 'fs';
 import { join } from 'path';
+import { decodeCsv, validateSpecCsv } from '@/lib/csv';
 import { PlanFile, type PlanStep } from '@/lib/contracts/plans';
 import { appliesTo, findComponent, fitProblems, type ModelParts } from '@/lib/plans/applicability';
 import { stepAfter, targetFor } from '@/lib/plans/branching';
+import { connectorCells } from '@/lib/plans/connector';
 import { planProblems } from '@/lib/plans/validate';
 import { groupBySystem, systemOf } from '@/lib/specs/systems';
 
@@ -23,6 +25,20 @@ const step = (
   testPoint: { text: 't' },
   check,
   next,
+});
+
+describe('data/demo-plan-parts.csv (the parts the demo plans name)', () => {
+  it('validates in the import format with no rejected rows, and gives the stator AC output its meter mode', () => {
+    const result = validateSpecCsv(decodeCsv(readFileSync(join(__dirname, '../../data/demo-plan-parts.csv'))));
+    expect(result.fileErrors).toEqual([]);
+    expect(result.rejected).toEqual([]);
+    const ac = result.accepted.map((a) => a.row).find((r) => r.parameter === 'AC output, 5000 rpm');
+    expect(ac).toMatchObject({ component: 'Stator', mode: 'ac_voltage', engineRpm: 5000 });
+  });
+
+  it('has at least 10 connector faces in the demo plan file, each pin inside its grid', () => {
+    expect(demo.connectors.length).toBeGreaterThanOrEqual(10);
+  });
 });
 
 describe('planProblems', () => {
@@ -138,5 +154,23 @@ describe('systems', () => {
       { name: 'Spark plug' },
     ]);
     expect(groups.map((g) => g.system)).toEqual(['ignition', 'charging', 'lighting', 'other']);
+  });
+});
+
+describe('connectorCells', () => {
+  it('puts "pins 2 and 3 from the right, bottom row" of the demo diode module at pins 6 and 7', () => {
+    const diode = demo.connectors.find((c) => c.component === 'Diode module')!.connector;
+    const bottom = connectorCells(diode).filter((c) => c.row === 1);
+    const fromRight = [...bottom].sort((a, b) => b.column - a.column).map((c) => c.number);
+    expect(fromRight.slice(1, 3).sort()).toEqual([6, 7]);
+    expect(noSpark.steps.find((s) => s.id === 'diodes')!.testPoint.pins).toEqual([6, 7]);
+  });
+
+  it('numbers right-to-left from the top right', () => {
+    expect(connectorCells({ rows: 1, columns: 3, numbering: 'right-to-left' })).toEqual([
+      { number: 1, row: 0, column: 2 },
+      { number: 2, row: 0, column: 1 },
+      { number: 3, row: 0, column: 0 },
+    ]);
   });
 });

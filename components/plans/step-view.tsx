@@ -1,4 +1,5 @@
 import { StyleSheet, View } from 'react-native';
+import { MEASUREMENT_MODE_LABEL } from '@/lib/contracts/enums';
 import type { RunStepDto } from '@/lib/contracts/plans';
 import { Spacing } from '@/lib/theme';
 import { SafetyNotes } from '../library/safety-notes';
@@ -30,6 +31,12 @@ export function StepView({ step, total }: StepViewProps) {
       <View style={styles.block}>
         <Text variant="label">Test point</Text>
         <Text testID="step-test-point">{step.testPoint.text}</Text>
+        {step.spec?.mode ? (
+          <Text variant="label" testID="step-meter-mode">
+            Meter: {MEASUREMENT_MODE_LABEL[step.spec.mode]}
+            {step.spec.engineRpm ? ` · engine at ${step.spec.engineRpm} rpm` : ''}
+          </Text>
+        ) : null}
         {step.spec?.testPoints ? (
           <Text variant="small" color="textMuted">
             Manual: {step.spec.testPoints}

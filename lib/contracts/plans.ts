@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import { CAUTION_CATEGORIES } from '../specs/classify';
-import type { FieldError } from './enums';
+import type { FieldError, MeasurementMode } from './enums';
 import type { ReadingDto } from './jobs';
 
 /** The systems of a machine, in the trade's order of work (the model sheet groups by it). */
@@ -235,6 +235,9 @@ export const RunResultBody = z
 export type RunResultBody = z.infer<typeof RunResultBody>;
 
 export type SpecForStepDto = {
+  /** How the meter is set (null: decided from the parameter and unit), and the engine speed of the check. */
+  mode: MeasurementMode | null;
+  engineRpm: number | null;
   id: number;
   min: number | null;
   nominal: number | null;

@@ -34,6 +34,8 @@ export function specOfStep(step: PlanStep, parts: JobModelParts): { spec: Spec; 
 function specDto(s: Spec): SpecForStepDto {
   return {
     id: s.id,
+    mode: s.mode ?? null,
+    engineRpm: s.engineRpm ?? null,
     min: s.min,
     nominal: s.nominal,
     max: s.max,
