@@ -59,7 +59,7 @@ it('runs the demo no-spark plan on a job at 390×844 to the pickup coil finding,
     await page.getByTestId('search-input').fill('no spark');
     const hits = page.getByTestId('search-plans');
     await expectVisible(hits, 'the test plans above the spec results');
-    await expectText(hits.locator('[data-testid^="plan-"]').first(), /No spark on one or all cylinders/);
+    await expectText(hits.locator('[data-testid^="plan-item-"]').first(), /No spark on one or all cylinders/);
     await screenshot(page, 'plans-search-phone');
   });
 

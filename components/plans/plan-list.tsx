@@ -18,7 +18,7 @@ export function PlanList({ plans, onOpen, actionLabel = 'Open' }: PlanListProps)
           accessibilityRole="button"
           accessibilityLabel={`${actionLabel}: ${p.title}`}
           onPress={() => onOpen(p)}
-          testID={`plan-${p.id}`}
+          testID={`plan-item-${p.id}`}
         >
           {({ pressed }) => (
             <Card style={pressed ? { backgroundColor: t.surfaceMuted } : undefined}>
