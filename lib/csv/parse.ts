@@ -121,6 +121,12 @@ function cellCountProblem(cells: string[], width: number, line: number): RowProb
   return null;
 }
 
+/**
+ * Parses a spec CSV (header row required). `line` is the physical 1-based line where each
+ * record starts. When the header is unusable, `rows` is empty. Rows with the wrong number
+ * of cells are left out and reported in `rowErrors` with their line (the rest of the file is
+ * fine); `fileErrors` mean the file cannot be used.
+ */
 export function parseSpecCsvDetailed(input: string): DetailedParse {
   const text = input.startsWith('\uFEFF') ? input.slice(1) : input;
   const result: DetailedParse = { rows: [], fileErrors: [], rowErrors: [] };
@@ -151,14 +157,4 @@ export function parseSpecCsvDetailed(input: string): DetailedParse {
   if (data.length === 0)
     result.fileErrors.push({ line: headerRecord.line, column: null, reason: 'the file has a header but no data rows' });
   return result;
-}
-
-/**
- * Parses a spec CSV (header row required). `line` is the physical 1-based line where each
- * record starts. When the header is unusable, `rows` is empty. Rows with the wrong number
- * of cells are left out and reported in `fileErrors` with their line.
- */
-export function parseSpecCsv(text: string): ParsedCsv {
-  const { rows, fileErrors, rowErrors } = parseSpecCsvDetailed(text);
-  return { rows, fileErrors: [...fileErrors, ...rowErrors].sort((a, b) => a.line - b.line) };
 }

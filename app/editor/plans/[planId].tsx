@@ -1,5 +1,5 @@
 import { Stack, useLocalSearchParams } from 'expo-router';
-import { EditorGate } from '@/components/curation/editor-gate';
+import { EditorGate } from '@/components/spec-editor/editor-gate';
 import { PlanJsonForm } from '@/components/plans/plan-json-form';
 import { Screen } from '@/components/ui/screen';
 import { ErrorState, LoadingState } from '@/components/ui/states';

@@ -1,5 +1,5 @@
 import { Stack, useRouter } from 'expo-router';
-import { EditorGate } from '@/components/curation/editor-gate';
+import { EditorGate } from '@/components/spec-editor/editor-gate';
 import { PlanJsonForm } from '@/components/plans/plan-json-form';
 import { PlanList } from '@/components/plans/plan-list';
 import { Button } from '@/components/ui/button';

@@ -4,7 +4,8 @@ import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import { Spec } from './spec.entity';
 import { SpecRevision } from './spec-revision.entity';
-import { toComponent, toModelRef, toRevision, toSource, toSpecSummary, specValuesOf } from './spec.mapper';
+import { toRevision, toSpecSummary, specValuesOf } from './spec.mapper';
+import { toComponent, toModelRef, toSource } from '../library/library.mapper';
 import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
 
 export async function getSpec(id: number): Promise<SpecDetailDto> {
