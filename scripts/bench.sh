@@ -35,6 +35,7 @@ server_pid=$!
 for _ in $(seq 1 50); do curl -sf "http://127.0.0.1:$PORT/api/health" >/dev/null && break; sleep 0.2; done
 bench_status=0
 BENCH_URL="http://127.0.0.1:$PORT" npx tsx --tsconfig server/tsconfig.json scripts/bench-api.ts || bench_status=$?
+BENCH_URL="http://127.0.0.1:$PORT" npx tsx --tsconfig server/tsconfig.json scripts/bench-plan-runs.ts || bench_status=$?
 BENCH_URL="http://127.0.0.1:$PORT" npx tsx --tsconfig server/tsconfig.json scripts/bench-web.ts || bench_status=$?
 BENCH_URL="http://127.0.0.1:$PORT" npx tsx --tsconfig server/tsconfig.json scripts/bench-restart.ts || bench_status=$?
 kill -TERM "$server_pid" 2>/dev/null; wait "$server_pid" 2>/dev/null || true

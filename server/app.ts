@@ -28,6 +28,9 @@ import { userRouter } from './modules/users/user.router';
 import { jobRouter } from './modules/jobs/job.router';
 import { correctionRouter } from './modules/corrections/correction.router';
 import { devMailboxRouter } from './modules/mail/dev-mailbox.router';
+import { planRouter } from './modules/plans/plan.router';
+import { runRouter } from './modules/plans/run.router';
+import { connectorRouter } from './modules/plans/connector.router';
 
 /** Every API router and where it is mounted under /api (the access test walks this list). */
 export function apiRouters(options: AppOptions = {}): [string, express.Router][] {
@@ -43,6 +46,9 @@ export function apiRouters(options: AppOptions = {}): [string, express.Router][]
     ['/verdicts', verdictRouter],
     ['/jobs', jobRouter],
     ['/corrections', correctionRouter()],
+    ['/plans', planRouter],
+    ['/jobs', runRouter],
+    ['/components', connectorRouter],
   ];
 }
 
