@@ -23,6 +23,7 @@ import { userRouter } from './modules/users/user.router';
 import { jobRouter } from './modules/jobs/job.router';
 import { correctionRouter } from './modules/corrections/correction.router';
 import { devMailboxRouter } from './modules/mail/dev-mailbox.router';
+import { serveWeb } from './http/static';
 
 /** Every API router and where it is mounted under /api (the access test walks this list). */
 export function apiRouters(): [string, express.Router][] {
@@ -77,17 +78,4 @@ export function createApp(options: { webDist?: string | null } = {}) {
   app.use(notFoundHandler);
   app.use(errorHandler);
   return app;
-}
-
-/** The exported single-page web app; every unknown path gets index.html (client-side routes). */
-function serveWeb(app: express.Express, webDist: string) {
-  app.use(express.static(webDist, { index: false, maxAge: '1h', setHeaders: noCacheHtml }));
-  app.get('/{*splat}', (_req, res) => {
-    res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(path.join(webDist, 'index.html'));
-  });
-}
-
-function noCacheHtml(res: express.Response, filePath: string) {
-  if (filePath.endsWith('.html')) res.setHeader('Cache-Control', 'no-cache');
 }
