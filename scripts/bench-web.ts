@@ -35,7 +35,10 @@ function firstScreenJs() {
   const size = (f: string, ext: string) => (fs.existsSync(f + ext) ? fs.statSync(f + ext).size : NaN);
   const raw = files.reduce((n, f) => n + fs.statSync(f).size, 0);
   const br = files.reduce((n, f) => n + size(f, '.br'), 0);
-  const gz = files.reduce((n, f) => n + (fs.existsSync(f + '.gz') ? size(f, '.gz') : zlib.gzipSync(fs.readFileSync(f)).length), 0);
+  const gz = files.reduce(
+    (n, f) => n + (fs.existsSync(f + '.gz') ? size(f, '.gz') : zlib.gzipSync(fs.readFileSync(f)).length),
+    0,
+  );
   return { count: files.length, raw, gz, br };
 }
 
@@ -122,8 +125,16 @@ async function main() {
   const removeCeiling = writeCeilingPage();
   const browser = await chromium.launch({
     executablePath: '/usr/bin/chromium',
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-      '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--disable-dev-shm-usage',
+    ],
   });
   try {
     type Run = Awaited<ReturnType<typeof measure>>;

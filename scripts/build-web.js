@@ -37,6 +37,28 @@ function writeManifest() {
   fs.writeFileSync(path.join(dist, 'manifest.webmanifest'), JSON.stringify(manifest, null, 2));
 }
 
+const HYDRATE_FLAG = /<script type="module">globalThis\.__EXPO_ROUTER_HYDRATE__=true;<\/script>/;
+
+/**
+ * Pages rendered without their parameters (specs/[specId].html) and the offline shell do not
+ * match the screen the router will show, so they must not be hydrated (React would throw away
+ * the tree after a mismatch): without Expo Router's hydration flag the app renders afresh
+ * over the page. Exact pages (/, /calculator) keep it and hydrate.
+ */
+function writeShells() {
+  const walk = (dir) =>
+    fs.readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
+      const f = path.join(dir, e.name);
+      return e.isDirectory() ? walk(f) : e.name.endsWith('.html') ? [f] : [];
+    });
+  for (const file of walk(dist).filter((f) => f.includes('['))) {
+    fs.writeFileSync(file, fs.readFileSync(file, 'utf8').replace(HYDRATE_FLAG, ''));
+  }
+  const index = fs.readFileSync(path.join(dist, 'index.html'), 'utf8');
+  if (!HYDRATE_FLAG.test(index)) throw new Error('index.html has no hydration flag: did Expo Router change it?');
+  fs.writeFileSync(path.join(dist, 'shell.html'), index.replace(HYDRATE_FLAG, ''));
+}
+
 /** Library reads anyone may make: search, models and spec cards (not the editors' or users' routes). */
 function isPublicLibraryRead({ url, request }) {
   return (
@@ -66,8 +88,8 @@ async function writeServiceWorker() {
     // Metro names bundles and assets by content hash: the browser's HTTP cache may answer them.
     dontCacheBustURLsMatching: /[.-][0-9a-f]{32}\./,
     // Pages are precached under their clean address (/calculator → calculator.html); dynamic
-    // ones (/specs/12) fall back to the home page's shell and the router renders them.
-    navigateFallback: '/index.html',
+    // ones (/specs/12) fall back to the shell (no hydration) and the router renders them.
+    navigateFallback: '/shell.html',
     navigateFallbackDenylist: [/^\/api\//, /^\/dev\//],
     cleanupOutdatedCaches: true,
     clientsClaim: true, // the first visit's page is served offline-ready at once
@@ -114,8 +136,10 @@ function compressAll(dir) {
 }
 
 async function main() {
-  if (!fs.existsSync(path.join(dist, 'index.html'))) throw new Error(`${dist} has no index.html: run expo export first`);
+  if (!fs.existsSync(path.join(dist, 'index.html')))
+    throw new Error(`${dist} has no index.html: run expo export first`);
   writeManifest();
+  writeShells();
   await writeServiceWorker();
   const { raw, br } = compressAll(dist);
   console.log(`compressed: ${(raw / 1024).toFixed(0)} KB of text and fonts → ${(br / 1024).toFixed(0)} KB brotli`);
