@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import { SearchResults } from '@/components/library/search-results';
 import { ModelList } from '@/components/library/model-list';
-import { EditorActions } from '@/components/curation/editor-actions';
+import { EditorActions } from '@/components/spec-editor/editor-actions';
 import { Button } from '@/components/ui/button';
 import { MainAndSide } from '@/components/ui/main-and-side';
 import { Screen } from '@/components/ui/screen';

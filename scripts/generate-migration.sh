@@ -8,7 +8,7 @@ source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 name="${1:?usage: generate-migration.sh PascalCaseName}"
 db_start >/dev/null
 cd "$ROOT"
-rm -rf dist-server && npx tsc -p server/tsconfig.json
+rm -rf dist-server && npm run -s build:server
 db_sql "DROP DATABASE IF EXISTS specbench_migrate; CREATE DATABASE specbench_migrate CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
 export DB_NAME=specbench_migrate
 npx typeorm migration:run -d dist-server/server/db/data-source.js >/dev/null

@@ -10,10 +10,14 @@ import cookieParser from 'cookie-parser';
 import { enforceRouteRules } from './auth/access';
 import { passport } from './auth/passport';
 import { config } from './config';
+import { requestLogger } from './http/logging';
+import { measureRequests, metricsEndpoint } from './http/metrics';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { noStoreForPrivate } from './middleware/no-store';
 import { healthRouter } from './modules/health/health.router';
 import { modelRouter } from './modules/library/model.router';
 import { searchRouter } from './modules/search/search.router';
+import type { SearchEngine } from './modules/search/search-engine';
 import { specRouter } from './modules/specs/spec.router';
 import { importRouter } from './modules/imports/import.router';
 import { exportRouter } from './modules/exports/export.router';
@@ -26,12 +30,12 @@ import { devMailboxRouter } from './modules/mail/dev-mailbox.router';
 import { serveWeb } from './http/static';
 
 /** Every API router and where it is mounted under /api (the access test walks this list). */
-export function apiRouters(): [string, express.Router][] {
+export function apiRouters(options: AppOptions = {}): [string, express.Router][] {
   return [
     ['/health', healthRouter],
     ['/auth', authRouter()],
     ['/users', userRouter],
-    ['/search', searchRouter],
+    ['/search', searchRouter(options.searchEngine)],
     ['/models', modelRouter],
     ['/specs', specRouter],
     ['/imports', importRouter],
@@ -42,8 +46,12 @@ export function apiRouters(): [string, express.Router][] {
   ];
 }
 
-export function createApp(options: { webDist?: string | null } = {}) {
+/** `searchEngine`: a search index of its own, so one test can run two "server processes" side by side. */
+export type AppOptions = { webDist?: string | null; searchEngine?: SearchEngine };
+
+export function createApp(options: AppOptions = {}) {
   const app = express();
+  app.use(requestLogger, measureRequests);
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
   app.use(
@@ -66,10 +74,12 @@ export function createApp(options: { webDist?: string | null } = {}) {
   app.use(passport.initialize());
 
   const api = express.Router();
+  api.use(noStoreForPrivate);
   api.use(enforceRouteRules);
-  for (const [prefix, router] of apiRouters()) api.use(prefix, router);
+  for (const [prefix, router] of apiRouters(options)) api.use(prefix, router);
   api.use(notFoundHandler);
   app.use('/api', api);
+  app.get('/metrics', metricsEndpoint);
   if (config.NODE_ENV !== 'production') app.use('/dev', devMailboxRouter);
 
   const webDist = options.webDist === undefined ? config.webDist : options.webDist;

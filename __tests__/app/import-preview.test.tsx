@@ -1,6 +1,6 @@
 import { fireEvent, render, screen, within } from '@testing-library/react-native';
-import { CommitPanel } from '@/components/curation/commit-panel';
-import { ImportPreview } from '@/components/curation/import-preview';
+import { CommitPanel } from '@/components/imports/commit-panel';
+import { ImportPreview } from '@/components/imports/import-preview';
 import type { ImportPreviewDto, ImportRowDto } from '@/lib/contracts/imports';
 
 const row = (line: number, over: Partial<ImportRowDto> = {}): ImportRowDto => ({

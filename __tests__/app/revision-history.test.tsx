@@ -1,6 +1,6 @@
 import { fireEvent, render, screen } from '@testing-library/react-native';
-import { RevertForm } from '@/components/curation/revert-form';
-import { originText } from '@/components/curation/revision-item';
+import { RevertForm } from '@/components/history/revert-form';
+import { originText } from '@/components/history/revision-item';
 import { ApiError } from '@/lib/api/client';
 import type { RevisionDiffDto } from '@/lib/contracts/curation';
 

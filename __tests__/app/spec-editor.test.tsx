@@ -1,8 +1,8 @@
 import { fireEvent, render, screen, waitFor, within } from '@testing-library/react-native';
-import { SpecCreateForm } from '@/components/curation/spec-create-form';
-import { SpecEditForm } from '@/components/curation/spec-edit-form';
-import { EMPTY_SPEC_FORM, specToForm, toUpdateBody } from '@/components/curation/spec-form-values';
-import { StaleEditView } from '@/components/curation/stale-edit-view';
+import { SpecCreateForm } from '@/components/spec-editor/spec-create-form';
+import { SpecEditForm } from '@/components/spec-editor/spec-edit-form';
+import { EMPTY_SPEC_FORM, specToForm, toUpdateBody } from '@/components/spec-editor/spec-form-values';
+import { StaleEditView } from '@/components/spec-editor/stale-edit-view';
 import type { SpecDetailDto } from '@/lib/contracts/library';
 
 const spec = (over: Partial<SpecDetailDto> = {}): SpecDetailDto => ({
@@ -14,6 +14,9 @@ const spec = (over: Partial<SpecDetailDto> = {}): SpecDetailDto => ({
   nominal: 2.8,
   max: 3.2,
   unit: 'Ω',
+  mode: null,
+  nearLimit: null,
+  engineRpm: null,
   refTempC: 20,
   material: 'copper',
   status: 'published',

@@ -3,7 +3,10 @@ import { SPEC_CSV_COLUMNS, checkCsvBytes, decodeCsv, validateSpecCsv } from '@/l
 const utf8 = (s: string) => new TextEncoder().encode(s);
 const ROW =
   'Kestrel Moto,900 Trail,2016,2021,898 cc,ignition coil,primary winding resistance,2.9,3.2,3.5,Ω,20,copper,,,Kestrel Moto Service Manual,Rev. B,7-12,,';
-const CSV = `${SPEC_CSV_COLUMNS.join(',')}\r\n${ROW}\r\n`;
+/** A file written before the mode, near_limit and engine_rpm columns existed: it still imports. */
+const OLD_HEADER =
+  'make,model,year_from,year_to,variant,component,parameter,min,nominal,max,unit,ref_temp_c,material,test_points,conditions,source_title,source_edition,source_page,source_url,notes';
+const CSV = `${OLD_HEADER}\r\n${ROW}\r\n`;
 
 function utf16le(s: string, bom: boolean): Uint8Array {
   const out = new Uint8Array(s.length * 2 + (bom ? 2 : 0));

@@ -12,6 +12,9 @@ const VALID: Record<SpecCsvColumn, string> = {
   nominal: '3.2',
   max: '3.5',
   unit: 'Ω',
+  mode: '',
+  near_limit: '',
+  engine_rpm: '',
   ref_temp_c: '20',
   material: 'copper',
   test_points: 'orange/white (+) to ground',
@@ -77,7 +80,11 @@ describe('lib/csv validateSpecCsv', () => {
     const result = validateSpecCsv(file(record(), `${record({ component: 'x' })},surplus`, record({ component: 'y' })));
     expect(result.fileErrors).toEqual([]);
     expect(result.rejected).toEqual([
-      { line: 3, column: null, reason: expect.stringMatching(/21 cells but the header has 20/) },
+      {
+        line: 3,
+        column: null,
+        reason: `this row has ${SPEC_CSV_COLUMNS.length + 1} cells but the header has ${SPEC_CSV_COLUMNS.length} columns; a value that contains a comma must be put in double quotes`,
+      },
     ]);
     expect(result.accepted.map((a) => a.line)).toEqual([2, 4]);
   });

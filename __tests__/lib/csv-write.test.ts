@@ -13,6 +13,9 @@ const BASE: SpecCsvRow = {
   nominal: 3.2,
   max: 3.5,
   unit: 'Ω',
+  mode: null,
+  nearLimit: null,
+  engineRpm: null,
   refTempC: 20,
   material: 'copper',
   testPoints: 'orange/white (+) to ground',
@@ -58,7 +61,7 @@ describe('lib/csv toSpecCsv (RFC 4180 §2)', () => {
     const record = firstRecord({ ...BASE, yearTo: null, min: null, max: null, refTempC: null, sourceUrl: null });
     expect(record).toBe(
       'Kestrel Moto,900 Trail,2016,,898 cc EU,ignition coil (rear),primary winding resistance,,3.2,,Ω,,copper,' +
-        'orange/white (+) to ground,meter on 200 Ω range,Kestrel Moto Service Manual 900 series,3rd edition,7-12,,\r\n',
+        'orange/white (+) to ground,meter on 200 Ω range,Kestrel Moto Service Manual 900 series,3rd edition,7-12,,,,,\r\n',
     );
   });
 });

@@ -15,6 +15,9 @@ const VALUES: SpecValues = {
   nominal: 3.2,
   max: 3.5,
   unit: 'Ω',
+  mode: null,
+  nearLimit: null,
+  engineRpm: null,
   refTempC: 20,
   material: 'copper',
   testPoints: 'orange/white to ground',
@@ -35,14 +38,15 @@ describe('SPEC_FIELDS', () => {
 
   it('derives the history order the revision diffs have always used', () => {
     expect(SNAPSHOT_FIELDS).toEqual([
-      'parameter', 'min', 'nominal', 'max', 'unit', 'refTempC', 'material', 'testPoints',
-      'conditions', 'notes', 'sourceTitle', 'sourceEdition', 'sourcePage', 'status',
+      'parameter', 'min', 'nominal', 'max', 'unit', 'mode', 'nearLimit', 'engineRpm', 'refTempC', 'material',
+      'testPoints', 'conditions', 'notes', 'sourceTitle', 'sourceEdition', 'sourcePage', 'status',
     ]); // prettier-ignore
   });
 
   it('derives the editable, imported and reviewed subsets', () => {
     expect(EDITABLE_FIELDS).toEqual([
-      'parameter', 'min', 'nominal', 'max', 'unit', 'refTempC', 'material', 'testPoints', 'conditions', 'notes', 'status',
+      'parameter', 'min', 'nominal', 'max', 'unit', 'mode', 'nearLimit', 'engineRpm', 'refTempC', 'material',
+      'testPoints', 'conditions', 'notes', 'status',
     ]); // prettier-ignore
     expect(IMPORTED_FIELDS).not.toContain('parameter');
     expect(IMPORTED_FIELDS).not.toContain('status');
@@ -51,6 +55,9 @@ describe('SPEC_FIELDS', () => {
       'nominal',
       'max',
       'unit',
+      'mode',
+      'nearLimit',
+      'engineRpm',
       'refTempC',
       'material',
       'testPoints',

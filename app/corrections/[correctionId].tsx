@@ -8,7 +8,7 @@ import { ApiError } from '@/lib/api/client';
 import { describeError } from '@/lib/api/describe-error';
 import type { CorrectionDto } from '@/lib/contracts/corrections';
 import { useCorrectionQuery, useEditProposalMutation } from '@/lib/hooks/use-corrections';
-import { CANONICAL_UNITS, parseUnit, unitsOfKind, type CanonicalUnit } from '@/lib/units';
+import { CANONICAL_UNITS, parseUnit, unitsOfKind } from '@/lib/units';
 
 const show = (v: number | null) => (v === null ? '' : String(v));
 
@@ -20,7 +20,7 @@ function fieldsOf(c: CorrectionDto): ProposalFields {
     nominal: show(c.proposed.nominal),
     max: show(c.proposed.max),
     refTempC: show(c.proposed.refTempC),
-    unit: (parseUnit(c.proposed.unit)?.unit ?? 'Ω') as CanonicalUnit,
+    unit: parseUnit(c.proposed.unit)?.unit ?? 'Ω',
     testPoints: c.proposed.testPoints ?? '',
     conditions: c.proposed.conditions ?? '',
     title: c.citation.title,

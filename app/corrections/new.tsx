@@ -10,7 +10,7 @@ import type { SpecDetailDto } from '@/lib/contracts/library';
 import { useProposeMutation } from '@/lib/hooks/use-corrections';
 import { useSpecQuery } from '@/lib/hooks/use-library';
 import { useSession } from '@/lib/session/session-provider';
-import { CANONICAL_UNITS, unitsOfKind, type CanonicalUnit } from '@/lib/units';
+import { CANONICAL_UNITS, unitsOfKind } from '@/lib/units';
 
 const show = (v: number | null) => (v === null ? '' : String(v));
 
@@ -37,7 +37,7 @@ function initialFor(spec: SpecDetailDto, missing: string | undefined): ProposalF
   };
   return {
     ...(missing ? blank : fromSpec),
-    unit: spec.unit as CanonicalUnit,
+    unit: spec.unit,
     title: '',
     edition: '',
     page: '',

@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { citationText } from '@/lib/format/citation';
 import { StyleSheet, View } from 'react-native';
 import type { CorrectionDto } from '@/lib/contracts/corrections';
 import { formatRange, parseUnit } from '@/lib/units';
@@ -51,8 +52,7 @@ export function CorrectionCard({ c, showProposer = false, children }: Correction
         Proposed: <Text variant="label">{proposedRange(c)}</Text>
       </Text>
       <Text variant="small" color="textMuted">
-        Source: {c.citation.title}
-        {c.citation.edition ? `, ${c.citation.edition}` : ''}, p. {c.citation.page}
+        Source: {citationText(c.citation, c.citation.page)}
       </Text>
       <Text variant="small">“{c.rationale}”</Text>
       {c.decisionNote ? (

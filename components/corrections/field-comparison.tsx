@@ -1,20 +1,11 @@
 import { StyleSheet, View } from 'react-native';
 import type { CorrectionReviewDto } from '@/lib/contracts/corrections';
+import { FIELD_LABEL } from '@/lib/contracts/spec-fields';
 import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from '../ui/text';
 
-const LABEL: Record<string, string> = {
-  min: 'Minimum',
-  nominal: 'Nominal',
-  max: 'Maximum',
-  unit: 'Unit',
-  refTempC: 'Reference °C',
-  material: 'Winding',
-  testPoints: 'Test points',
-  conditions: 'Conditions',
-  source: 'Source',
-};
+const LABEL = FIELD_LABEL;
 const show = (v: unknown) => (v === null || v === undefined || v === '' ? '—' : String(v));
 
 /** Field by field: the values when proposed (if they changed since), now, and as proposed. */

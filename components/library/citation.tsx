@@ -1,5 +1,6 @@
 import { Linking, Pressable } from 'react-native';
 import type { SpecDetailDto } from '@/lib/contracts/library';
+import { sourceName } from '@/lib/format/citation';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 
@@ -12,8 +13,7 @@ export function Citation({ spec }: { spec: SpecDetailDto }) {
       {s ? (
         <>
           <Text>
-            {s.title}
-            {s.edition ? `, ${s.edition}` : ''}
+            {sourceName(s)}
             {s.year ? ` (${s.year})` : ''}
           </Text>
           {spec.sourcePage ? <Text color="textMuted">Page {spec.sourcePage}</Text> : null}

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import type { SpecDetailDto } from '@/lib/contracts/library';
-import { formatQuantity, type CanonicalUnit } from '@/lib/units';
+import { formatQuantity } from '@/lib/units';
 import { Spacing } from '@/lib/theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
@@ -9,7 +9,7 @@ const LABELS = { min: 'Minimum', nominal: 'Nominal', max: 'Maximum' } as const;
 
 /** The limits, the conditions and the test points of one spec. */
 export function SpecValues({ spec }: { spec: SpecDetailDto }) {
-  const unit = spec.unit as CanonicalUnit;
+  const unit = spec.unit;
   const limits = (['min', 'nominal', 'max'] as const).filter((k) => spec[k] !== null);
   return (
     <Card testID="spec-values">

@@ -2,9 +2,23 @@
 import { z } from 'zod';
 import { ROLES, type Role } from './enums';
 
+// Spaces a browser, a paste or a phone keyboard can leave around an address: every Unicode space
+// and line break (\s covers NBSP, U+3000 and the BOM) plus the zero-width ones \s leaves out.
+const EDGE_SPACE = /^[\s\u200B-\u200D\u2060]+|[\s\u200B-\u200D\u2060]+$/g;
+
+/**
+ * The one form of an e-mail address: what is stored, compared, looked up and used as a
+ * rate-limit key. NFKC first (full-width letters become ASCII, U+3000 a plain space), then
+ * the edges trimmed, then lower-cased, so "Ｔech@Shop.example\u00A0" and "tech@shop.example"
+ * are one address with one sign-in budget.
+ */
+export function normalizeEmail(raw: string): string {
+  return raw.normalize('NFKC').replace(EDGE_SPACE, '').toLowerCase();
+}
+
 export const Email = z
   .string({ error: 'E-mail is required' })
-  .trim()
+  .overwrite(normalizeEmail)
   .min(3)
   .max(254)
   .email('Enter a valid e-mail address');

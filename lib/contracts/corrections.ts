@@ -4,9 +4,11 @@
  * must fit the parameter, so a gap proposed in ohms is refused.
  */
 import { z } from 'zod';
-import { parseUnit } from '../units';
-import { specValueIssues } from './curation';
-import { CORRECTION_STATUSES, type CorrectionKind, type CorrectionStatus } from './enums';
+import { specValueIssues, valueSchema, withCreateDefault } from './curation';
+import { REVIEWED_FIELDS, fieldsWith, hasFlag, type SpecValues } from './spec-fields';
+import { CORRECTION_STATUSES, type CorrectionKind, type CorrectionStatus, type Material } from './enums';
+
+type ReviewedField = (typeof REVIEWED_FIELDS)[number] & keyof SpecValues;
 
 const line = (label: string, max: number) =>
   z
@@ -23,24 +25,25 @@ const para = (label: string, max: number) =>
       (s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(s),
       `${label} contains an invisible control character`,
     );
-const limit = z.number({ error: 'must be a number or null' }).finite().nullable().default(null);
+const REVIEWED_DEFS = fieldsWith('reviewed');
 
+/**
+ * The values a proposal may change: the reviewed fields of the spec field list, checked by
+ * the editors' own schemas (a unit is stored as its canonical symbol). Left out: null
+ * numbers, empty text; the material is decided from the parameter when absent, and a field
+ * added later (csvOptional: mode, near-limit band, engine speed) keeps the spec's value.
+ */
 export const ProposedValues = z
-  .object({
-    min: limit,
-    nominal: limit,
-    max: limit,
-    unit: z
-      .string({ error: 'unit is required' })
-      .trim()
-      .min(1, 'unit is required')
-      .max(12)
-      .refine((u) => parseUnit(u) !== null, 'unit is not recognised; use Ω, kΩ, MΩ, V, mV, A, mA, mm, in or thou'),
-    refTempC: z.number().min(-40).max(200).nullable().default(null),
-    material: z.enum(['copper', 'none']).optional(),
-    testPoints: para('test points', 1000).default(''),
-    conditions: para('conditions', 1000).default(''),
-  })
+  .object(
+    Object.fromEntries(
+      REVIEWED_DEFS.map((f) => [
+        f.key,
+        f.key === 'material' || hasFlag(f, 'csvOptional') ? valueSchema(f).optional() : withCreateDefault(f),
+      ]),
+    ) as unknown as {
+      [K in ReviewedField]: z.ZodType<K extends 'material' ? Material | undefined : SpecValues[K], unknown>;
+    },
+  )
   .strict();
 export type ProposedValues = z.infer<typeof ProposedValues>;
 

@@ -10,7 +10,14 @@ import { parseUnit, type CanonicalUnit } from '../units';
 import { expectedKind } from '../specs/classify';
 import type { RevisionOrigin } from './enums';
 import type { SpecDetailDto } from './library';
-import type { SpecSnapshot } from './spec-fields';
+import {
+  fieldsWith,
+  type EditableField,
+  type SpecField,
+  type FieldRule,
+  type SpecSnapshot,
+  type SpecValues,
+} from './spec-fields';
 
 const CONTROL_CHARS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 
@@ -24,7 +31,6 @@ const text = (label: string, max: number, multiline = false) =>
     .refine((s) => multiline || !/[\r\n]/.test(s), `${label} must fit on one line`);
 const required = (label: string, max: number) => text(label, max).refine((s) => s.length > 0, `${label} is required`);
 
-const limit = (label: string) => z.number({ error: `${label} must be a number or null` }).nullable();
 const year = (label: string) =>
   z
     .number({ error: `${label} must be a year` })
@@ -67,24 +73,33 @@ export const SourceInput = z.object({
 });
 export type SourceInput = z.infer<typeof SourceInput>;
 
-/** The values of a spec an editor may set, every one optional (PATCH). */
+/** A listed field's request schema, from its kind and rule (lib/contracts/spec-fields.ts). */
+export function valueSchema(f: SpecField) {
+  const { maxLength = 0, multiline = false, range, values = [] } = f.rule as FieldRule;
+  if (f.kind === 'unit') return unit;
+  if (f.kind === 'text')
+    return f.nullable ? text(f.label.toLowerCase(), maxLength, multiline) : required(f.label.toLowerCase(), maxLength);
+  if (f.kind === 'enum') {
+    const choice = z.enum(values as [string, ...string[]], { error: `${f.key} must be ${values.join(' or ')}` });
+    return f.nullable ? choice.nullable() : choice;
+  }
+  let n = z.number({ error: `${f.key} must be a number or null` });
+  if (range) {
+    const [lo, hi, what] = range;
+    n = n.min(lo, `${f.key} must be ${lo}${what} or more`).max(hi, `${f.key} must be ${hi}${what} or less`);
+  }
+  return n.nullable();
+}
+
+const EDITABLE_DEFS = fieldsWith('editable');
+
+/** The schema of each editable field; the types come from SpecValues. */
+type ValueSchemas = { [K in EditableField]: z.ZodType<K extends 'unit' ? CanonicalUnit : SpecValues[K], unknown> };
+
+/** The values of a spec an editor may set, every one optional (PATCH), and the citation. */
 const valueFields = {
-  parameter: required('parameter', 120),
-  min: limit('min'),
-  nominal: limit('nominal'),
-  max: limit('max'),
-  unit,
-  refTempC: z
-    .number({ error: 'refTempC must be a number or null' })
-    .min(-40, 'refTempC must be −40 °C or warmer')
-    .max(200, 'refTempC must be 200 °C or colder')
-    .nullable(),
-  material: z.enum(['copper', 'none'], { error: 'material must be copper or none' }),
-  testPoints: text('test points', 1000, true),
-  conditions: text('conditions', 1000, true),
-  notes: text('notes', 1000, true),
+  ...(Object.fromEntries(EDITABLE_DEFS.map((f) => [f.key, valueSchema(f)])) as unknown as ValueSchemas),
   source: SourceInput,
-  status: z.enum(['published', 'draft'], { error: 'status must be published or draft' }),
 };
 
 export type SpecValueIssue = { path: string; message: string };
@@ -134,6 +149,24 @@ const addIssues = (values: CheckedValues, ctx: z.RefinementCtx) => {
   for (const i of specValueIssues(values)) ctx.addIssue({ code: 'custom', path: [i.path], message: i.message });
 };
 
+/**
+ * A field left out of a new spec's body (or a proposal): null numbers and modes, empty text,
+ * the database's default choice; a field with neither stays required.
+ */
+export function withCreateDefault(f: SpecField): z.ZodType {
+  const schema = valueSchema(f) as z.ZodType;
+  if (f.kind === 'number' || (f.kind === 'enum' && f.nullable)) return schema.default(null);
+  if (f.kind === 'text' && f.nullable) return schema.default('');
+  if (f.dbDefault !== null) return schema.default(f.dbDefault);
+  return schema;
+}
+
+function createDefaults() {
+  return Object.fromEntries(EDITABLE_DEFS.map((f) => [f.key, withCreateDefault(f)])) as {
+    [K in EditableField]: z.ZodDefault<ValueSchemas[K]>;
+  };
+}
+
 /** POST /api/specs: a new spec; make, model, component and source are found or created by natural key. */
 export const CreateSpecBody = z
   .object({
@@ -144,16 +177,9 @@ export const CreateSpecBody = z
     variant: text('variant', 120).default(''),
     component: required('component', 120),
     ...valueFields,
-    min: valueFields.min.default(null),
-    nominal: valueFields.nominal.default(null),
-    max: valueFields.max.default(null),
-    refTempC: valueFields.refTempC.default(null),
+    ...createDefaults(),
     /** Absent: copper for winding and coil resistances, none otherwise (as the CSV importer decides). */
     material: valueFields.material.optional(),
-    testPoints: valueFields.testPoints.default(''),
-    conditions: valueFields.conditions.default(''),
-    notes: valueFields.notes.default(''),
-    status: valueFields.status.default('published'),
     reason: Reason.default('Created in the spec editor'),
   })
   .strict()

@@ -13,6 +13,33 @@ export const QUANTITY_KINDS = ['resistance', 'voltage', 'current', 'length'] as 
 export const MATERIALS = ['copper', 'none'] as const;
 export type Material = (typeof MATERIALS)[number];
 
+/**
+ * The meter mode a check is made in. Charging and ignition checks are not all DC: stator
+ * output is AC volts at an engine speed, ignition primary output is a peak voltage through a
+ * peak-reading adapter, a diode is checked on the meter's diode range.
+ */
+export const MEASUREMENT_MODES = [
+  'dc_voltage',
+  'ac_voltage',
+  'peak_voltage',
+  'resistance',
+  'diode_forward',
+  'continuity',
+  'current',
+] as const;
+export type MeasurementMode = (typeof MEASUREMENT_MODES)[number];
+
+/** How the meter is set for each mode, as the first instruction of a check reads it. */
+export const MEASUREMENT_MODE_LABEL: Readonly<Record<MeasurementMode, string>> = {
+  dc_voltage: 'DC volts',
+  ac_voltage: 'AC volts (rms)',
+  peak_voltage: 'Peak volts (peak-reading adapter)',
+  resistance: 'Resistance (Ω)',
+  diode_forward: 'Diode range (forward voltage)',
+  continuity: 'Continuity (beep)',
+  current: 'Current (amps)',
+};
+
 export const SPEC_STATUSES = ['published', 'draft'] as const;
 export type SpecStatus = (typeof SPEC_STATUSES)[number];
 

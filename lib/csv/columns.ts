@@ -24,11 +24,16 @@ const IDENTITY_FIELD: Record<IdentityColumn, keyof IdentityRow> = {
   component: 'component',
 };
 
-/** The spec fields the CSV format carries (lib/contracts/spec-fields.ts), in column order. */
-export const CSV_FIELDS = [
-  ...SPEC_FIELDS.filter((f) => f.csv !== null && !hasFlag(f, 'csvLast')),
-  ...SPEC_FIELDS.filter((f) => f.csv !== null && hasFlag(f, 'csvLast')),
-] as Extract<SpecField, { csv: string }>[];
+/**
+ * The spec fields the CSV format carries (lib/contracts/spec-fields.ts), in column order:
+ * the original columns, then the ones added later (csvOptional, so files and sheets made
+ * before them keep their columns where they were), then the free text that closes a record.
+ */
+const csvRank = (f: SpecField) => (hasFlag(f, 'csvLast') ? 2 : hasFlag(f, 'csvOptional') ? 1 : 0);
+export const CSV_FIELDS = SPEC_FIELDS.filter((f) => f.csv !== null)
+  .map((f, i) => ({ f, i }))
+  .sort((a, b) => csvRank(a.f) - csvRank(b.f) || a.i - b.i)
+  .map(({ f }) => f) as Extract<SpecField, { csv: string }>[];
 type CsvField = (typeof CSV_FIELDS)[number];
 
 export type SpecCsvColumn = IdentityColumn | CsvField['csv'];
@@ -54,11 +59,15 @@ export const NUMERIC_COLUMNS: readonly SpecCsvColumn[] = [
 /** The columns that make up a row's natural key (the identity used to match re-imports). */
 export const KEY_COLUMNS: readonly SpecCsvColumn[] = [...IDENTITY_COLUMNS, 'parameter'];
 
-type CellOf<F extends CsvField> = F['kind'] extends 'text'
+type PresentCell<F extends CsvField> = F['kind'] extends 'text'
   ? 'csvEmptyIsNull' extends F['flags'][number]
     ? string | null
     : string
   : (SpecSnapshot & { sourceUrl: string | null })[F['key']];
+/** A column added later may be missing from a file: undefined (the spec keeps its value). */
+type CellOf<F extends CsvField> = 'csvOptional' extends F['flags'][number]
+  ? PresentCell<F> | undefined
+  : PresentCell<F>;
 
 /** One validated CSV row: the identity, then every field the format carries (text as '' when empty). */
 export type SpecCsvRow = IdentityRow & { [F in CsvField as F['key']]: CellOf<F> };
@@ -88,46 +97,5 @@ export const COLUMN_REFERENCE: ColumnInfo[] = [
   describe('year_to', 'Last model year covered; leave empty if still current. Not before year_from.', '2021'),
   describe('variant', 'Engine size, market or other variant; may be empty.', '898 cc, EU'),
   describe('component', 'The part being checked, up to 120 characters.', 'ignition coil (rear)'),
-  describe(
-    'parameter',
-    'What is measured, up to 120 characters. Known parameters are checked against the unit.',
-    'primary winding resistance',
-  ),
-  describe(
-    'min',
-    'Lowest acceptable value, a plain number with a dot as decimal separator. Give at least one of min, nominal or max.',
-    '2.9',
-  ),
-  describe('nominal', 'Nominal (rated) value; must lie between min and max when they are given.', '3.2'),
-  describe('max', 'Highest acceptable value; not below min.', '3.5'),
-  describe('unit', 'Unit of min / nominal / max: Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil).', 'Ω'),
-  describe('ref_temp_c', 'Temperature (°C, −40 to 200) the limits refer to; empty means 20 °C for windings.', '20'),
-  describe(
-    'material',
-    'Winding material: copper or none. Empty means copper for winding and coil resistances, none otherwise.',
-    'copper',
-  ),
-  describe('test_points', 'Where to put the meter probes, up to 1000 characters.', 'orange/white (+) to ground'),
-  describe(
-    'conditions',
-    'Meter range, engine temperature and other conditions, up to 1000 characters.',
-    'meter on 200 Ω range, engine cold (20 °C)',
-  ),
-  describe(
-    'source_title',
-    'Title of the document the values come from, up to 200 characters.',
-    'Kestrel Moto Service Manual 900 series',
-  ),
-  describe('source_edition', 'Edition or revision of the source, up to 200 characters.', '3rd edition'),
-  describe('source_page', 'Page or section in the source, up to 200 characters.', '7-12'),
-  describe(
-    'source_url',
-    'Link to the source, http:// or https://, up to 500 characters; may be empty.',
-    'https://manuals.specbench.example/kestrel/900',
-  ),
-  describe(
-    'notes',
-    'Anything else the technician should know, up to 1000 characters.',
-    'Disconnect the battery first.',
-  ),
+  ...CSV_FIELDS.map((f) => describe(f.csv, ...(f.help as [string, string]))),
 ];

@@ -1,6 +1,6 @@
 /**
  * Spec-table CSV import and export (DESIGN.md §5), shared by the browser and the server:
- * bytes → text (checkCsvBytes, decodeCsv) → records (parseSpecCsv) → rows
+ * bytes → text (checkCsvBytes, decodeCsv) → records (parseSpecCsvDetailed) → rows
  * (validateSpecRow / SpecCsvRowSchema) → file verdict (validateSpecCsv); and back out with
  * toSpecCsv. Pure TypeScript: no React, no Node I/O.
  */
@@ -15,7 +15,7 @@ export {
   type RowProblem,
 } from './columns';
 export { SpecCsvRowSchema, validateSpecRow } from './row-schema';
-export { parseSpecCsv, type ParsedCsv } from './parse';
+export { parseSpecCsvDetailed, type DetailedParse, type ParsedCsv } from './parse';
 export { checkCsvBytes, decodeCsv } from './encoding';
 export { naturalKey, validateSpecCsv, type ValidatedCsv } from './validate';
 export { neutraliseCell } from './injection';

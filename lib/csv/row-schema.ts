@@ -122,8 +122,27 @@ const url = z
     return s;
   });
 
-/** The cell schema of a spec field, from its kind and rule (lib/contracts/spec-fields.ts). */
+/**
+ * The cell schema of a spec field, from its kind and rule (lib/contracts/spec-fields.ts).
+ * A column added later (csvOptional) that the file lacks reads as undefined, so an import
+ * keeps the spec's value instead of clearing it (an empty cell still clears it).
+ */
 function cellSchema(f: (typeof CSV_FIELDS)[number]) {
+  const schema = presentCellSchema(f);
+  if (!hasFlag(f, 'csvOptional')) return schema;
+  return z
+    .unknown()
+    .optional()
+    .transform((v, ctx) => {
+      if (v === undefined) return undefined;
+      const read = schema.safeParse(v);
+      if (read.success) return read.data;
+      for (const i of read.error.issues) ctx.addIssue({ code: 'custom', message: i.message });
+      return null;
+    });
+}
+
+function presentCellSchema(f: (typeof CSV_FIELDS)[number]) {
   const { maxLength = 0, multiline = false, range, values = [] } = f.rule as FieldRule;
   if (f.sourceColumn === 'url') return url;
   if (f.kind === 'unit') return unit;

@@ -7,6 +7,6 @@ export type CitedSourceName = { title: string; edition?: string | null };
 /** "Title, edition", or "Title" alone. */
 export const sourceName = (s: CitedSourceName): string => (s.edition ? `${s.title}, ${s.edition}` : s.title);
 
-/** "Title, edition, p. 7-12"; a missing page reads as "p. " (the form an old record may have). */
+/** "Title, edition, p. 7-12"; without a page, "Title, edition". */
 export const citationText = (s: CitedSourceName, page: string | null | undefined): string =>
-  `${sourceName(s)}, p. ${page ?? ''}`;
+  page ? `${sourceName(s)}, p. ${page}` : sourceName(s);

@@ -8,6 +8,8 @@ import type { AccessRule } from './roles';
 
 export const ROUTE_RULES: Record<string, AccessRule> = {
   'GET /api/health': 'public',
+  'GET /api/health/ready': 'public',
+  'GET /api/health/live': 'public',
   'GET /api/search': 'public',
   'GET /api/models': 'public',
   'GET /api/models/:id': 'public',

@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import path from 'node:path';
 import { DataSource, type DataSourceOptions } from 'typeorm';
 import { config } from '../config';
+import { QueryTimeoutLogger } from './query-timeout';
 import { Make } from '../modules/library/make.entity';
 import { VehicleModel } from '../modules/library/vehicle-model.entity';
 import { Component } from '../modules/library/component.entity';
@@ -51,7 +52,11 @@ export function dataSourceOptions(database = config.DB_NAME): DataSourceOptions 
     entities: ENTITIES,
     // .ts under ts-jest and tsx, .js once compiled.
     migrations: [path.join(__dirname, 'migrations', '*.{ts,js}').replace(/\\/g, '/')],
-    extra: { connectionLimit: 20, connectTimeout: 5000 },
+    // Every query is bounded (see query-timeout.ts); so is opening a connection.
+    enableQueryTimeout: true,
+    maxQueryExecutionTime: config.DB_QUERY_TIMEOUT_MS,
+    logger: new QueryTimeoutLogger(),
+    extra: { connectionLimit: config.DB_POOL_SIZE, connectTimeout: 5000, enableKeepAlive: true },
   };
 }
 

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../errors/app-error';
+import { requestIdOf } from '../http/logging';
 
 const TITLES: Record<number, string> = {
   400: 'Bad request',
@@ -17,8 +18,12 @@ const TITLES: Record<number, string> = {
 
 type Problem = { status: number; code: string; detail: string; [key: string]: unknown };
 
+/** Seconds a client (or balancer) should wait before retrying a 503. */
+const RETRY_AFTER_S = 2;
+
 export function sendProblem(res: Parameters<RequestHandler>[1], problem: Problem) {
   const { status, code, detail, ...extras } = problem;
+  if (status === 503 && !res.getHeader('Retry-After')) res.setHeader('Retry-After', String(RETRY_AFTER_S));
   // Extras come first so they can never overwrite the standard members.
   res
     .status(status)
@@ -30,6 +35,7 @@ export function sendProblem(res: Parameters<RequestHandler>[1], problem: Problem
       status,
       detail,
       code,
+      requestId: requestIdOf(res),
     });
 }
 
@@ -45,19 +51,35 @@ const DB_DOWN = new Set([
   'ER_CON_COUNT_ERROR',
   'ECONNRESET',
   'EPIPE',
+  // A query that outlived DB_QUERY_TIMEOUT_MS (client side) or MAX_STATEMENT_TIME (server side).
+  'PROTOCOL_SEQUENCE_TIMEOUT',
 ]);
+/** MariaDB's ER_STATEMENT_TIMEOUT (mysql2 has no name for it). */
+const STATEMENT_TIMEOUT = 1969;
 function isDatabaseDown(err: unknown): boolean {
-  const e = err as { code?: string; driverError?: { code?: string }; message?: string };
+  const e = err as { code?: string; errno?: number; driverError?: { code?: string; errno?: number }; message?: string };
   const code = e?.code ?? e?.driverError?.code;
   return (
     (code !== undefined && DB_DOWN.has(code)) ||
+    (e?.errno ?? e?.driverError?.errno) === STATEMENT_TIMEOUT ||
     /Connection lost|connect ECONNREFUSED|Pool is closed/i.test(e?.message ?? '')
   );
 }
 
+/**
+ * InnoDB deadlocks and Galera certification failures (both error 1213) and lock-wait
+ * timeouts that no service turned into a 409: nothing was written, so the client may simply
+ * send it again (503 + Retry-After keeps an offline reading queued), never a 500.
+ */
+function isWriteConflict(err: unknown): boolean {
+  const e = err as { code?: string; driverError?: { code?: string } };
+  const code = e?.code ?? e?.driverError?.code;
+  return code === 'ER_LOCK_DEADLOCK' || code === 'ER_LOCK_WAIT_TIMEOUT';
+}
+
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof AppError) {
-    if (err.status >= 500) console.error(err);
+    if (err.status >= 500 && err.status !== 503) req.log?.error({ err }, err.message);
     return sendProblem(res, { status: err.status, code: err.code, detail: err.message, ...err.extras });
   }
   // body-parser and multer errors carry an HTTP status of their own.
@@ -72,14 +94,23 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     return sendProblem(res, { status, code, detail });
   }
   if (isDatabaseDown(err)) {
-    res.setHeader('Retry-After', '2');
+    req.log?.warn({ err }, 'database unavailable');
     return sendProblem(res, {
       status: 503,
       code: 'unavailable',
       detail: 'The database is not reachable right now. Try again in a moment.',
     });
   }
-  console.error(`${req.method} ${req.originalUrl} failed:`, err);
+  if (isWriteConflict(err)) {
+    req.log?.warn({ err }, 'write conflict');
+    return sendProblem(res, {
+      status: 503,
+      code: 'write_conflict',
+      detail: 'Another change reached the same records at the same moment, so nothing was saved. Send it again.',
+    });
+  }
+  if (req.log) req.log.error({ err }, `${req.method} ${req.path} failed`);
+  else console.error(`${req.method} ${req.originalUrl} failed:`, err);
   sendProblem(res, {
     status: 500,
     code: 'internal',

@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
-import { EditorGate } from '@/components/curation/editor-gate';
-import { SpecEditForm } from '@/components/curation/spec-edit-form';
-import { specToForm, type SpecFormValues } from '@/components/curation/spec-form-values';
-import { StaleEditView } from '@/components/curation/stale-edit-view';
+import { EditorGate } from '@/components/spec-editor/editor-gate';
+import { SpecEditForm } from '@/components/spec-editor/spec-edit-form';
+import { specToForm, type SpecFormValues } from '@/components/spec-editor/spec-form-values';
+import { StaleEditView } from '@/components/spec-editor/stale-edit-view';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { ErrorState, LoadingState } from '@/components/ui/states';

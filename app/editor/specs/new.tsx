@@ -1,7 +1,7 @@
 import { Pressable } from 'react-native';
 import { Stack, useRouter } from 'expo-router';
-import { EditorGate } from '@/components/curation/editor-gate';
-import { SpecCreateForm } from '@/components/curation/spec-create-form';
+import { EditorGate } from '@/components/spec-editor/editor-gate';
+import { SpecCreateForm } from '@/components/spec-editor/spec-create-form';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { ApiError } from '@/lib/api/client';

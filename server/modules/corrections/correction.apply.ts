@@ -5,8 +5,9 @@
  */
 import type { EntityManager } from 'typeorm';
 import type { CreateSpecBody } from '@/lib/contracts/curation';
-import type { SpecValues } from '@/lib/contracts/spec-fields';
-import { parseUnit } from '@/lib/units';
+import { REVIEWED_FIELDS, fieldsWith, type SpecValues } from '@/lib/contracts/spec-fields';
+import type { Material } from '@/lib/contracts/enums';
+import { pickValues } from '@/lib/contracts/spec-snapshot';
 import { AppError } from '@/server/errors/app-error';
 import type { SignedInUser } from '@/server/auth/roles';
 import { VehicleModel } from '../library/vehicle-model.entity';
@@ -28,6 +29,19 @@ async function credit(m: EntityManager, c: Correction, editor: SignedInUser) {
   };
 }
 
+/** The reviewed fields of the list, as the proposal sets them (empty text is null; no material: the spec's, or from the parameter). */
+function proposedValues(c: Correction, spec: Spec | null) {
+  const p = c.proposed;
+  const out: Record<string, unknown> = {};
+  for (const f of fieldsWith('reviewed')) {
+    const v = p[f.key as keyof typeof p];
+    if (f.key === 'material') out.material = v ?? spec?.material;
+    else if (v === undefined) out[f.key] = spec ? spec[f.key] : null;
+    else out[f.key] = f.kind === 'text' && spec ? v || null : v;
+  }
+  return out as Pick<SpecValues, Exclude<(typeof REVIEWED_FIELDS)[number], 'material'>> & { material: Material };
+}
+
 async function applyChange(
   m: EntityManager,
   c: Correction,
@@ -47,21 +61,11 @@ async function applyChange(
     );
   }
   const { spec, source } = await lockSpec(m, current.id, current.version);
-  const p = c.proposed;
   const values: SpecValues = {
-    parameter: spec.parameter,
-    min: p.min,
-    nominal: p.nominal,
-    max: p.max,
-    unit: parseUnit(p.unit)!.unit,
-    refTempC: p.refTempC,
-    material: p.material ?? spec.material,
-    testPoints: p.testPoints || null,
-    conditions: p.conditions || null,
-    notes: spec.notes,
+    ...pickValues(spec),
+    ...proposedValues(c, spec),
     sourceId: await ensureSource(m, { ...c.citation }),
     sourcePage: c.citation.page,
-    status: spec.status,
   };
   checkValues(values);
   const { actor, reason, originRef } = await credit(m, c, editor);
@@ -86,14 +90,7 @@ async function applyNew(m: EntityManager, c: Correction, editor: SignedInUser): 
     variant: model.variant,
     component,
     parameter: p.parameter,
-    min: p.min,
-    nominal: p.nominal,
-    max: p.max,
-    unit: parseUnit(p.unit)!.unit,
-    refTempC: p.refTempC,
-    material: p.material,
-    testPoints: p.testPoints,
-    conditions: p.conditions,
+    ...proposedValues(c, null),
     notes: '',
     status: 'published',
     reason,

@@ -9,7 +9,7 @@ import { config } from '@/server/config';
 import { enqueue } from '../mail/mailer';
 import { User } from '../users/user.entity';
 import type { Correction } from './correction.entity';
-import { sourceName } from '@/lib/format/citation';
+import { citationText } from '@/lib/format/citation';
 
 export async function notifyEditors(m: EntityManager, c: Correction, proposerName: string, what: string) {
   const editors = await m
@@ -19,7 +19,7 @@ export async function notifyEditors(m: EntityManager, c: Correction, proposerNam
     await enqueue(m, {
       to: e.email,
       subject: `Correction #${c.id} to review: ${what}`.slice(0, 200),
-      text: `Hello ${e.displayName},\n\n${proposerName} proposed a correction to ${what}.\n\nRationale: ${c.rationale}\nSource: ${sourceName(c.citation)}, page ${c.citation.page}\n\nReview it: ${config.appUrl}/review/${c.id}\n`,
+      text: `Hello ${e.displayName},\n\n${proposerName} proposed a correction to ${what}.\n\nRationale: ${c.rationale}\nSource: ${citationText(c.citation, c.citation.page)}\n\nReview it: ${config.appUrl}/review/${c.id}\n`,
     });
   }
 }

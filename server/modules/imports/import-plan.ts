@@ -40,7 +40,7 @@ function compared(valueOf: (key: ComparedKey) => string | number | null, source:
 
 /** The spec fields a CSV row sets, in the form both sides are compared in. */
 export function rowFields(row: SpecCsvRow): Comparable {
-  const emptyAsNull = (v: string | number | null) => (v === '' ? null : v);
+  const emptyAsNull = (v: string | number | null | undefined) => (v === '' || v === undefined ? null : v);
   return compared((key) => emptyAsNull(row[key]), sourceKey({ title: row.sourceTitle, edition: row.sourceEdition }));
 }
 
@@ -106,14 +106,24 @@ function readable(change: FieldChange, spec: ExistingSpec, row: SpecCsvRow): Fie
   };
 }
 
+/** The fields of columns added later (csvOptional): a file without the column keeps the spec's value. */
+const UNSTATED_KEPT = SPEC_COMPARED.filter((f) => hasFlag(f, 'csvOptional')).map((f) => f.key as ComparedKey);
+
+function keepUnstated(row: SpecCsvRow, spec: ExistingSpec): SpecCsvRow {
+  const kept: Record<string, unknown> = {};
+  for (const key of UNSTATED_KEPT) if (row[key as keyof SpecCsvRow] === undefined) kept[key] = spec[key];
+  return { ...row, ...kept } as SpecCsvRow;
+}
+
 export async function planImport(m: EntityManager, rows: { line: number; row: SpecCsvRow }[]): Promise<PlannedRow[]> {
   const existing = await loadExisting(
     m,
     rows.map((r) => r.row),
   );
-  return rows.map(({ line, row }) => {
-    const spec = existing.get(specRowKey(row));
-    if (!spec) return { line, row, action: 'create', specId: null, baseVersion: null, changes: [] };
+  return rows.map(({ line, row: stated }) => {
+    const spec = existing.get(specRowKey(stated));
+    if (!spec) return { line, row: stated, action: 'create', specId: null, baseVersion: null, changes: [] };
+    const row = keepUnstated(stated, spec);
     const changes = diffFields(specFields(spec), rowFields(row)).map((c) => readable(c, spec, row));
     return {
       line,

@@ -83,6 +83,7 @@ function keyCells(p: PlannedRow, n: Numbering): Cell[] {
 /** A field's staged cell: trimmed text, empty optional spec text as null (as the spec stores it). */
 function valueCell(f: (typeof STAGED_FIELDS)[number], row: SpecCsvRow): Cell {
   const v = row[f.key];
+  if (v === undefined) return null;
   if (typeof v !== 'string') return v;
   const nullable = f.column !== null && !hasFlag(f, 'required');
   return nullable ? v || null : v.trim();

@@ -1,16 +1,15 @@
-import path from 'node:path';
 import { Router } from 'express';
 import { COLUMN_REFERENCE } from '@/lib/csv';
 import { IdParams } from '@/lib/contracts/library';
 import { ImportCommitBody, ImportListQuery, ImportPreviewQuery } from '@/lib/contracts/imports';
-import { config } from '@/server/config';
 import { route } from '@/server/http/handler';
 import { requireJson } from '@/server/middleware/require-json';
 import { commitImport, getImportPreview, listImports, previewImport } from './import.service';
 import { uploadCsv, uploadedFile } from './import-upload';
+import { templateCsv } from './import-template';
 
 const template = route({}, ({ res }) => {
-  res.attachment('spec-template.csv').sendFile(path.join(config.rootDir, 'data', 'spec-template.csv'));
+  res.attachment('spec-template.csv').type('text/csv; charset=utf-8').send(templateCsv());
 });
 const upload = route({ query: ImportPreviewQuery, use: [uploadCsv], created: true }, ({ query, actor, req }) =>
   previewImport(uploadedFile(req), actor, query),

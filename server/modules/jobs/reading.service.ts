@@ -12,6 +12,7 @@ import type { SignedInUser } from '@/server/auth/roles';
 import { judge, toVerdictInput } from '../verdicts/verdict.service';
 import type { Job } from './job.entity';
 import { ownJobOr404 } from './job-access';
+import { citationText } from '@/lib/format/citation';
 import { toReadingDto } from './job.mapper';
 import { JobRepository, ReadingRepository, specForReading } from './job.repository';
 
@@ -20,9 +21,7 @@ export type AddedReading = { reading: ReadingDto; created: boolean };
 async function describeSpec(m: EntityManager, specId: number) {
   const spec = await specForReading(m, specId);
   if (!spec) throw AppError.notFound('spec', specId);
-  const citation = spec.source
-    ? `${spec.source.title}${spec.source.edition ? `, ${spec.source.edition}` : ''}${spec.sourcePage ? `, p. ${spec.sourcePage}` : ''}`
-    : null;
+  const citation = spec.source ? citationText(spec.source, spec.sourcePage) : null;
   return { label: spec.parameter, componentName: spec.component.name, citation };
 }
 

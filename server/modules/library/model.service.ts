@@ -1,7 +1,8 @@
 /** Reading the library by model: the list of models and one model's spec sheet. */
 import type { ModelDetailDto, ModelSummaryDto, ModelsQuery } from '@/lib/contracts/library';
 import { AppError } from '@/server/errors/app-error';
-import { toComponent, toModelRef, toSpecSummary } from '../specs/spec.mapper';
+import { toSpecSummary } from '../specs/spec.mapper';
+import { toComponent, toModelRef } from './library.mapper';
 import { foldKey } from './keys';
 import { ComponentRepository, ModelRepository } from './library.repository';
 

@@ -13,10 +13,11 @@ import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
 import { foldKey } from '../library/keys';
-import { Source } from '../library/source.entity';
+import { recordSpecChange } from '../library/library-changes';
+import type { Source } from '../library/source.entity';
 import { Spec } from './spec.entity';
+import { RevisionRepository, SourceRepository, SpecRepository } from './spec.repository';
 import type { RevisionOrigin } from '@/lib/contracts/enums';
-import { SpecRevision } from './spec-revision.entity';
 import { getSpec } from './spec.service';
 
 /** Thrown inside a transaction; becomes 409 with the current spec once it has rolled back. */
@@ -47,7 +48,7 @@ export async function lockSpec(
   id: number,
   version: number,
 ): Promise<{ spec: Spec; source: Source | null }> {
-  const spec = await m.getRepository(Spec).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+  const spec = await m.withRepository(SpecRepository).lockById(id);
   if (!spec) throw AppError.notFound('spec', id);
   if (spec.version !== version) {
     throw new StaleSpec(
@@ -55,7 +56,7 @@ export async function lockSpec(
       `Spec ${id} has changed since version ${version} (it is now at version ${spec.version}). Nothing was saved; review the current values and apply your change again.`,
     );
   }
-  const source = spec.sourceId === null ? null : await m.getRepository(Source).findOneBy({ id: spec.sourceId });
+  const source = await m.withRepository(SourceRepository).findCited(spec.sourceId);
   return { spec, source };
 }
 
@@ -68,7 +69,7 @@ export function checkValues(values: SpecValues) {
 async function checkParameterFree(m: EntityManager, spec: Spec, parameter: string) {
   const key = foldKey(parameter);
   if (key === spec.parameterKey) return;
-  const other = await m.getRepository(Spec).findOneBy({ componentId: spec.componentId, parameterKey: key });
+  const other = await m.withRepository(SpecRepository).findByParameterKey(spec.componentId, key);
   if (other)
     throw AppError.conflict(`This component already has a spec for '${other.parameter}' (spec ${other.id}).`, {
       specId: other.id,
@@ -89,11 +90,7 @@ export async function writeSpecChange(
 ): Promise<boolean> {
   const { values } = change;
   const nextSource =
-    values.sourceId === source?.id
-      ? source
-      : values.sourceId === null
-        ? null
-        : await m.getRepository(Source).findOneBy({ id: values.sourceId });
+    values.sourceId === source?.id ? source : await m.withRepository(SourceRepository).findCited(values.sourceId);
   const after = snapshotOfSpec(values, nextSource);
   const changes = diffSnapshots(snapshotOfSpec(spec, source), after);
   if (changes.length === 0) return false;
@@ -107,16 +104,16 @@ export async function writeSpecChange(
     .execute();
   if (result.affected !== 1)
     throw new StaleSpec(spec.id, `Spec ${spec.id} changed while this edit was being saved. Nothing was saved.`);
-  await m.getRepository(SpecRevision).insert({
+  await m.withRepository(RevisionRepository).append({
     specId: spec.id,
     version: spec.version + 1,
     snapshot: after,
     changedFields: changes.map((c) => c.field),
-    authorId: change.actor.id,
-    authorName: change.actor.name,
+    actor: change.actor,
     reason: change.reason,
     origin: change.origin,
     originRef: change.originRef,
   });
+  await recordSpecChange(m, spec.id);
   return true;
 }

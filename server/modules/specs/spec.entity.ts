@@ -9,20 +9,23 @@ import {
   UpdateDateColumn,
   VersionColumn,
 } from 'typeorm';
-import {
-  MATERIALS,
-  QUANTITY_KINDS,
-  SPEC_STATUSES,
-  type CanonicalUnit,
-  type Material,
-  type QuantityKind,
-  type SpecStatus,
-} from '@/lib/contracts/enums';
+import type { ColumnOptions } from 'typeorm';
+import { QUANTITY_KINDS, type QuantityKind } from '@/lib/contracts/enums';
+import { COLUMN_FIELDS, type SpecValues } from '@/lib/contracts/spec-fields';
 import type { Component } from '../library/component.entity';
 import type { Source } from '../library/source.entity';
 
+/**
+ * A spec's value columns (parameter … status) come from the one field list: the class
+ * declares the keys, ids and bookkeeping, and the loop below the class gives each listed
+ * field its column (type from the field's kind and rule). `SpecValues` types them.
+ */
+// eslint-disable-next-line @typescript-eslint/no-unsafe-declaration-merging, @typescript-eslint/no-empty-object-type -- the columns below are typed by SpecValues
+export interface Spec extends Omit<SpecValues, 'sourceId'> {}
+
 @Entity({ name: 'specs' })
 @Index('uq_specs_component_parameter', ['componentId', 'parameterKey'], { unique: true })
+// eslint-disable-next-line @typescript-eslint/no-unsafe-declaration-merging -- see the interface above
 export class Spec {
   @PrimaryGeneratedColumn({ type: 'int' })
   id: number;
@@ -34,41 +37,11 @@ export class Spec {
   @JoinColumn({ name: 'component_id' })
   component: Component;
 
-  @Column({ type: 'varchar', length: 120 })
-  parameter: string;
-
   @Column({ name: 'parameter_key', type: 'varchar', length: 120 })
   parameterKey: string;
 
   @Column({ name: 'quantity_kind', type: 'enum', enum: QUANTITY_KINDS })
   quantityKind: QuantityKind;
-
-  @Column({ name: 'min_value', type: 'double', nullable: true })
-  min: number | null;
-
-  @Column({ name: 'nominal_value', type: 'double', nullable: true })
-  nominal: number | null;
-
-  @Column({ name: 'max_value', type: 'double', nullable: true })
-  max: number | null;
-
-  @Column({ type: 'varchar', length: 8 })
-  unit: CanonicalUnit;
-
-  @Column({ name: 'ref_temp_c', type: 'double', nullable: true })
-  refTempC: number | null;
-
-  @Column({ type: 'enum', enum: MATERIALS, default: 'none' })
-  material: Material;
-
-  @Column({ name: 'test_points', type: 'text', nullable: true })
-  testPoints: string | null;
-
-  @Column({ type: 'text', nullable: true })
-  conditions: string | null;
-
-  @Column({ type: 'text', nullable: true })
-  notes: string | null;
 
   @Index()
   @Column({ name: 'source_id', type: 'int', nullable: true })
@@ -77,12 +50,6 @@ export class Spec {
   @ManyToOne('Source', { onDelete: 'RESTRICT', nullable: true })
   @JoinColumn({ name: 'source_id' })
   source: Source | null;
-
-  @Column({ name: 'source_page', type: 'varchar', length: 200, nullable: true })
-  sourcePage: string | null;
-
-  @Column({ type: 'enum', enum: SPEC_STATUSES, default: 'published' })
-  status: SpecStatus;
 
   /** Optimistic lock: every write states the version it was based on. */
   @VersionColumn({ type: 'int' })
@@ -94,3 +61,21 @@ export class Spec {
   @UpdateDateColumn({ name: 'updated_at', type: 'datetime', precision: 3 })
   updatedAt: Date;
 }
+
+/** The column a listed field is stored in: its SQL type from the field's kind and rule. */
+export function specColumnOptions(f: (typeof COLUMN_FIELDS)[number]): ColumnOptions {
+  const base = { name: f.column, nullable: f.nullable };
+  const values = f.rule.values ?? [];
+  switch (f.kind) {
+    case 'number':
+      return { ...base, type: 'double' };
+    case 'unit':
+      return { ...base, type: 'varchar', length: 8 };
+    case 'enum':
+      return { ...base, type: 'enum', enum: [...values], ...(f.dbDefault ? { default: f.dbDefault } : {}) };
+    case 'text':
+      return f.rule.multiline ? { ...base, type: 'text' } : { ...base, type: 'varchar', length: f.rule.maxLength };
+  }
+}
+
+for (const f of COLUMN_FIELDS) Column(specColumnOptions(f))(Spec.prototype, f.key);

@@ -15,7 +15,7 @@ type KindOf<K extends EditableField> = Extract<(typeof SPEC_FIELDS)[number], { k
  * The form's value for a field: typed text, or for a choice one of its values ('' = decided
  * from the parameter, as the importer does: copper for windings).
  */
-type FormCell<K extends EditableField> = KindOf<K> extends 'enum' ? '' | SpecValues[K] : string;
+type FormCell<K extends EditableField> = KindOf<K> extends 'enum' ? '' | NonNullable<SpecValues[K]> : string;
 
 export type SpecFormValues = {
   make: string;
@@ -28,7 +28,12 @@ export type SpecFormValues = {
   reason: string;
 } & { [K in EditableField]: FormCell<K> };
 
+const EDITABLE = new Set<string>(EDITABLE_FIELDS);
+const NULLABLE = new Set<string>(SPEC_FIELDS.filter((f) => f.nullable).map((f) => f.key));
 const KIND = Object.fromEntries(SPEC_FIELDS.map((f) => [f.key, f.kind])) as Record<EditableField, string>;
+
+/** A new spec's form: every listed field empty (a choice undecided), except the unit (Ω) and the database's defaults. */
+const emptyCell = (f: (typeof SPEC_FIELDS)[number]) => (f.kind === 'unit' ? 'Ω' : (f.dbDefault ?? ''));
 
 export const EMPTY_SPEC_FORM: SpecFormValues = {
   make: '',
@@ -37,18 +42,10 @@ export const EMPTY_SPEC_FORM: SpecFormValues = {
   yearTo: '',
   variant: '',
   component: '',
-  parameter: '',
-  min: '',
-  nominal: '',
-  max: '',
-  unit: 'Ω',
-  refTempC: '',
-  material: '',
-  testPoints: '',
-  conditions: '',
-  notes: '',
+  ...(Object.fromEntries(
+    SPEC_FIELDS.filter((f) => EDITABLE.has(f.key)).map((f) => [f.key, f.key === 'material' ? '' : emptyCell(f)]),
+  ) as { [K in EditableField]: FormCell<K> }),
   source: { title: '', edition: '', page: '', url: '' },
-  status: 'published',
   reason: '',
 };
 
@@ -63,6 +60,13 @@ const show = (v: number | null) => (v === null ? '' : String(v));
 function bodyValue(f: EditableField, value: string): unknown {
   if (KIND[f] === 'number') return num(value);
   if (KIND[f] === 'enum') return value || undefined;
+  return value;
+}
+
+/** A changed cell as PATCH wants it: an emptied choice that may be empty is null (decided from the parameter). */
+function changedValue(f: EditableField, value: string): unknown {
+  if (KIND[f] === 'number') return num(value);
+  if (KIND[f] === 'enum' && value === '' && NULLABLE.has(f)) return null;
   return value;
 }
 
@@ -115,7 +119,7 @@ export function changedFields(base: SpecFormValues, v: SpecFormValues): Record<s
   const out: Record<string, unknown> = {};
   for (const f of EDITABLE_FIELDS) {
     if (same(base[f], v[f])) continue;
-    out[f] = KIND[f] === 'number' ? num(v[f]) : v[f];
+    out[f] = changedValue(f, v[f]);
   }
   if (sourceChanged(base.source, v.source)) out.source = { ...v.source, url: v.source.url.trim() || null };
   return out;

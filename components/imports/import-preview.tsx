@@ -4,7 +4,7 @@ import type { ImportPreviewDto } from '@/lib/contracts/imports';
 import { Spacing } from '@/lib/theme';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
-import { FieldChanges } from './field-changes';
+import { FieldChanges } from '../history/field-changes';
 import { ImportGroup } from './import-group';
 import { ImportRow, ProblemRow } from './import-row';
 

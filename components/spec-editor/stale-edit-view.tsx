@@ -5,7 +5,7 @@ import { useTheme } from '@/lib/theme/use-theme';
 import { Button } from '../ui/button';
 import { Caution } from '../ui/caution';
 import { Text } from '../ui/text';
-import { fieldLabel, showValue } from './field-labels';
+import { fieldLabel, showValue } from '../history/field-labels';
 import { EDITABLE_FIELDS, specToForm, type SpecFormValues } from './spec-form-values';
 
 export type StaleEditViewProps = {

@@ -5,6 +5,7 @@ import type { TextFieldProps } from '../ui/text-field';
 import { ChoiceRow } from '../ui/choice-row';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
+import type { EditableField, SpecField } from '@/lib/contracts/spec-fields';
 import type { SpecFormValues } from './spec-form-values';
 
 /** Any resolver output: the fields only read and write the typed text. */
@@ -17,8 +18,9 @@ const plain = (message: string | undefined) =>
     ?.replace(/^(yearFrom|yearTo|refTempC)\b/, (w) => WORDS[w])
     .replace(/\b(yearFrom|yearTo)\b/g, (w) => WORDS[w].toLowerCase());
 
-type ChoiceName = 'material' | 'status' | 'unit';
-type TextName = Exclude<Path<SpecFormValues>, 'source' | 'material' | 'status'>;
+/** The fields chosen from a list: the list's enums and the unit. */
+type ChoiceName = Extract<SpecField, { kind: 'enum' | 'unit'; key: EditableField }>['key'];
+type TextName = Exclude<Path<SpecFormValues>, 'source' | ChoiceName>;
 
 export type FormFieldProps = Omit<TextFieldProps, 'value' | 'onChangeText'> & { control: SpecControl; name: TextName };
 
