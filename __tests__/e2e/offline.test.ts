@@ -9,7 +9,7 @@ import { useTestDatabase } from '../helpers/test-db';
 import { e2eAccount, signInThroughApi } from '../helpers/e2e-accounts';
 import { expectHidden, expectText, expectVisible, step } from '../helpers/expect-visible';
 import { AppDataSource } from '@/server/db/data-source';
-import { signAccessToken } from '@/server/auth/tokens';
+import { bearerFor } from '../helpers/auth';
 import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
 import type { JobDetailDto } from '@/lib/contracts/jobs';
@@ -45,7 +45,7 @@ async function installed(page: Page) {
 async function api<T>(user: User, path: string, init: RequestInit = {}): Promise<T> {
   const res = await fetch(`${app.url}${path}`, {
     ...init,
-    headers: { Authorization: `Bearer ${signAccessToken(user)}`, 'Content-Type': 'application/json' },
+    headers: { ...(await bearerFor(user)), 'Content-Type': 'application/json' },
   });
   expect(res.ok).toBe(true);
   return (await res.json()) as T;
