@@ -112,7 +112,7 @@ build_web() {
   cd "$ROOT"
   local hash
   hash="$( { find app components lib assets -type f -print0 2>/dev/null || true; } | sort -z | xargs -0 -r sha1sum | \
-    cat - app.json babel.config.js metro.config.js package-lock.json | sha1sum | cut -c1-40)"
+    cat - app.json babel.config.js metro.config.js scripts/build-web.js package-lock.json | sha1sum | cut -c1-40)"
   if [ -f dist/index.html ] && [ "$(cat "$DATA_DIR/web-build.hash" 2>/dev/null)" = "$hash" ]; then
     log "web build is up to date"
     return 0
@@ -120,5 +120,7 @@ build_web() {
   log "building the web app (expo export)"
   CI=1 npx expo export --platform web --output-dir dist >"$DATA_DIR/web-build.log" 2>&1 || {
     tail -40 "$DATA_DIR/web-build.log" >&2; return 1; }
+  # Manifest, Workbox service worker and the .br/.gz twins the server sends.
+  node scripts/build-web.js dist >>"$DATA_DIR/web-build.log" 2>&1 || { tail -20 "$DATA_DIR/web-build.log" >&2; return 1; }
   echo "$hash" >"$DATA_DIR/web-build.hash"
 }

@@ -31,6 +31,7 @@ import { devMailboxRouter } from './modules/mail/dev-mailbox.router';
 import { planRouter } from './modules/plans/plan.router';
 import { runRouter } from './modules/plans/run.router';
 import { connectorRouter } from './modules/plans/connector.router';
+import { serveWeb } from './http/static';
 
 /** Every API router and where it is mounted under /api (the access test walks this list). */
 export function apiRouters(options: AppOptions = {}): [string, express.Router][] {
@@ -95,17 +96,4 @@ export function createApp(options: AppOptions = {}) {
   app.use(notFoundHandler);
   app.use(errorHandler);
   return app;
-}
-
-/** The exported single-page web app; every unknown path gets index.html (client-side routes). */
-function serveWeb(app: express.Express, webDist: string) {
-  app.use(express.static(webDist, { index: false, maxAge: '1h', setHeaders: noCacheHtml }));
-  app.get('/{*splat}', (_req, res) => {
-    res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(path.join(webDist, 'index.html'));
-  });
-}
-
-function noCacheHtml(res: express.Response, filePath: string) {
-  if (filePath.endsWith('.html')) res.setHeader('Cache-Control', 'no-cache');
 }

@@ -8,6 +8,7 @@ import type { VerdictBody } from '@/lib/contracts/verdicts';
 import type { PlanStep, RunResultBody } from '@/lib/contracts/plans';
 import { allowedOutcomes } from '@/lib/plans/validate';
 import { evaluateContinuity, evaluateDiode, type QualitativeResult } from '@/lib/verdict';
+import { citationText } from '@/lib/format/citation';
 import { AppError } from '@/server/errors/app-error';
 import { judge, toVerdictInput } from '../verdicts/verdict.service';
 import type { Reading } from '../jobs/reading.entity';
@@ -43,15 +44,15 @@ async function judgeMeasured(step: PlanStep, body: RunResultBody, parts: JobMode
   };
   const { input, specVersion } = await toVerdictInput(verdictBody);
   const r = judge(input);
-  const citation = found?.spec.source
-    ? `${found.spec.source.title}${found.spec.sourcePage ? `, p. ${found.spec.sourcePage}` : ''}`
-    : null;
+  const citation = found?.spec.source ? citationText(found.spec.source, found.spec.sourcePage) : null;
   return {
     outcome: r.verdict,
     verdict: r.verdict,
     reason: r.reason,
     reading: {
       specId: found?.spec.id ?? null,
+      // The run's own result row is the idempotency record (plan_run_results: run + key).
+      requestHash: null,
       specVersion: specVersion ?? null,
       label: found ? found.spec.parameter : step.title,
       componentName: found?.component.name ?? '',
@@ -107,6 +108,7 @@ export async function judgeStep(step: PlanStep, body: RunResultBody, parts: JobM
     reading: {
       specId: null,
       specVersion: null,
+      requestHash: null,
       label: step.title,
       componentName: step.testPoint.component ?? '',
       specLimits: { expected: check.expected, test: check.test },
