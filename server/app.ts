@@ -18,6 +18,7 @@ import { noStoreForPrivate } from './middleware/no-store';
 import { healthRouter } from './modules/health/health.router';
 import { modelRouter } from './modules/library/model.router';
 import { searchRouter } from './modules/search/search.router';
+import type { SearchEngine } from './modules/search/search-engine';
 import { specRouter } from './modules/specs/spec.router';
 import { importRouter } from './modules/imports/import.router';
 import { exportRouter } from './modules/exports/export.router';
@@ -27,14 +28,17 @@ import { userRouter } from './modules/users/user.router';
 import { jobRouter } from './modules/jobs/job.router';
 import { correctionRouter } from './modules/corrections/correction.router';
 import { devMailboxRouter } from './modules/mail/dev-mailbox.router';
+import { planRouter } from './modules/plans/plan.router';
+import { runRouter } from './modules/plans/run.router';
+import { connectorRouter } from './modules/plans/connector.router';
 
 /** Every API router and where it is mounted under /api (the access test walks this list). */
-export function apiRouters(): [string, express.Router][] {
+export function apiRouters(options: AppOptions = {}): [string, express.Router][] {
   return [
     ['/health', healthRouter],
     ['/auth', authRouter()],
     ['/users', userRouter],
-    ['/search', searchRouter],
+    ['/search', searchRouter(options.searchEngine)],
     ['/models', modelRouter],
     ['/specs', specRouter],
     ['/imports', importRouter],
@@ -42,10 +46,16 @@ export function apiRouters(): [string, express.Router][] {
     ['/verdicts', verdictRouter],
     ['/jobs', jobRouter],
     ['/corrections', correctionRouter()],
+    ['/plans', planRouter],
+    ['/jobs', runRouter],
+    ['/components', connectorRouter],
   ];
 }
 
-export function createApp(options: { webDist?: string | null } = {}) {
+/** `searchEngine`: a search index of its own, so one test can run two "server processes" side by side. */
+export type AppOptions = { webDist?: string | null; searchEngine?: SearchEngine };
+
+export function createApp(options: AppOptions = {}) {
   const app = express();
   app.use(requestLogger, measureRequests);
   app.disable('x-powered-by');
@@ -73,7 +83,7 @@ export function createApp(options: { webDist?: string | null } = {}) {
   api.use(noStoreForPrivate);
   api.use(methodNotAllowed(api));
   api.use(enforceRouteRules);
-  for (const [prefix, router] of apiRouters()) api.use(prefix, router);
+  for (const [prefix, router] of apiRouters(options)) api.use(prefix, router);
   api.use(notFoundHandler);
   app.use('/api', api);
   app.get('/metrics', metricsEndpoint);

@@ -9,6 +9,8 @@ import { lifecycle } from './http/lifecycle';
 import { logger } from './http/logging';
 import { fakeSmtp } from './modules/mail/fake-smtp';
 import { startOutboxWorker, stopOutboxWorker } from './modules/mail/mailer';
+import { startImportCleanup, stopImportCleanup } from './modules/imports/import-cleanup';
+import { searchEngine } from './modules/search/search.service';
 
 let server: Server | undefined;
 let stopping = false;
@@ -27,6 +29,7 @@ async function shutdown(code: number, why: string) {
     timeoutMs: config.SHUTDOWN_TIMEOUT_MS,
     stopWork: async () => {
       await stopOutboxWorker();
+      stopImportCleanup();
       await fakeSmtp.stop();
     },
     close: () => (AppDataSource.isInitialized ? AppDataSource.destroy() : Promise.resolve()),
@@ -59,6 +62,9 @@ async function main() {
     );
   }
   startOutboxWorker();
+  startImportCleanup();
+  // Build the search index now, not on the first search.
+  void searchEngine.rebuild().catch((err) => console.error('Search index build failed:', err));
   server = createApp().listen(config.PORT, config.HOST, () => {
     lifecycle.markReady();
     const where =

@@ -149,3 +149,19 @@ describe('other paths that take a spec id', () => {
     expect(theirs.fields.find((f: { field: string }) => f.field === 'max').current).toBe(7777.5);
   });
 });
+
+describe('a model whose only spec is a draft', () => {
+  it('is left out of the model list, so its make and model names stay private', async () => {
+    const draft = await createSpec('draft');
+    const card = await request(app).get(`/api/specs/${draft.id}`).set(editor).expect(200);
+    const listed = await request(app).get('/api/models').query({ make: card.body.model.make.name }).expect(200);
+    expect(listed.body).toEqual([]);
+    await request(app)
+      .patch(`/api/specs/${draft.id}`)
+      .set(editor)
+      .send({ version: card.body.version, reason: 'ready to publish', status: 'published' })
+      .expect(200);
+    const after = await request(app).get('/api/models').query({ make: card.body.model.make.name }).expect(200);
+    expect(after.body).toEqual([expect.objectContaining({ name: 'Vireo 250', specCount: 1 })]);
+  });
+});

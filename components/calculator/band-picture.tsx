@@ -87,8 +87,11 @@ export function BandPicture({ result }: { result: VerdictResult }) {
         </Svg>
       )}
       <Text variant="small" color="textMuted">
-        Green: inside the limits · amber: marginal zone
-        {result.expandedUncertainty !== null ? ' (limit ± U)' : ' (near-limit band)'} · red: outside
+        Green: inside the limits
+        {band.marginal.length
+          ? ` · amber: marginal zone${result.expandedUncertainty !== null ? ' (limit ± U)' : ' (near-limit band)'}`
+          : ''}{' '}
+        · red: outside
         {band.interval ? ' · bar: reading ± U (k = 2)' : ''}
       </Text>
     </View>

@@ -58,7 +58,10 @@ export type ReadingBody = z.infer<typeof ReadingBody>;
 
 export const IDEMPOTENCY_KEY = /^[A-Za-z0-9_.:-]{8,80}$/;
 
-export type ReadingDto = Omit<VerdictResponse, 'specVersion'> & {
+/** Readings keep the verdict's reason and steps; the plain words and shown value are the live answer's. */
+export type ReadingDto = Omit<VerdictResponse, 'specVersion' | 'explanation' | 'valueText'> & {
+  explanation?: string;
+  valueText?: string;
   id: number;
   jobId: number;
   label: string;

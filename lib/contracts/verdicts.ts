@@ -6,6 +6,7 @@
  */
 import { z } from 'zod';
 import type { VerdictStep } from '../verdict';
+import { MEASUREMENT_MODES } from './enums';
 
 /** Marks an issue as a value the request cannot have (422), not a malformed request (400). */
 export const UNPROCESSABLE = { status: 422 } as const;
@@ -29,6 +30,9 @@ const Percent = Num(0, 100);
 const Celsius = Num(-273.15, 1000);
 const UnitText = z.string({ error: 'unit is required' }).trim().min(1, 'unit is required').max(12);
 const QuantityBody = z.object({ value: Value, unit: UnitText }).strict();
+const Mode = z.enum(MEASUREMENT_MODES, { error: `mode must be one of ${MEASUREMENT_MODES.join(', ')}` });
+/** The reading, with the mode the meter was on (refused with 422 when it is not the spec's). */
+const ReadingQuantity = z.object({ value: Value, unit: UnitText, mode: Mode.optional() }).strict();
 
 export const SpecLimitsBody = z
   .object({
@@ -39,6 +43,10 @@ export const SpecLimitsBody = z
     refTempC: Celsius.optional(),
     material: z.enum(['copper', 'none']).optional(),
     nearLimitPct: Percent.optional(),
+    /** The near-limit band as an amount in the spec's unit. */
+    nearLimit: Num(0, 1e12).optional(),
+    mode: Mode.optional(),
+    engineRpm: Num(0, 30000).optional(),
   })
   .strict();
 
@@ -46,7 +54,7 @@ export const SpecLimitsBody = z
 export const VerdictFields = z.object({
   specId: z.number().int().positive().optional(),
   spec: SpecLimitsBody.optional(),
-  reading: QuantityBody,
+  reading: ReadingQuantity,
   leadResistance: QuantityBody.optional(),
   seriesResistance: z.object({ value: Value, unit: UnitText, tolerancePct: Percent.optional() }).strict().optional(),
   temperatureC: Celsius.optional(),
@@ -70,6 +78,10 @@ export type VerdictResponse = {
   expandedUncertainty: number | null;
   conformanceProbability: number | null;
   reason: string;
+  /** The verdict in plain workshop words, corrections first. */
+  explanation: string;
+  /** The value as shown, with the precision the reading carried ('88.40'). */
+  valueText: string;
   steps: VerdictStep[];
   zones: { lower?: number; upper?: number; nearBand?: number; interval?: [number, number] };
   /** The spec the reading was judged against, when given by id. */

@@ -18,6 +18,11 @@ import { OutboxMessage } from '../modules/mail/outbox-message.entity';
 import { Job } from '../modules/jobs/job.entity';
 import { Reading } from '../modules/jobs/reading.entity';
 import { Correction } from '../modules/corrections/correction.entity';
+import { Plan } from '../modules/plans/plan.entity';
+import { PlanRevision } from '../modules/plans/plan-revision.entity';
+import { PlanRun } from '../modules/plans/plan-run.entity';
+import { PlanRunResult } from '../modules/plans/plan-run-result.entity';
+import { ComponentConnector } from '../modules/plans/component-connector.entity';
 
 export const ENTITIES = [
   Make,
@@ -35,6 +40,11 @@ export const ENTITIES = [
   Job,
   Reading,
   Correction,
+  Plan,
+  PlanRevision,
+  PlanRun,
+  PlanRunResult,
+  ComponentConnector,
 ];
 
 export function dataSourceOptions(database = config.DB_NAME): DataSourceOptions {

@@ -1,6 +1,6 @@
 /**
- * The one factory of rate limiters: every limiter in the app comes from limiter(), so the
- * counters' store (in memory today) can be swapped for a shared one in this file alone.
+ * The one factory of rate limiters: every limiter in the app comes from limiter(), and all
+ * of them keep their counters in the store chosen here (MariaDB, shared by every replica).
  */
 import type { Request } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';

@@ -13,6 +13,7 @@ import { parseUnit } from '@/lib/units';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
 import { foldKey } from '../library/keys';
+import { recordSpecChange } from '../library/library-changes';
 import { markLibraryChanged } from '../search/search.service';
 import { Spec } from './spec.entity';
 import { RevisionRepository, SourceRepository, SpecRepository } from './spec.repository';
@@ -55,6 +56,7 @@ export async function insertNewSpec(
     origin: from.origin,
     originRef: from.originRef,
   });
+  await recordSpecChange(m, id);
   return id;
 }
 

@@ -13,6 +13,7 @@ import { isLockContention, writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
 import { foldKey } from '../library/keys';
+import { recordSpecChange } from '../library/library-changes';
 import type { Source } from '../library/source.entity';
 import { Spec } from './spec.entity';
 import { RevisionRepository, SourceRepository, SpecRepository } from './spec.repository';
@@ -112,5 +113,6 @@ export async function writeSpecChange(
     origin: change.origin,
     originRef: change.originRef,
   });
+  await recordSpecChange(m, spec.id);
   return true;
 }

@@ -6,6 +6,7 @@ import { RevisionRepository, SpecRepository } from './spec.repository';
 import { toRevision, toSpecSummary, specValuesOf } from './spec.mapper';
 import { toComponent, toModelRef, toSource } from '../library/library.mapper';
 import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
+import { libraryFollower } from '../library/library-follower';
 
 /**
  * Drafts are the editors' work in progress: to everyone below editor (and to anonymous
@@ -36,14 +37,18 @@ export async function getSpec(id: number): Promise<SpecDetailDto> {
 
 /**
  * Spec cards are read far more often than written: GET /api/specs/:id answers from a
- * small in-memory cache, dropped whenever the library changes in this process and
- * trusted for at most a few seconds (another server process may have written).
- * Writers use getSpec(), which always reads the database.
+ * small in-memory cache, dropped whenever the library changes in this process, entry by
+ * entry when library_changes names a spec written by any process (libraryFollower), and
+ * trusted for at most a few seconds in any case. Writers use getSpec(), which always
+ * reads the database.
  */
 const CACHE_TTL_MS = 5000;
 const CACHE_MAX = 5000;
 const cache = new Map<number, { dto: SpecDetailDto; at: number }>();
 onLibraryChanged(() => cache.clear());
+libraryFollower.subscribe((ids) => {
+  for (const id of ids) cache.delete(id);
+});
 
 export async function readSpec(id: number, viewer: SignedInUser | undefined): Promise<SpecDetailDto> {
   const dto = await cachedSpec(id);
@@ -52,6 +57,7 @@ export async function readSpec(id: number, viewer: SignedInUser | undefined): Pr
 }
 
 async function cachedSpec(id: number): Promise<SpecDetailDto> {
+  libraryFollower.start();
   const hit = cache.get(id);
   if (hit && Date.now() - hit.at < CACHE_TTL_MS) return hit.dto;
   const generation = libraryGeneration();
