@@ -6,6 +6,7 @@
  * without a sample body here fails the sweep, so it cannot be left out.
  */
 import request from 'supertest';
+import { PLAN_FILE_FORMAT } from '@/lib/contracts/plans';
 import { apiRouters, createApp } from '@/server/app';
 import { useTestDatabase } from '../helpers/test-db';
 import { authHeader, testUser } from '../helpers/auth';
@@ -48,6 +49,29 @@ const spec = () => ({
   status: 'draft',
   source: { title: 'Invented Manual', edition: '1st', page: '4-7', url: 'https://m.example/v' },
   reason: 'Fuzzing',
+});
+
+const plan = () => ({
+  title: 'Weak spark',
+  symptom: 'Misfires when hot',
+  system: 'ignition',
+  modelId: null,
+  status: 'draft',
+  citation: { title: 'Invented Manual', edition: '1st', page: '4' },
+  steps: [
+    {
+      id: 'coil',
+      title: 'Coil primary',
+      instructions: 'Measure\nthe primary.',
+      preconditions: ['Ignition off'],
+      testPoint: { text: 'black to ground' },
+      check: { kind: 'spec', component: 'ignition coil', parameter: 'primary winding resistance', limits },
+      next: {
+        pass: { finding: { part: 'none', advice: 'fine' } },
+        fail: { finding: { part: 'coil', advice: 'replace' } },
+      },
+    },
+  ],
 });
 
 /** A plausible body for each write route (valid or nearly: the sweep varies one field at a time). */
@@ -101,6 +125,15 @@ const SAMPLES: Record<string, () => object> = {
   'POST /api/corrections/:id/accept': () => ({ confirmStale: false, note: 'ok' }),
   'POST /api/corrections/:id/reject': () => ({ note: 'not so' }),
   'PATCH /api/users/:id': () => ({ role: 'contributor', disabled: false }),
+  'POST /api/plans': plan,
+  'POST /api/plans/import': () => ({ format: PLAN_FILE_FORMAT, plans: [plan()] }),
+  'PATCH /api/plans/:id': () => ({ version: 1, reason: 'Because', title: 'Weak spark', steps: plan().steps }),
+  'POST /api/jobs/:jobId/runs': () => ({ planId: 1 }),
+  'POST /api/jobs/:jobId/runs/:runId/results': () => ({
+    stepId: 'coil',
+    reading: { value: 1.5, unit: 'ohm', limits, meter: { percent: 1, counts: 2, countValue: 0.01, unit: 'ohm' } },
+  }),
+  'POST /api/jobs/:jobId/runs/:runId/back': () => ({}),
 };
 
 let deep: unknown = [];
@@ -190,7 +223,10 @@ const ID_OF: Record<string, string> = {
   users: 'user',
 };
 const urlOf = (path: string) =>
-  path.replace(/\/api\/(\w+)\/:id/, (_m, area: string) => `/api/${area}/${ids[ID_OF[area]]}`);
+  path
+    .replace(/\/api\/(\w+)\/:id/, (_m, area: string) => `/api/${area}/${ids[ID_OF[area]] ?? 1}`)
+    .replace(':jobId', String(ids.job))
+    .replace(':runId', '1');
 
 /** Sends one probe as an admin of its own (sign-out-everywhere and password changes touch only that account). */
 async function probe(key: string, send: (r: request.Test) => request.Test): Promise<string | null> {
