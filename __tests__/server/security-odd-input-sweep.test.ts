@@ -6,6 +6,7 @@
  * without a sample body here fails the sweep, so it cannot be left out.
  */
 import request from 'supertest';
+import { PLAN_FILE_FORMAT } from '@/lib/contracts/plans';
 import { apiRouters, createApp } from '@/server/app';
 import { useTestDatabase } from '../helpers/test-db';
 import { authHeader, testUser } from '../helpers/auth';
@@ -48,6 +49,29 @@ const spec = () => ({
   status: 'draft',
   source: { title: 'Invented Manual', edition: '1st', page: '4-7', url: 'https://m.example/v' },
   reason: 'Fuzzing',
+});
+
+const plan = () => ({
+  title: 'Weak spark',
+  symptom: 'Misfires when hot',
+  system: 'ignition',
+  modelId: null,
+  status: 'draft',
+  citation: { title: 'Invented Manual', edition: '1st', page: '4' },
+  steps: [
+    {
+      id: 'coil',
+      title: 'Coil primary',
+      instructions: 'Measure\nthe primary.',
+      preconditions: ['Ignition off'],
+      testPoint: { text: 'black to ground' },
+      check: { kind: 'spec', component: 'ignition coil', parameter: 'primary winding resistance', limits },
+      next: {
+        pass: { finding: { part: 'none', advice: 'fine' } },
+        fail: { finding: { part: 'coil', advice: 'replace' } },
+      },
+    },
+  ],
 });
 
 /** A plausible body for each write route (valid or nearly: the sweep varies one field at a time). */
@@ -101,6 +125,15 @@ const SAMPLES: Record<string, () => object> = {
   'POST /api/corrections/:id/accept': () => ({ confirmStale: false, note: 'ok' }),
   'POST /api/corrections/:id/reject': () => ({ note: 'not so' }),
   'PATCH /api/users/:id': () => ({ role: 'contributor', disabled: false }),
+  'POST /api/plans': plan,
+  'POST /api/plans/import': () => ({ format: PLAN_FILE_FORMAT, plans: [plan()] }),
+  'PATCH /api/plans/:id': () => ({ version: 1, reason: 'Because', title: 'Weak spark', steps: plan().steps }),
+  'POST /api/jobs/:jobId/runs': () => ({ planId: 1 }),
+  'POST /api/jobs/:jobId/runs/:runId/results': () => ({
+    stepId: 'coil',
+    reading: { value: 1.5, unit: 'ohm', limits, meter: { percent: 1, counts: 2, countValue: 0.01, unit: 'ohm' } },
+  }),
+  'POST /api/jobs/:jobId/runs/:runId/back': () => ({}),
 };
 
 let deep: unknown = [];
@@ -147,6 +180,10 @@ function withLeaf(body: object, path: string[], value: unknown): object {
   return copy;
 }
 
+/** A 5xx other than a deliberate 503 with Retry-After (readiness, a database that is down). */
+const refused = (res: request.Response) =>
+  res.status >= 500 && !(res.status === 503 && res.headers['retry-after'] !== undefined);
+
 let probes = 0;
 const admins = new Map<string, { Authorization: string }>();
 /** A different client address per probe (the app trusts X-Forwarded-For from loopback), so rate limits rarely answer first. */
@@ -186,7 +223,10 @@ const ID_OF: Record<string, string> = {
   users: 'user',
 };
 const urlOf = (path: string) =>
-  path.replace(/\/api\/(\w+)\/:id/, (_m, area: string) => `/api/${area}/${ids[ID_OF[area]]}`);
+  path
+    .replace(/\/api\/(\w+)\/:id/, (_m, area: string) => `/api/${area}/${ids[ID_OF[area]] ?? 1}`)
+    .replace(':jobId', String(ids.job))
+    .replace(':runId', '1');
 
 /** Sends one probe as an admin of its own (sign-out-everywhere and password changes touch only that account). */
 async function probe(key: string, send: (r: request.Test) => request.Test): Promise<string | null> {
@@ -197,7 +237,7 @@ async function probe(key: string, send: (r: request.Test) => request.Test): Prom
   const res = await send(
     request(app)[method.toLowerCase() as 'post'](urlOf(path)).set(who).set('X-Forwarded-For', clientAddress()),
   );
-  if (res.status >= 500) return `${res.status} ${res.body?.code ?? ''} ${res.body?.detail ?? res.text.slice(0, 120)}`;
+  if (refused(res)) return `${res.status} ${res.body?.code ?? ''} ${res.body?.detail ?? res.text.slice(0, 120)}`;
   if (res.status >= 400 && !/application\/problem\+json/.test(String(res.headers['content-type'])))
     return `${res.status} without problem details`;
   return null;
@@ -257,7 +297,7 @@ describe('every GET route with odd ids and query values', () => {
         .set(await authHeader('admin', 'fuzz-reader'))
         .set('X-Forwarded-For', clientAddress());
       probes += 1;
-      if (res.status >= 500) failures.push(`${url.slice(0, 80)}: ${res.status} ${res.body?.code ?? ''}`);
+      if (refused(res)) failures.push(`${url.slice(0, 80)}: ${res.status} ${res.body?.code ?? ''}`);
     }
     expect(failures).toEqual([]);
   });

@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { CAUTION_CATEGORIES } from '../specs/classify';
 import type { FieldError, MeasurementMode } from './enums';
 import type { ReadingDto } from './jobs';
+import { safeText } from './text';
 
 /** The systems of a machine, in the trade's order of work (the model sheet groups by it). */
 export const SYSTEMS = ['ignition', 'charging', 'starting', 'fuel', 'lighting'] as const;
@@ -26,13 +27,15 @@ export const VERDICT_OUTCOMES = ['pass', 'marginal', 'fail'] as const;
 export const PLAN_STATUSES = ['published', 'draft'] as const;
 export type PlanStatus = (typeof PLAN_STATUSES)[number];
 
-const Text = (max: number) => z.string().trim().max(max, `At most ${max} characters`);
+/** Plan text may span lines (instructions, advice); the free-text rule is lib/contracts/text.ts. */
+const Text = (max: number) => safeText(max, { multiline: true });
 const Needed = (max: number, what: string) => Text(max).min(1, `${what} is required`);
 export const StepKey = z
   .string()
   .trim()
   .regex(/^[a-z0-9][a-z0-9-]{0,59}$/, 'Use 1–60 lower-case letters, digits and dashes');
-const Num = z.number().finite();
+/** Finite and bounded, so the engine's arithmetic stays finite (as in lib/contracts/verdicts.ts). */
+const Num = z.number().finite().min(-1e12).max(1e12);
 
 export const Finding = z
   .object({ part: Needed(120, 'The likely faulty part'), advice: Needed(600, 'The advice') })
