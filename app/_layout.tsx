@@ -49,6 +49,10 @@ function QueryProvider({ children }: { children: ReactNode }) {
         maxAge: PERSIST_MAX_AGE_MS,
         dehydrateOptions: { shouldDehydrateQuery: shouldPersistQuery },
       }}
+      // What the device kept shows at once, but it may be older than its timestamp says (a change made
+      // just before the reload may not have been written yet): every restored query counts as stale,
+      // so the screens on view refetch when there is a connection and keep the kept copy when there is not.
+      onSuccess={() => void queryClient.invalidateQueries()}
     >
       {children}
     </PersistQueryClientProvider>

@@ -2,9 +2,8 @@ import request from 'supertest';
 import { createApp } from '@/server/app';
 import { AppDataSource } from '@/server/db/data-source';
 import { fakeSmtp } from '@/server/modules/mail/fake-smtp';
-import { deliverDue } from '@/server/modules/mail/mailer';
 import { useTestDatabase } from '../helpers/test-db';
-import { useFakeMail } from '../helpers/mail';
+import { drainOutbox, useFakeMail } from '../helpers/mail';
 import { authHeader, testUser } from '../helpers/auth';
 
 useTestDatabase();
@@ -97,7 +96,7 @@ describe('POST /api/corrections', () => {
   it('e-mails every editor about the new proposal', async () => {
     await testUser('editor', 'mail-editor');
     await proposeChange(await freshSpec());
-    await deliverDue();
+    await drainOutbox();
     expect(
       fakeSmtp.messages.some((m) => m.to.includes('mail-editor@') && /Correction #\d+ to review/.test(m.subject)),
     ).toBe(true);
@@ -125,7 +124,7 @@ describe('accept and reject', () => {
       authorName: expect.stringContaining('Test credited'),
     });
     expect(card.source.title).toBe(citation.title);
-    await deliverDue();
+    await drainOutbox();
     expect(fakeSmtp.messages.some((m) => m.to.includes(proposer.email) && /accepted/.test(m.subject))).toBe(true);
   });
 

@@ -204,6 +204,7 @@ describe('POST /api/jobs/:jobId/runs/:runId/results', () => {
         .set(await authHeader('admin', 'plans-admin'))
         .send(body),
       403,
+      'not_job_owner',
     );
     expectProblem(
       await request(app)

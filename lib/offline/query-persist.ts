@@ -43,7 +43,8 @@ export function devicePersister(): Persister | null {
       setItem: (k, v: string) => set(k, v),
       removeItem: (k) => del(k),
     },
-    throttleTime: 1000,
+    // Short: a page reload (a link opened, the tab restored) right after an answer must not lose it.
+    throttleTime: 200,
     serialize: (c) => boundedSerialize(c),
   });
 }

@@ -65,7 +65,7 @@ async function jobFor(m: EntityManager, user: SignedInUser, jobId: number, lock:
 /** Only the job's owner answers steps (an admin may look, not measure). */
 function ownerOnly(user: SignedInUser, job: Job) {
   if (job.ownerId !== user.id)
-    throw AppError.forbidden('Only the technician who owns this job can record its results.');
+    throw new AppError(403, 'not_job_owner', 'Only the technician who owns this job can record its results.');
   if (job.status === 'closed') throw AppError.conflict('This job is closed. Reopen it to run a plan.');
 }
 
