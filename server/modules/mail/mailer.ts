@@ -8,12 +8,13 @@ import type { EntityManager } from 'typeorm';
 import { config } from '@/server/config';
 import { AppDataSource } from '@/server/db/data-source';
 import { fakeSmtp } from './fake-smtp';
+import { subjectLine } from './subject';
 import { OutboxRepository, type Mail } from './outbox.repository';
 
 export type { Mail };
 
 export async function enqueue(m: EntityManager, mail: Mail): Promise<void> {
-  await m.withRepository(OutboxRepository).enqueue(mail);
+  await m.withRepository(OutboxRepository).enqueue({ ...mail, subject: subjectLine(mail.subject) });
 }
 
 let transporter: Transporter | null = null;
