@@ -124,3 +124,17 @@ describe.each([
   it('on the public screens', () => checkAll(app.browser, size, scheme, false), 180_000);
   it('on the signed-in screens', () => checkAll(app.browser, size, scheme, true), 240_000);
 });
+
+it('the axe check fails on a page with known violations, naming rule, help and element', async () => {
+  const page = await app.browser.newPage();
+  // Two classic failures: an image with no text alternative, a button with no name.
+  await page.setContent(
+    '<html lang="en"><title>t</title><main><img src="x.png"><button id="mute"></button></main></html>',
+  );
+  const violations = await axeViolations(page);
+  expect(violations.map((v) => v.id).sort()).toEqual(expect.arrayContaining(['button-name', 'image-alt']));
+  const text = describeViolations(violations);
+  expect(text).toMatch(/image-alt \(critical\): Images must have alternative text/);
+  expect(text).toMatch(/#mute/);
+  await page.close();
+});

@@ -40,6 +40,7 @@ export function BottomBar() {
             href={item.href}
             accessibilityLabel={item.label}
             aria-current={current ? 'page' : undefined}
+            focusInset
             onPress={() => (current ? undefined : router.navigate(item.href))}
             style={[styles.item, current && { borderTopColor: t.primary }]}
             testID={`bottom-bar-${item.label.toLowerCase()}`}

@@ -11,6 +11,8 @@ export type LinkRowProps = {
   children: ReactNode;
   style?: StyleProp<ViewStyle> | ((state: { pressed: boolean }) => StyleProp<ViewStyle>);
   testID?: string;
+  /** Draw the focus ring inside the row (at the window's edge). */
+  focusInset?: boolean;
   /** The current page's entry in a navigation bar. */
   'aria-current'?: 'page';
 };
@@ -23,13 +25,22 @@ type WebPress = GestureResponderEvent & { preventDefault?: () => void; metaKey?:
  * Space opens it too, as rows in lists are often taken for buttons. Modified clicks (new tab) are left to the
  * browser; a plain press navigates in the app.
  */
-export function LinkRow({ href, onPress, accessibilityLabel, children, style, testID, ...aria }: LinkRowProps) {
+export function LinkRow({
+  href,
+  onPress,
+  accessibilityLabel,
+  children,
+  style,
+  testID,
+  focusInset,
+  ...aria
+}: LinkRowProps) {
   const t = useTheme();
   const web = Platform.OS === 'web';
-  const press = (e: GestureResponderEvent) => {
-    const w = e as WebPress;
-    if (web && (w.metaKey || w.ctrlKey)) return;
-    w.preventDefault?.();
+  const press = (e?: GestureResponderEvent) => {
+    const w = e as WebPress | undefined;
+    if (web && (w?.metaKey || w?.ctrlKey)) return;
+    w?.preventDefault?.();
     onPress();
   };
   const webProps = web
@@ -52,7 +63,7 @@ export function LinkRow({ href, onPress, accessibilityLabel, children, style, te
       {...aria}
       style={(state) => [
         typeof style === 'function' ? style(state) : style,
-        focusRing(t, (state as { focused?: boolean }).focused),
+        focusRing(t, (state as { focused?: boolean }).focused, focusInset),
       ]}
       {...webProps}
     >
