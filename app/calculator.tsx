@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useLocalSearchParams } from 'expo-router';
 import { BatteryCharge } from '@/components/calculator/battery-charge';
 import { Calculator } from '@/components/calculator/calculator';
-import { LimitsForm } from '@/components/calculator/limits-form';
+import { LimitsForm, type TypedLimits } from '@/components/calculator/limits-form';
 import { QualitativeCheck } from '@/components/calculator/qualitative-check';
 import { SafetyNotes } from '@/components/library/safety-notes';
 import { cautionCategoriesForMode } from '@/lib/specs/classify';
@@ -13,31 +13,42 @@ import { Text } from '@/components/ui/text';
 import { parseDecimal } from '@/lib/calculator/form';
 import { jobLink } from '@/lib/hooks/use-add-to-job';
 import { unitsOfKind, type CanonicalUnit, type QuantityKind } from '@/lib/units';
+import { MODE_KIND, type MeasurementMode } from '@/lib/verdict';
 
-type Mode = QuantityKind | 'diode' | 'continuity';
-const MODES: { value: Mode; label: string }[] = [
+type Choice = MeasurementMode | 'gap';
+const CHOICES: { value: Choice; label: string }[] = [
   { value: 'resistance', label: 'Resistance' },
-  { value: 'voltage', label: 'Voltage' },
+  { value: 'dc_voltage', label: 'DC volts' },
+  { value: 'ac_voltage', label: 'AC volts' },
+  { value: 'peak_voltage', label: 'Peak volts' },
   { value: 'current', label: 'Current' },
-  { value: 'length', label: 'Gap' },
-  { value: 'diode', label: 'Diode' },
+  { value: 'gap', label: 'Gap' },
+  { value: 'diode_forward', label: 'Diode' },
   { value: 'continuity', label: 'Continuity' },
 ];
+const EMPTY: TypedLimits = { min: '', nominal: '', max: '', refTempC: '', engineRpm: '' };
+// A silicon diode's forward voltage on the diode range: common practice, no published source.
+const SILICON_DIODE: TypedLimits = { ...EMPTY, min: '0.4', max: '0.8' };
+
+const kindOf = (c: Choice): QuantityKind => (c === 'gap' ? 'length' : MODE_KIND[c]);
+const num = (s: string) => {
+  const v = parseDecimal(s);
+  return v === undefined || Number.isNaN(v) ? undefined : v;
+};
 
 /** For a spec that is not in the library: type the limits by hand. */
 export default function StandaloneCalculatorScreen() {
   const link = useLocalSearchParams<{ job?: string; retake?: string }>();
-  const [mode, setMode] = useState<Mode>('resistance');
-  const [limits, setLimits] = useState({ min: '', nominal: '', max: '', refTempC: '' });
+  const [choice, setChoice] = useState<Choice>('resistance');
+  const [limits, setLimits] = useState<TypedLimits>(EMPTY);
   const [unit, setUnit] = useState<CanonicalUnit>('Ω');
   const [copper, setCopper] = useState(true);
-  const choose = (m: Mode) => {
-    setMode(m);
-    if (m !== 'diode' && m !== 'continuity') setUnit(unitsOfKind(m)[0]);
-  };
-  const num = (s: string) => {
-    const v = parseDecimal(s);
-    return v === undefined || Number.isNaN(v) ? undefined : v;
+  const kind = kindOf(choice);
+  const mode = choice === 'gap' ? null : choice;
+  const choose = (c: Choice) => {
+    setChoice(c);
+    setUnit(unitsOfKind(kindOf(c))[0]);
+    setLimits((l) => (c === 'diode_forward' ? SILICON_DIODE : choice === 'diode_forward' ? EMPTY : l));
   };
   const spec = {
     min: num(limits.min),
@@ -45,37 +56,38 @@ export default function StandaloneCalculatorScreen() {
     max: num(limits.max),
     unit,
     refTempC: num(limits.refTempC),
-    material: mode === 'resistance' && copper ? ('copper' as const) : ('none' as const),
+    material: choice === 'resistance' && copper ? ('copper' as const) : ('none' as const),
+    mode,
+    engineRpm: choice === 'ac_voltage' || choice === 'dc_voltage' ? num(limits.engineRpm) : undefined,
   };
+  const beepOnly = choice === 'diode_forward' ? 'diode' : choice === 'continuity' ? 'continuity' : null;
   return (
     <Screen testID="calculator-screen">
       <Text variant="title">Calculator</Text>
       <Text color="textMuted">For a spec that is not in the library: type the limits from your manual.</Text>
-      <ChoiceRow label="What are you checking?" options={MODES} value={mode} onChange={choose} />
+      <ChoiceRow label="What are you checking?" options={CHOICES} value={choice} onChange={choose} />
       <TwoColumns
         first={
           <>
-            {mode === 'diode' || mode === 'continuity' ? (
-              <QualitativeCheck kind={mode} />
-            ) : (
-              <LimitsForm
-                kind={mode}
-                limits={limits}
-                onChangeLimits={setLimits}
-                unit={unit}
-                onChangeUnit={setUnit}
-                copper={copper}
-                onChangeCopper={setCopper}
-              />
-            )}
-            <SafetyNotes categories={cautionCategoriesForMode(mode)} />
-            {mode === 'voltage' ? <BatteryCharge /> : null}
+            <LimitsForm
+              kind={kind}
+              limits={limits}
+              onChangeLimits={setLimits}
+              unit={unit}
+              onChangeUnit={setUnit}
+              copper={choice === 'resistance' && copper}
+              onChangeCopper={choice === 'resistance' ? setCopper : undefined}
+              showEngineRpm={choice === 'ac_voltage' || choice === 'dc_voltage'}
+            />
+            <SafetyNotes categories={cautionCategoriesForMode(choice)} />
+            {choice === 'dc_voltage' ? <BatteryCharge /> : null}
           </>
         }
         second={
-          mode !== 'diode' && mode !== 'continuity' ? (
-            <Calculator spec={spec} kind={mode} testID="standalone-calculator" job={jobLink(link)} />
-          ) : null
+          <>
+            <Calculator spec={spec} kind={kind} testID="standalone-calculator" job={jobLink(link)} />
+            {beepOnly ? <QualitativeCheck kind={beepOnly} /> : null}
+          </>
         }
       />
     </Screen>

@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import { SearchResults } from '@/components/library/search-results';
 import { ModelList } from '@/components/library/model-list';
+import { PlanList } from '@/components/plans/plan-list';
 import { EditorActions } from '@/components/spec-editor/editor-actions';
 import { Button } from '@/components/ui/button';
 import { MainAndSide } from '@/components/ui/main-and-side';
@@ -13,6 +14,7 @@ import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
 import { describeError } from '@/lib/api/describe-error';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { useModelsQuery, useSearchQuery } from '@/lib/hooks/use-library';
+import { usePlansQuery } from '@/lib/hooks/use-plans';
 import { useSession } from '@/lib/session/session-provider';
 import { Spacing } from '@/lib/theme';
 import { useIsWide } from '@/lib/theme/use-theme';
@@ -54,6 +56,7 @@ export default function SearchScreen() {
           onPress={() => router.push('/calculator')}
           style={styles.calcButton}
         />
+        <Button label="Test plans" variant="secondary" onPress={() => router.push('/plans')} testID="home-plans" />
         {session.status === 'signed-in' ? (
           <Button label="My jobs" variant="secondary" onPress={() => router.push('/jobs')} testID="home-my-jobs" />
         ) : null}
@@ -92,12 +95,25 @@ function SearchArea({
   onOpenModel: (id: number) => void;
 }) {
   const search = useSearchQuery(q);
+  const plans = usePlansQuery({ q }, q.trim() !== '');
+  const router = useRouter();
   if (q.trim() === '') return null;
-  if (search.isPending) return <LoadingState label="Searching" />;
+  const planHits = plans.data?.length ? (
+    <View style={styles.plans} testID="search-plans">
+      <Text variant="heading">Test plans for this symptom</Text>
+      <PlanList plans={plans.data.slice(0, 3)} onOpen={(p) => router.push(`/plans/${p.id}`)} />
+    </View>
+  ) : null;
+  if (search.isPending) return planHits ?? <LoadingState label="Searching" />;
   if (search.error) return <ErrorState message={describeError(search.error)} onRetry={search.refetch} />;
   if (search.data.total === 0)
-    return <EmptyState message={`Nothing matches “${q}”. Try a make, a model or a part name.`} />;
-  return <SearchResults result={search.data} onOpenSpec={onOpenSpec} onOpenModel={onOpenModel} />;
+    return planHits ?? <EmptyState message={`Nothing matches “${q}”. Try a make, a model or a part name.`} />;
+  return (
+    <>
+      {planHits}
+      <SearchResults result={search.data} onOpenSpec={onOpenSpec} onOpenModel={onOpenModel} />
+    </>
+  );
 }
 
 function BrowseModels({ onOpenModel, columns = false }: { onOpenModel: (id: number) => void; columns?: boolean }) {
@@ -114,4 +130,5 @@ const styles = StyleSheet.create({
   browse: { gap: Spacing.md },
   calcButton: { alignSelf: 'flex-start' },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: Spacing.sm },
+  plans: { gap: Spacing.sm },
 });

@@ -10,7 +10,11 @@ export DB_HOST="${DB_HOST:-127.0.0.1}"
 export DB_PORT="${DB_PORT:-3307}"
 export DB_USER="${DB_USER:-specbench}"
 export DB_PASSWORD="${DB_PASSWORD:-specbench-local}"
+# The benchmarks' own account: it alone may bulk-load files (FILE), and only from $BULK_DIR.
+export BENCH_DB_USER="${BENCH_DB_USER:-specbench_bench}"
+export BENCH_DB_PASSWORD="${BENCH_DB_PASSWORD:-specbench-bench-local}"
 mkdir -p "$DATA_DIR"
+export BULK_DIR="$DATA_DIR/bulk-load"
 
 # Unix socket paths are limited to ~107 bytes; a deep clone falls back to /tmp.
 DB_SOCKET="$DATA_DIR/mysqld.sock"
@@ -48,7 +52,7 @@ db_is_up() { db_admin ping >/dev/null 2>&1; }
 DB_STARTED_HERE=0
 db_start() {
   ensure_apt mariadbd mariadb-server
-  if db_is_up; then return 0; fi
+  if db_is_up; then db_grant; return 0; fi
   if [ ! -d "$DATA_DIR/db/mysql" ]; then
     log "initialising MariaDB data directory in $DATA_DIR/db"
     mariadb-install-db --no-defaults --user="$(id -un)" --datadir="$DATA_DIR/db" \
@@ -57,9 +61,11 @@ db_start() {
   # A pid file left by a crash would block the start.
   if [ -f "$DB_PID_FILE" ] && ! kill -0 "$(cat "$DB_PID_FILE")" 2>/dev/null; then rm -f "$DB_PID_FILE"; fi
   log "starting MariaDB on $DB_HOST:$DB_PORT"
+  mkdir -p "$BULK_DIR"
+  # No LOAD DATA LOCAL for anyone; server-side LOAD DATA only from $BULK_DIR (and only with FILE).
   setsid mariadbd --no-defaults --user="$(id -un)" --datadir="$DATA_DIR/db" \
     --bind-address=127.0.0.1 --port="$DB_PORT" --socket="$DB_SOCKET" --pid-file="$DB_PID_FILE" \
-    --log-error="$DATA_DIR/mysqld.log" --skip-name-resolve --local-infile=1 \
+    --log-error="$DATA_DIR/mysqld.log" --skip-name-resolve --local-infile=0 --secure-file-priv="$BULK_DIR" \
     --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
     --max-connections=300 --innodb-buffer-pool-size=256M </dev/null >/dev/null 2>&1 &
   for _ in $(seq 1 150); do
@@ -71,12 +77,18 @@ db_start() {
   return 1
 }
 
-# The app connects over TCP with a password; it may create any database named specbench*.
+# The app connects over TCP with a password; it may create any database named specbench*, and
+# holds no global privilege (no FILE). The benchmarks' account adds FILE for MariaDB's own bulk
+# load, confined to $BULK_DIR by --secure-file-priv. Idempotent: run on every start.
 db_grant() {
   db_sql "CREATE USER IF NOT EXISTS '$DB_USER'@'127.0.0.1' IDENTIFIED BY '$DB_PASSWORD';
           ALTER USER '$DB_USER'@'127.0.0.1' IDENTIFIED BY '$DB_PASSWORD';
           GRANT ALL PRIVILEGES ON \`specbench%\`.* TO '$DB_USER'@'127.0.0.1';
-          GRANT FILE ON *.* TO '$DB_USER'@'127.0.0.1';"
+          REVOKE FILE ON *.* FROM '$DB_USER'@'127.0.0.1';
+          CREATE USER IF NOT EXISTS '$BENCH_DB_USER'@'127.0.0.1' IDENTIFIED BY '$BENCH_DB_PASSWORD';
+          ALTER USER '$BENCH_DB_USER'@'127.0.0.1' IDENTIFIED BY '$BENCH_DB_PASSWORD';
+          GRANT ALL PRIVILEGES ON \`specbench\\_bench%\`.* TO '$BENCH_DB_USER'@'127.0.0.1';
+          GRANT FILE ON *.* TO '$BENCH_DB_USER'@'127.0.0.1';"
 }
 
 db_stop() {
@@ -100,7 +112,7 @@ build_web() {
   cd "$ROOT"
   local hash
   hash="$( { find app components lib assets -type f -print0 2>/dev/null || true; } | sort -z | xargs -0 -r sha1sum | \
-    cat - app.json babel.config.js metro.config.js package-lock.json | sha1sum | cut -c1-40)"
+    cat - app.json babel.config.js metro.config.js scripts/build-web.js package-lock.json | sha1sum | cut -c1-40)"
   if [ -f dist/index.html ] && [ "$(cat "$DATA_DIR/web-build.hash" 2>/dev/null)" = "$hash" ]; then
     log "web build is up to date"
     return 0
@@ -108,5 +120,7 @@ build_web() {
   log "building the web app (expo export)"
   CI=1 npx expo export --platform web --output-dir dist >"$DATA_DIR/web-build.log" 2>&1 || {
     tail -40 "$DATA_DIR/web-build.log" >&2; return 1; }
+  # Manifest, Workbox service worker and the .br/.gz twins the server sends.
+  node scripts/build-web.js dist >>"$DATA_DIR/web-build.log" 2>&1 || { tail -20 "$DATA_DIR/web-build.log" >&2; return 1; }
   echo "$hash" >"$DATA_DIR/web-build.hash"
 }

@@ -49,6 +49,17 @@ const Env = z.object({
   OUTBOX_POLL_MS: z.coerce.number().int().min(50).default(1000),
   /** The demo accounts' password; in production it must be set, and not to the default. */
   DEMO_PASSWORD: z.string().min(12).optional(),
+  /** pino level; tests default to silent. */
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+  /** Client-side bound on every query: a frozen database fails requests instead of hanging them. */
+  DB_QUERY_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(20_000),
+  DB_POOL_SIZE: z.coerce.number().int().min(1).max(500).default(20),
+  /** How long SIGTERM waits for requests in flight before closing their connections. */
+  SHUTDOWN_TIMEOUT_MS: z.coerce.number().int().min(0).max(120_000).default(10_000),
+  /** Bearer token that opens /metrics to other hosts; without it only loopback peers see it. */
+  METRICS_TOKEN: z.string().min(16).optional(),
+  /** Where rate-limit counters live: MariaDB (shared by every replica) or this process's memory. */
+  RATE_LIMIT_STORE: z.enum(['mariadb', 'memory']).default('mariadb'),
 });
 
 /** The development default for the demo accounts, printed by `npm start`; refused in production. */

@@ -1,37 +1,54 @@
-/** The server process: connect to MariaDB, then serve the app on config.PORT. */
+/** The server process: connect to MariaDB, then serve the app on config.PORT; drain on SIGTERM. */
 import 'reflect-metadata';
 import type { Server } from 'node:http';
 import { config } from './config';
 import { AppDataSource } from './db/data-source';
 import { createApp } from './app';
+import { drain } from './http/graceful';
+import { lifecycle } from './http/lifecycle';
+import { logger } from './http/logging';
 import { fakeSmtp } from './modules/mail/fake-smtp';
 import { startOutboxWorker, stopOutboxWorker } from './modules/mail/mailer';
+import { startImportCleanup, stopImportCleanup } from './modules/imports/import-cleanup';
+import { searchEngine } from './modules/search/search.service';
 
 let server: Server | undefined;
+let stopping = false;
 
-function shutdown(code: number) {
-  stopOutboxWorker();
-  void fakeSmtp.stop();
-  const done = () =>
-    AppDataSource.destroy()
-      .catch(() => undefined)
-      .finally(() => process.exit(code));
-  if (server) server.close(done);
-  else done();
-  const force = setTimeout(() => process.exit(code), 5000) as unknown as { unref(): void };
+async function shutdown(code: number, why: string) {
+  if (stopping) return;
+  stopping = true;
+  logger.info({ why }, 'draining: no new connections, finishing requests in flight');
+  // A last resort if closing itself hangs (a pool that cannot end).
+  const force = setTimeout(() => process.exit(code || 1), config.SHUTDOWN_TIMEOUT_MS + 5000) as unknown as {
+    unref(): void;
+  };
   force.unref();
+  const clean = await drain({
+    server,
+    timeoutMs: config.SHUTDOWN_TIMEOUT_MS,
+    stopWork: async () => {
+      await stopOutboxWorker();
+      stopImportCleanup();
+      await fakeSmtp.stop();
+    },
+    close: () => (AppDataSource.isInitialized ? AppDataSource.destroy() : Promise.resolve()),
+  });
+  logger.info({ clean }, clean ? 'stopped' : 'stopped; requests still running were cut off');
+  logger.flush?.();
+  process.exit(code);
 }
 
 process.on('unhandledRejection', (reason) => {
-  console.error('Unhandled rejection:', reason);
-  shutdown(1);
+  logger.fatal({ err: reason }, 'unhandled rejection');
+  void shutdown(1, 'unhandled rejection');
 });
 process.on('uncaughtException', (err) => {
-  console.error('Uncaught exception:', err);
-  shutdown(1);
+  logger.fatal({ err }, 'uncaught exception');
+  void shutdown(1, 'uncaught exception');
 });
-process.on('SIGINT', () => shutdown(0));
-process.on('SIGTERM', () => shutdown(0));
+process.on('SIGINT', () => void shutdown(0, 'SIGINT'));
+process.on('SIGTERM', () => void shutdown(0, 'SIGTERM'));
 
 async function main() {
   await AppDataSource.initialize();
@@ -45,7 +62,11 @@ async function main() {
     );
   }
   startOutboxWorker();
+  startImportCleanup();
+  // Build the search index now, not on the first search.
+  void searchEngine.rebuild().catch((err) => console.error('Search index build failed:', err));
   server = createApp().listen(config.PORT, config.HOST, () => {
+    lifecycle.markReady();
     const where =
       config.HOST === '127.0.0.1' ? `http://localhost:${config.PORT}` : `http://${config.HOST}:${config.PORT}`;
     console.log(

@@ -9,7 +9,9 @@ jest.mock('expo-router', () => ({ useRouter: () => ({ push: jest.fn(), dismissTo
 jest.mock('@/lib/session/session-provider', () => ({
   useSession: () => ({ status: 'signed-in', user: { id: 7, displayName: 'Dana' } }),
 }));
-jest.mock('@/lib/hooks/use-reading-queue', () => ({ useReadingQueue: () => ({ add: mockAdd }) }));
+jest.mock('@/lib/hooks/use-reading-queue', () => ({
+  useReadingQueue: () => ({ add: mockAdd, fate: () => ({ status: 'waiting' }) }),
+}));
 jest.mock('@/lib/api/jobs', () => ({
   listJobs: jest.fn(async () => [{ id: 5, status: 'open', machineLabel: 'Blue quad', modelTitle: null }]),
   getJob: jest.fn(async () => ({ id: 5, readings: [] })),

@@ -28,12 +28,14 @@ describe.each([
     // A raw reading of the middle of the band plus 0.5 Ω of test leads: inside after the leads are subtracted.
     const middle = (spec.min + spec.max) / 2;
     await calc.getByLabel('Meter reading', { exact: true }).fill(String(middle + 0.5));
+    await calc.getByTestId('optional-toggle').click(); // the corrections are collapsed until asked for
     await calc.getByLabel('Test leads, probes shorted', { exact: true }).fill('0,5');
     await calc.getByLabel('% of reading', { exact: true }).fill('1');
     await calc.getByLabel('Counts', { exact: true }).fill('2');
     await calc.getByLabel('One count is worth', { exact: true }).fill('0.01');
     await expect(calc.getByTestId('verdict-word').innerText()).resolves.toBe('PASS');
     await expect(calc.getByTestId('band-picture').locator('svg').count()).resolves.toBe(1);
+    await calc.getByTestId('show-working').click();
     const steps = await calc.getByTestId('verdict-steps').innerText();
     expect(steps).toMatch(/lead/i);
     expect(steps).toMatch(/√3|k = 2|U =/);
@@ -59,11 +61,19 @@ it('the standalone calculator judges limits typed by hand and remembers the mete
   await calc.getByLabel('Meter reading', { exact: true }).fill('0.030');
   await calc.getByRole('radio', { name: 'Meter reading unit: in' }).click();
   await expect(calc.getByTestId('verdict-word').innerText()).resolves.toBe('PASS');
-  await expect(calc.getByTestId('verdict-panel').innerText()).resolves.toMatch(/0\.762 mm/);
+  await expect(calc.getByTestId('verdict-summary').innerText()).resolves.toMatch(/0\.762 mm/);
+  await calc.getByTestId('optional-toggle').click();
   await calc.getByLabel('% of reading', { exact: true }).fill('2.5');
   await screenshot(page, 'calculator-standalone-phone');
   await page.reload();
   await page.getByTestId('calculator-screen').getByTestId('standalone-calculator').waitFor();
+  // Remembered under the quantity it was typed on (a gap): choosing Gap again offers it as a chip.
+  await page.getByTestId('calculator-screen').getByRole('radio', { name: 'What are you checking?: Gap' }).click();
+  await page.getByTestId('standalone-calculator').getByTestId('memory-chips').waitFor();
+  await expect(page.getByTestId('standalone-calculator').getByTestId('memory-chips').innerText()).resolves.toMatch(
+    /2\.5 %.*from your last check/,
+  );
+  await page.getByTestId('standalone-calculator').getByTestId('optional-toggle').click();
   const percent = page.getByTestId('standalone-calculator').getByLabel('% of reading', { exact: true });
   // The remembered value arrives from device storage just after the first render.
   await page

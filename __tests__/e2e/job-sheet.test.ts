@@ -4,7 +4,7 @@ import { DESKTOP, PHONE, SCREENSHOTS, screenshot, useWebApp } from '../helpers/b
 import { useTestDatabase } from '../helpers/test-db';
 import { expectCount, expectHidden, expectText, expectVisible, step } from '../helpers/expect-visible';
 import { AppDataSource } from '@/server/db/data-source';
-import { signAccessToken } from '@/server/auth/tokens';
+import { bearerFor } from '../helpers/auth';
 import { hashPassword } from '@/server/modules/accounts/passwords';
 import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
@@ -173,7 +173,7 @@ it('a technician keeps readings on a job sheet, offline too, and prints the repo
         sheet.getByTestId(`job-reading-${failedId}`).getByTestId('reading-retaken').innerText(),
       ).resolves.toBe('re-taken');
       const res = await fetch(`${app.url}/api/jobs/${jobId}`, {
-        headers: { Authorization: `Bearer ${signAccessToken(user)}` },
+        headers: await bearerFor(user),
       });
       const job = (await res.json()) as JobDetailDto;
       expect(job.readings.map((r) => r.verdict)).toEqual(['pass', 'marginal', 'fail', 'pass']);

@@ -44,19 +44,21 @@ describe('decideWithUncertainty (U known)', () => {
 });
 
 describe('nearBands and decideWithoutUncertainty (U unknown)', () => {
-  // Specbench rule (DESIGN §3.5): band = 5 % of the tolerance width; one-sided: 5 % of the limit (decision).
+  // Specbench rule (DESIGN §3.5): band = 5 % of the tolerance width; a one-sided spec has a band only when it
+  // states one (% of the limit, or absolute). Exact decimals: 5 % of 1.26 is 0.063 exactly.
   it.each([
-    [{ lower: 3.57, upper: 4.83 }, 5, 0.05 * (4.83 - 3.57), 0.05 * (4.83 - 3.57)],
-    [{ lower: 12.6 }, 5, 0.05 * 12.6, undefined],
-    [{ upper: 15 }, 5, undefined, 0.05 * 15],
-    [{ upper: -2 }, 10, undefined, 0.1 * 2],
-    [{ lower: 3.57, upper: 4.83 }, 0, 0, 0],
-  ])('for %j at %d %%, the bands are lower %d / upper %d', (limits, pct, lower, upper) => {
-    const bands = nearBands(limits, pct);
-    if (lower === undefined) expect(bands.lower).toBeUndefined();
-    else expect(bands.lower).toBeCloseTo(lower, 12);
-    if (upper === undefined) expect(bands.upper).toBeUndefined();
-    else expect(bands.upper).toBeCloseTo(upper, 12);
+    [{ lower: 3.57, upper: 4.83 }, { nearLimitPct: 5 }, '0.063', '0.063'],
+    [{ lower: 3.57, upper: 4.83 }, {}, '0.063', '0.063'],
+    [{ lower: 12.6 }, { nearLimitPct: 5 }, '0.63', undefined],
+    [{ lower: 12.6 }, {}, undefined, undefined],
+    [{ upper: 15 }, { nearLimitPct: 5 }, undefined, '0.75'],
+    [{ upper: -2 }, { nearLimitPct: 10 }, undefined, '0.2'],
+    [{ upper: 15 }, { nearLimit: 0.2 }, undefined, '0.2'],
+    [{ lower: 3.57, upper: 4.83 }, { nearLimitPct: 0 }, '0', '0'],
+  ])('for %j with %j, the bands are lower %s / upper %s', (limits, rule, lower, upper) => {
+    const bands = nearBands(limits, rule);
+    expect(bands.lower?.toString()).toBe(lower);
+    expect(bands.upper?.toString()).toBe(upper);
   });
 
   const twoSided = { lower: 3.57, upper: 4.83 };
@@ -70,7 +72,7 @@ describe('nearBands and decideWithoutUncertainty (U unknown)', () => {
     [3.57, 'marginal'],
     [3.56, 'fail'],
   ])('for 3.57–4.83 with the 5 %% band, %d is %s', (x, verdict) => {
-    expect(decideWithoutUncertainty(x, twoSided, nearBands(twoSided, 5)).verdict).toBe(verdict);
+    expect(decideWithoutUncertainty(x, twoSided, nearBands(twoSided, { nearLimitPct: 5 })).verdict).toBe(verdict);
   });
 
   it.each([
@@ -81,7 +83,7 @@ describe('nearBands and decideWithoutUncertainty (U unknown)', () => {
     [{ upper: 15 }, 14, 'pass'],
     [{ upper: 15 }, 14.5, 'marginal'],
     [{ upper: 15 }, 15.01, 'fail'],
-  ])('one-sided %j with the 5 %% band: %d is %s', (limits, x, verdict) => {
-    expect(decideWithoutUncertainty(x, limits, nearBands(limits, 5)).verdict).toBe(verdict);
+  ])('one-sided %j with a stated 5 %% band: %d is %s', (limits, x, verdict) => {
+    expect(decideWithoutUncertainty(x, limits, nearBands(limits, { nearLimitPct: 5 })).verdict).toBe(verdict);
   });
 });

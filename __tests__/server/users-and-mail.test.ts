@@ -85,7 +85,12 @@ describe('/api/users (admin)', () => {
       .set(await authHeader('admin'))
       .send({ disabled: false })
       .expect(200);
-    await request(app).get('/api/auth/me').set(header).expect(200);
+    // Disabling ended its sessions: the old token stays refused; a new sign-in works.
+    expect((await request(app).get('/api/auth/me').set(header)).status).toBe(401);
+    await request(app)
+      .get('/api/auth/me')
+      .set(await authHeader('editor', 'to-disable'))
+      .expect(200);
   });
 
   it('an admin cannot demote or disable their own account', async () => {

@@ -3,6 +3,8 @@ import { createApp } from '@/server/app';
 import { AppDataSource } from '@/server/db/data-source';
 import { evaluateReading } from '@/lib/verdict';
 import { useTestDatabase } from '../helpers/test-db';
+import { expectProblem } from '../helpers/problems';
+import { authHeader } from '../helpers/auth';
 
 useTestDatabase();
 const app = createApp({ webDist: null });
@@ -159,5 +161,102 @@ describe('POST /api/verdicts', () => {
     expect(res.status).toBe(400);
     expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
     expect(JSON.stringify(res.body)).not.toMatch(/SyntaxError|at JSON/);
+  });
+});
+
+const paths = (res: request.Response) => res.body.errors.map((e: { path: string }) => e.path);
+
+describe('POST /api/verdicts (issue 10 additions)', () => {
+  it('answers the plain-words explanation beside the reason and the steps', async () => {
+    const res = await post({ spec: { min: 12.5, unit: 'V' }, reading: { value: 12.8, unit: 'V' } }).expect(200);
+    expect(res.body).toMatchObject({ verdict: 'pass', explanation: '12.8 V — above the minimum 12.5 V.' });
+    expect(res.body.reason).toEqual(expect.any(String));
+  });
+
+  it('a negative DC voltage is judged as it reads', async () => {
+    const res = await post({ spec: { min: -15, max: -10, unit: 'V' }, reading: { value: -12, unit: 'V' } }).expect(200);
+    expect(res.body.verdict).toBe('pass');
+  });
+
+  it('takes spec.mode, spec.engineRpm and reading.mode, and refuses a reading taken in another mode on reading.mode', async () => {
+    const spec = { min: 50, unit: 'V', mode: 'ac_voltage', engineRpm: 5000 };
+    const ok = await post({ spec, reading: { value: 60, unit: 'V', mode: 'ac_voltage' } }).expect(200);
+    expect(ok.body.steps[0].label).toBe('Meter reading on AC volts (rms), engine at 5 000 rpm');
+    const res = await post({ spec, reading: { value: 60, unit: 'V', mode: 'dc_voltage' } });
+    expectProblem(res, 422);
+    expect(paths(res)).toContain('reading.mode');
+  });
+
+  it('an unknown mode is a 400 naming the field', async () => {
+    const res = await post({ spec: { min: 1, unit: 'V', mode: 'ac_volts' }, reading: { value: 2, unit: 'V' } });
+    expectProblem(res, 400);
+  });
+
+  it('takes spec.nearLimit in the spec unit', async () => {
+    const body = { spec: { min: 12.5, unit: 'V', nearLimit: 0.2 }, reading: { value: 12.6, unit: 'V' } };
+    const res = await post(body).expect(200);
+    expect(res.body.verdict).toBe('marginal');
+  });
+
+  it.each([
+    ['meter.percent 1e308', { percent: 1e308, counts: 2, countValue: 0.01, unit: 'Ω' }, 'meter.percent'],
+    ['a countValue of 0 with counts', { percent: 1, counts: 2, countValue: 0, unit: 'Ω' }, 'meter.countValue'],
+  ])('%s is a 422 naming the field, not a 500', async (_name, meter, field) => {
+    const res = await post({ spec: { min: 2, max: 4, unit: 'Ω' }, reading: { value: 3, unit: 'Ω' }, meter });
+    expectProblem(res, 422);
+    expect(paths(res)).toContain(field);
+  });
+
+  it('a library peak-voltage spec is read in peak volts, inferred from its parameter', async () => {
+    const [spec] = await AppDataSource.query(
+      "SELECT id, unit, min_value AS min FROM specs WHERE parameter = 'Primary peak voltage' AND status = 'published' LIMIT 1",
+    );
+    const ok = await post({ specId: spec.id, reading: { value: spec.min * 2, unit: spec.unit, mode: 'peak_voltage' } });
+    expect(ok.status).toBe(200);
+    expect(ok.body.steps[0].label).toMatch(/^Meter reading on peak volts/);
+    const res = await post({ specId: spec.id, reading: { value: spec.min * 2, unit: spec.unit, mode: 'dc_voltage' } });
+    expectProblem(res, 422);
+    expect(paths(res)).toContain('reading.mode');
+  });
+
+  it('a library spec’s stated mode, engine speed and near-limit band are used', async () => {
+    const [spec] = await AppDataSource.query(
+      "SELECT id FROM specs WHERE parameter = 'Rest voltage' AND min_value = 12.6 AND status = 'published' LIMIT 1",
+    );
+    await AppDataSource.query("UPDATE specs SET mode = 'dc_voltage', near_limit = 0.2, engine_rpm = 0 WHERE id = ?", [
+      spec.id,
+    ]);
+    try {
+      const near = await post({ specId: spec.id, reading: { value: 12.8, unit: 'V', mode: 'dc_voltage' } }).expect(200);
+      expect(near.body.verdict).toBe('marginal'); // 12.8 − 12.6 = 0.2 exactly: on the stated band's edge
+      expect(near.body.steps[0].label).toBe('Meter reading on DC volts, engine at 0 rpm');
+      const wrong = await post({ specId: spec.id, reading: { value: 12.8, unit: 'V', mode: 'ac_voltage' } });
+      expect(paths(wrong)).toContain('reading.mode');
+    } finally {
+      // The worker's database is shared by later files: put the demo row back.
+      await AppDataSource.query('UPDATE specs SET mode = NULL, near_limit = NULL, engine_rpm = NULL WHERE id = ?', [
+        spec.id,
+      ]);
+    }
+  });
+
+  it.each([
+    ['a continuity check', { max: 0.5, unit: 'Ω', mode: 'continuity' }, { value: 0.1, unit: 'Ω', mode: 'continuity' }],
+    [
+      'a diode check',
+      { min: 0.4, max: 0.8, unit: 'V', mode: 'diode_forward' },
+      { value: 0.6, unit: 'V', mode: 'diode_forward' },
+    ],
+  ])('%s goes on a job like any other reading', async (label, spec, reading) => {
+    const me = await authHeader('contributor', 'mode-checker');
+    const job = (await request(app).post('/api/jobs').set(me).send({ machineLabel: 'Trail bike' }).expect(201)).body;
+    const res = await request(app)
+      .post(`/api/jobs/${job.id}/readings`)
+      .set(me)
+      .set('Idempotency-Key', `mode-${label.replace(/\W/g, '')}-${Date.now()}`)
+      .send({ spec, reading, label })
+      .expect(201);
+    expect(res.body).toMatchObject({ verdict: 'pass', label });
+    expect(res.body.inputs.reading.mode).toBe(reading.mode);
   });
 });

@@ -5,12 +5,14 @@ import { JobSummary } from '@/components/jobs/job-summary';
 import { QueueNotice } from '@/components/jobs/queue-notice';
 import { ReadingGroups } from '@/components/jobs/reading-groups';
 import { jobGate } from '@/components/jobs/job-gate';
+import { JobDiagnosis } from '@/components/plans/job-diagnosis';
 import { MainAndSide } from '@/components/ui/main-and-side';
 import { Screen } from '@/components/ui/screen';
 import { EmptyState } from '@/components/ui/states';
 import { describeError } from '@/lib/api/describe-error';
 import type { ReadingDto } from '@/lib/contracts/jobs';
 import { useDownloadCsvMutation, useJobQuery, useUpdateJobMutation } from '@/lib/hooks/use-jobs';
+import { useRunsQuery } from '@/lib/hooks/use-plans';
 import { useReadingQueue } from '@/lib/hooks/use-reading-queue';
 import { useSession } from '@/lib/session/session-provider';
 
@@ -24,6 +26,7 @@ export default function JobSheetScreen() {
   const notes = useUpdateJobMutation();
   const csv = useDownloadCsvMutation();
   const queue = useReadingQueue();
+  const runs = useRunsQuery(id, session.status === 'signed-in');
 
   const gate = jobGate({
     sessionStatus: session.status,
@@ -43,6 +46,12 @@ export default function JobSheetScreen() {
     );
   const side = (
     <>
+      <JobDiagnosis
+        open={open}
+        runs={runs.data ?? []}
+        onDiagnose={() => router.push(`/jobs/${id}/plans`)}
+        onOpenRun={(r) => router.push(`/jobs/${id}/runs/${r.id}`)}
+      />
       <JobNotes
         notes={j.notes}
         pending={notes.isPending}

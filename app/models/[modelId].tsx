@@ -1,12 +1,14 @@
 import { StyleSheet, View } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
-import { ComponentSpecs } from '@/components/library/component-specs';
+import { SystemSection } from '@/components/plans/system-section';
 import { modelTitle } from '@/lib/format/model-title';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
 import { describeError } from '@/lib/api/describe-error';
 import { useModelQuery } from '@/lib/hooks/use-library';
+import { usePlansQuery } from '@/lib/hooks/use-plans';
+import { groupBySystem } from '@/lib/specs/systems';
 import { Spacing } from '@/lib/theme';
 import { useIsWide } from '@/lib/theme/use-theme';
 
@@ -15,6 +17,7 @@ export default function ModelSheetScreen() {
   const router = useRouter();
   const wide = useIsWide();
   const model = useModelQuery(Number(modelId));
+  const plans = usePlansQuery({ modelId: Number(modelId) }, Number(modelId) > 0);
 
   if (model.isPending)
     return (
@@ -41,13 +44,17 @@ export default function ModelSheetScreen() {
       {m.components.length === 0 ? (
         <EmptyState message="No specs for this model yet." />
       ) : (
-        <View style={[styles.grid, wide && styles.gridWide]}>
-          {m.components.map((c) => (
-            <View key={c.id} style={wide ? styles.cellWide : undefined}>
-              <ComponentSpecs component={c} onOpenSpec={(id) => router.push(`/specs/${id}`)} />
-            </View>
-          ))}
-        </View>
+        groupBySystem(m.components).map((g) => (
+          <SystemSection
+            key={g.system}
+            system={g.system}
+            components={g.components}
+            plans={(plans.data ?? []).filter((p) => p.system === g.system)}
+            wide={wide}
+            onOpenSpec={(id) => router.push(`/specs/${id}`)}
+            onOpenPlan={(p) => router.push(`/plans/${p.id}?modelId=${m.id}`)}
+          />
+        ))
       )}
     </Screen>
   );
@@ -55,7 +62,4 @@ export default function ModelSheetScreen() {
 
 const styles = StyleSheet.create({
   intro: { gap: Spacing.xs },
-  grid: { gap: Spacing.md },
-  gridWide: { flexDirection: 'row', flexWrap: 'wrap' },
-  cellWide: { width: '49%', flexGrow: 1 },
 });

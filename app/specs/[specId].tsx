@@ -8,7 +8,7 @@ import { modelTitle } from '@/lib/format/model-title';
 import { RevisionHistory } from '@/components/history/revision-history';
 import { EditSpecButton } from '@/components/spec-editor/edit-spec-button';
 import { SafetyNotes } from '@/components/library/safety-notes';
-import { cautionCategories, isRestVoltage } from '@/lib/specs/classify';
+import { cautionCategories, defaultMode, isRestVoltage } from '@/lib/specs/classify';
 import { SpecValues } from '@/components/library/spec-values';
 import { FormAlert } from '@/components/ui/form-alert';
 import { LinkRow } from '@/components/ui/link-row';
@@ -57,6 +57,10 @@ export default function SpecCardScreen() {
           unit: s.unit,
           refTempC: s.refTempC,
           material: s.material,
+          // A spec without a stated mode is read in the one its parameter's words imply.
+          mode: s.mode ?? defaultMode(s.parameter, s.quantityKind),
+          nearLimit: s.nearLimit,
+          engineRpm: s.engineRpm,
         }}
         job={{
           spec: { id: s.id, modelId: s.model.id, parameter: s.parameter, componentName: s.component.name },

@@ -107,8 +107,11 @@ export function BandPicture({ result }: { result: VerdictResult }) {
         </Svg>
       )}
       <Text variant="small" color="textMuted">
-        Green, plain: inside the limits · amber: marginal zone
-        {result.expandedUncertainty !== null ? ' (limit ± U)' : ' (near-limit band)'} · red, hatched: outside
+        Green, plain: inside the limits
+        {band.marginal.length
+          ? ` · amber: marginal zone${result.expandedUncertainty !== null ? ' (limit ± U)' : ' (near-limit band)'}`
+          : ''}{' '}
+        · red, hatched: outside
         {band.interval ? ' · bar: reading ± U (k = 2)' : ''}
       </Text>
     </View>

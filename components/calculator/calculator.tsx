@@ -1,40 +1,35 @@
-import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { calculate, correctionsFor, emptyForm, type CalculatorForm } from '@/lib/calculator/form';
-import { useMeterMemory } from '@/lib/hooks/use-meter-memory';
-import { unitsOfKind, type QuantityKind } from '@/lib/units';
-import type { SpecLimits } from '@/lib/verdict';
+import { calculate, correctionsFor, countHint, LEAD_UNIT, type CalculatorForm } from '@/lib/calculator/form';
+import { unitsOfKind, type CanonicalUnit, type QuantityKind } from '@/lib/units';
+import { modeForKind, modeInstruction, type SpecLimits } from '@/lib/verdict';
 import { Spacing } from '@/lib/theme';
 import type { AddToJobTarget } from '@/lib/hooks/use-add-to-job';
 import { AddToJob } from '../jobs/add-to-job';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
+import { MemoryChips, type MemoryChip } from './memory-chips';
+import { OptionalFields } from './optional-fields';
 import { QuantityField } from './quantity-field';
+import { useCalculatorForm } from './use-calculator-form';
 import { VerdictPanel } from './verdict-panel';
+import { VerdictSummary } from './verdict-summary';
 
 /** `job`: where "Add to job" sends the reading (the spec, a job and re-take from the screen's address). */
 export type CalculatorProps = { spec: SpecLimits; kind: QuantityKind; testID?: string; job?: AddToJobTarget };
 
-/** Meter reading in, corrected value and verdict out, recalculated as you type. */
+const RESISTANCE_UNITS = unitsOfKind('resistance');
+
+/**
+ * Meter reading in, corrected value and verdict out, recalculated as you type. The meter mode is
+ * the first instruction; the verdict sits right under the reading (and stays in view while the
+ * optional corrections, collapsed until asked for, are typed).
+ */
 export function Calculator({ spec, kind, testID = 'calculator', job }: CalculatorProps) {
-  const [form, setForm] = useState<CalculatorForm>(() => emptyForm(spec.unit));
-  const [memory, remember] = useMeterMemory();
+  const { form, set, fromMemory, clearLead, clearMeter } = useCalculatorForm(kind, spec.unit);
   const units = unitsOfKind(kind);
   const allowed = correctionsFor(kind, spec.material);
-
-  useEffect(() => {
-    // eslint-disable-next-line react-hooks/set-state-in-effect -- the remembered meter arrives from storage after the first render
-    if (memory) setForm((f) => ({ ...f, ...memory, lead: allowed.leads ? memory.lead : '' }));
-  }, [memory, allowed.leads]);
-  // eslint-disable-next-line react-hooks/set-state-in-effect -- a different spec's unit resets the typed values
-  useEffect(() => setForm((f) => ({ ...emptyForm(spec.unit), ...pickMeter(f) })), [spec.unit]);
-
-  const set = (patch: Partial<CalculatorForm>) => {
-    const next = { ...form, ...patch };
-    setForm(next);
-    if (['lead', 'meterPercent', 'meterCounts', 'meterCountValue'].some((k) => k in patch)) remember(pickMeter(next));
-  };
-  const { input, result, errors } = calculate(spec, kind, form);
+  const mode = spec.mode ?? modeForKind(kind);
+  const { input, result, errors } = calculate({ ...spec, mode }, kind, form, mode);
   const field = (name: keyof CalculatorForm, label: string, unitKey?: keyof CalculatorForm, hint?: string) => (
     <QuantityField
       label={label}
@@ -42,54 +37,78 @@ export function Calculator({ spec, kind, testID = 'calculator', job }: Calculato
       onChangeText={(v) => set({ [name]: v })}
       error={errors[name]}
       hint={hint}
-      unit={unitKey ? (form[unitKey] as CalculatorForm['readingUnit']) : undefined}
-      units={unitKey ? units : undefined}
+      unit={unitKey ? (form[unitKey] as CanonicalUnit) : undefined}
+      units={unitKey === 'leadUnit' ? [LEAD_UNIT] : unitKey === 'seriesUnit' ? RESISTANCE_UNITS : units}
       onChangeUnit={unitKey ? (u) => set({ [unitKey]: u }) : undefined}
       testID={`${testID}-${name}`}
     />
   );
+  const chips: MemoryChip[] = [];
+  if (fromMemory.lead && form.lead) chips.push({ key: 'lead', text: `Leads ${form.lead} Ω`, onClear: clearLead });
+  if (fromMemory.meter)
+    chips.push({
+      key: 'meter',
+      text: `Meter ±(${form.meterPercent || 0} % + ${form.meterCounts || 0} × ${form.meterCountValue || 0} ${form.meterUnit})`,
+      onClear: clearMeter,
+    });
+  const optional = [allowed.leads && 'leads', allowed.series && 'resistor', allowed.temperature && 'temperature']
+    .filter(Boolean)
+    .concat('meter accuracy')
+    .join(', ');
 
   return (
     <Card testID={testID}>
       <Text variant="heading">Check a reading</Text>
+      <Text variant="label" color="primary" testID="mode-instruction">
+        {modeInstruction(mode, spec.engineRpm)}
+      </Text>
+      {field('reading', 'Meter reading', 'readingUnit')}
       {errors.spec ? (
-        <Text color="fail" accessibilityRole="alert">
+        <Text color="fail" accessibilityRole="alert" testID="spec-error">
           {errors.spec}
         </Text>
       ) : null}
-      {field('reading', 'Meter reading', 'readingUnit')}
-      {allowed.leads &&
-        field('lead', 'Test leads, probes shorted', 'leadUnit', 'Subtracted from the reading; usually 0.3–1.6 Ω')}
-      {allowed.series &&
-        field(
-          'series',
-          'Series resistor (cap or suppressor)',
-          'seriesUnit',
-          'Subtracted when it cannot be removed without damage',
-        )}
-      {allowed.series && form.series.trim() !== '' && field('seriesTolerancePct', 'Series resistor tolerance ±%')}
-      {allowed.temperature &&
-        field('temperatureC', 'Winding temperature °C', undefined, `Corrected to ${spec.refTempC ?? 20} °C for copper`)}
-      <Text variant="label" color="textMuted">
-        Meter accuracy ±(% of reading + counts) — optional
-      </Text>
-      <View style={styles.pair}>
-        <View style={styles.grow}>{field('meterPercent', '% of reading')}</View>
-        <View style={styles.grow}>{field('meterCounts', 'Counts')}</View>
-      </View>
-      {field('meterCountValue', 'One count is worth', 'meterUnit', 'The last digit on the range used, e.g. 0.1 Ω')}
-      {result ? (
-        <VerdictPanel result={result} />
-      ) : (
+      {result ? <VerdictSummary result={result} /> : null}
+      {!result && !errors.spec && form.reading.trim() === '' ? (
         <Text color="textMuted">Type the meter reading to see the verdict.</Text>
-      )}
+      ) : null}
+      <MemoryChips chips={chips} />
+      <OptionalFields what={optional}>
+        {allowed.leads &&
+          field(
+            'lead',
+            'Test leads, probes shorted',
+            'leadUnit',
+            'In ohms, subtracted from the reading; usually 0.3–1.6 Ω',
+          )}
+        {allowed.series &&
+          field(
+            'series',
+            'Series resistor (cap or suppressor)',
+            'seriesUnit',
+            'Subtracted when it cannot be removed without damage',
+          )}
+        {allowed.series && form.series.trim() !== '' && field('seriesTolerancePct', 'Series resistor tolerance ±%')}
+        {allowed.temperature &&
+          field(
+            'temperatureC',
+            'Winding temperature °C',
+            undefined,
+            `Corrected to ${spec.refTempC ?? 20} °C for copper`,
+          )}
+        <Text variant="label" color="textMuted">
+          Meter accuracy ±(% of reading + counts)
+        </Text>
+        <View style={styles.pair}>
+          <View style={styles.grow}>{field('meterPercent', '% of reading')}</View>
+          <View style={styles.grow}>{field('meterCounts', 'Counts')}</View>
+        </View>
+        {field('meterCountValue', 'One count is worth', 'meterUnit', countHint(form.meterUnit))}
+      </OptionalFields>
+      {result ? <VerdictPanel result={result} /> : null}
       <AddToJob input={input} result={result} {...job} />
     </Card>
   );
-}
-
-function pickMeter(f: CalculatorForm) {
-  return { lead: f.lead, meterPercent: f.meterPercent, meterCounts: f.meterCounts, meterCountValue: f.meterCountValue };
 }
 
 const styles = StyleSheet.create({

@@ -7,7 +7,7 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { UnitPicker } from './unit-picker';
 
-export type TypedLimits = { min: string; nominal: string; max: string; refTempC: string };
+export type TypedLimits = { min: string; nominal: string; max: string; refTempC: string; engineRpm: string };
 
 export type LimitsFormProps = {
   kind: QuantityKind;
@@ -16,7 +16,10 @@ export type LimitsFormProps = {
   unit: CanonicalUnit;
   onChangeUnit: (u: CanonicalUnit) => void;
   copper: boolean;
-  onChangeCopper: (c: boolean) => void;
+  /** Absent: the part is not a winding, so no choice is offered. */
+  onChangeCopper?: (c: boolean) => void;
+  /** Charging checks are read at a stated engine speed. */
+  showEngineRpm?: boolean;
 };
 
 const LABELS = { min: 'Minimum', nominal: 'Nominal', max: 'Maximum' } as const;
@@ -30,6 +33,7 @@ export function LimitsForm({
   onChangeUnit,
   copper,
   onChangeCopper,
+  showEngineRpm,
 }: LimitsFormProps) {
   return (
     <Card testID="limits-form">
@@ -49,7 +53,16 @@ export function LimitsForm({
         ))}
       </View>
       <UnitPicker label="Spec unit" units={unitsOfKind(kind)} value={unit} onChange={onChangeUnit} />
-      {kind === 'resistance' ? (
+      {showEngineRpm ? (
+        <TextField
+          label="Engine speed, rpm (optional)"
+          value={limits.engineRpm}
+          inputMode="numeric"
+          onChangeText={(v) => onChangeLimits({ ...limits, engineRpm: v })}
+          testID="limit-engine-rpm"
+        />
+      ) : null}
+      {kind === 'resistance' && onChangeCopper ? (
         <>
           <ChoiceRow
             label="Winding"

@@ -1,24 +1,32 @@
 import { StyleSheet, View } from 'react-native';
-import type { AddOutcome } from '@/lib/offline/queue-runner';
+import type { ShownOutcome } from '@/lib/hooks/use-add-to-job';
 import { Spacing } from '@/lib/theme';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
 
-export type AddToJobOutcomeProps = { outcome: AddOutcome; jobId: number; onOpen: () => void };
+export type AddToJobOutcomeProps = { outcome: ShownOutcome; jobId: number; onOpen: () => void };
 
 /** What became of a reading sent from the calculator: added, queued on the device, or refused; and the way to its sheet. */
 export function AddToJobOutcome({ outcome, jobId, onOpen }: AddToJobOutcomeProps) {
   const message =
     outcome.status === 'sent'
       ? `Added to job #${jobId}`
-      : outcome.status === 'queued'
-        ? 'Queued — will send when online'
-        : `Not added: ${outcome.message}`;
+      : outcome.status === 'delivered'
+        ? `Sent — added to job #${jobId}`
+        : outcome.status === 'queued'
+          ? 'Queued — will send when online'
+          : `Not added: ${outcome.message}`;
   return (
     <View style={styles.outcome} accessibilityRole="alert" accessibilityLiveRegion="polite">
       <Text
         variant="label"
-        color={outcome.status === 'sent' ? 'pass' : outcome.status === 'queued' ? 'text' : 'fail'}
+        color={
+          outcome.status === 'sent' || outcome.status === 'delivered'
+            ? 'pass'
+            : outcome.status === 'queued'
+              ? 'text'
+              : 'fail'
+        }
         testID="add-to-job-outcome"
       >
         {message}

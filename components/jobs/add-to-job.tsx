@@ -92,7 +92,8 @@ function AddToJobPanel({ input, result, target }: PanelProps) {
       {mode === 'picking' ? (
         <JobPicker
           jobs={job.jobs.data}
-          loading={job.jobs.isPending}
+          loading={job.jobs.isPending && job.jobs.fetchStatus !== 'paused'}
+          offline={job.jobs.isPending && job.jobs.fetchStatus === 'paused'}
           error={job.jobs.error ? describeError(job.jobs.error) : null}
           onRetry={job.jobs.refetch}
           onPick={(picked) => void send(picked.id)}

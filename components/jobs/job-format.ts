@@ -51,6 +51,8 @@ export function asVerdictResult(r: ReadingDto): VerdictResult {
     expandedUncertainty: r.expandedUncertainty,
     conformanceProbability: r.conformanceProbability,
     reason: r.reason,
+    explanation: r.explanation ?? r.reason,
+    valueText: r.valueText ?? formatNumber(r.value, 6),
     steps: r.steps,
     zones: r.zones,
   };

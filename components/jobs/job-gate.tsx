@@ -1,6 +1,6 @@
 import type { ReactElement } from 'react';
 import { Screen } from '@/components/ui/screen';
-import { ErrorState, LoadingState } from '@/components/ui/states';
+import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
 import { ApiError } from '@/lib/api/client';
 import { describeError } from '@/lib/api/describe-error';
 import type { useSession } from '@/lib/session/session-provider';
@@ -9,7 +9,7 @@ import { SignInPrompt } from './sign-in-prompt';
 export type JobGateProps = {
   sessionStatus: ReturnType<typeof useSession>['status'];
   validId: boolean;
-  query: { isPending: boolean; error: unknown; refetch: () => unknown };
+  query: { isPending: boolean; fetchStatus?: string; error: unknown; refetch: () => unknown };
   loadingLabel: string;
   testID: string;
 };
@@ -38,6 +38,12 @@ export function jobGate({ sessionStatus, validId, query, loadingLabel, testID }:
     return (
       <Screen>
         <ErrorState message="This address does not name a job." />
+      </Screen>
+    );
+  if (query.isPending && query.fetchStatus === 'paused')
+    return (
+      <Screen>
+        <EmptyState message="Offline — this is not saved on this device yet. It loads when the connection returns." />
       </Screen>
     );
   if (query.isPending)

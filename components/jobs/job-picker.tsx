@@ -10,6 +10,8 @@ import { machineName } from './job-format';
 export type JobPickerProps = {
   jobs: JobSummaryDto[] | undefined;
   loading: boolean;
+  /** No connection and no kept list: a new job can still be started (it is queued). */
+  offline?: boolean;
   error: string | null;
   onRetry: () => void;
   onPick: (job: JobSummaryDto) => void;
@@ -18,12 +20,17 @@ export type JobPickerProps = {
 };
 
 /** Which open job the reading goes on, or a new one. */
-export function JobPicker({ jobs, loading, error, onRetry, onPick, onNewJob, onCancel }: JobPickerProps) {
+export function JobPicker({ jobs, loading, offline, error, onRetry, onPick, onNewJob, onCancel }: JobPickerProps) {
   const t = useTheme();
   return (
     <View style={styles.wrap} testID="job-picker">
       <Text variant="label">Add the reading to which job?</Text>
       {loading ? <LoadingState label="Loading your open jobs" /> : null}
+      {offline ? (
+        <Text color="textMuted" testID="job-picker-offline">
+          Offline — your open jobs are not saved on this device yet.
+        </Text>
+      ) : null}
       {error ? <ErrorState message={error} onRetry={onRetry} /> : null}
       {jobs && jobs.length === 0 ? (
         <Text color="textMuted">You have no open job. Start one for this machine.</Text>

@@ -21,6 +21,12 @@ export function EditorActions() {
         onPress={() => router.push('/editor/specs/new')}
         testID="home-new-spec"
       />
+      <Button
+        label="Edit test plans"
+        variant="secondary"
+        onPress={() => router.push('/editor/plans')}
+        testID="home-edit-plans"
+      />
     </>
   );
 }

@@ -13,10 +13,20 @@ export class ApiError extends Error {
     message: string,
     readonly errors: FieldError[] = [],
     readonly body: Record<string, unknown> = {},
+    /** Seconds to wait before trying again (a 429's or 503's Retry-After), when the server said. */
+    readonly retryAfter: number | null = null,
   ) {
     super(message);
     this.name = 'ApiError';
   }
+}
+
+/** Retry-After in seconds (RFC 9110 §10.2.3: delay-seconds or an HTTP date), or the body's `retryAfter`. */
+function retryAfterOf(header: string | null | undefined, body: { retryAfter?: unknown }): number | null {
+  if (header && /^\d+$/.test(header.trim())) return Number(header.trim());
+  const date = header ? Date.parse(header) : NaN;
+  if (Number.isFinite(date)) return Math.max(0, Math.ceil((date - Date.now()) / 1000));
+  return typeof body.retryAfter === 'number' && body.retryAfter >= 0 ? Math.ceil(body.retryAfter) : null;
 }
 
 export const BASE_URL = process.env.EXPO_PUBLIC_API_URL ?? '';
@@ -39,9 +49,14 @@ export function requestHeaders(accept = 'application/json'): Record<string, stri
 }
 
 /** The ApiError for an answer that is not ok, from its problem details (when it has any). */
-export function errorFromAnswer(status: number, text: string, sentToken: boolean): ApiError {
+export function errorFromAnswer(
+  status: number,
+  text: string,
+  sentToken: boolean,
+  retryAfterHeader?: string | null,
+): ApiError {
   if (status === 401 && sentToken) onUnauthorized?.();
-  let p: { code?: string; detail?: string; errors?: FieldError[] } = {};
+  let p: { code?: string; detail?: string; errors?: FieldError[]; retryAfter?: unknown } = {};
   try {
     p = text ? JSON.parse(text) : {};
   } catch {
@@ -53,6 +68,7 @@ export function errorFromAnswer(status: number, text: string, sentToken: boolean
     p.detail ?? `The server answered ${status}.`,
     p.errors ?? [],
     p as Record<string, unknown>,
+    retryAfterOf(retryAfterHeader, p),
   );
 }
 
@@ -64,7 +80,7 @@ async function send(path: string, init: RequestInit): Promise<{ status: number; 
     headers.set('Content-Type', 'application/json');
   const res = await fetch(`${BASE_URL}${path}`, { ...init, headers, credentials: 'include' });
   const text = await res.text();
-  if (!res.ok) throw errorFromAnswer(res.status, text, headers.has('Authorization'));
+  if (!res.ok) throw errorFromAnswer(res.status, text, headers.has('Authorization'), res.headers.get('Retry-After'));
   return { status: res.status, text };
 }
 
@@ -99,5 +115,5 @@ export async function apiFetchBlob(path: string, accept: string): Promise<Blob> 
   const headers = requestHeaders(accept);
   const res = await fetch(`${BASE_URL}${path}`, { headers, credentials: 'include' });
   if (res.ok) return res.blob();
-  throw errorFromAnswer(res.status, await res.text(), 'Authorization' in headers);
+  throw errorFromAnswer(res.status, await res.text(), 'Authorization' in headers, res.headers.get('Retry-After'));
 }

@@ -32,7 +32,14 @@ export function uploadFile<T>(path: string, field: string, file: UploadFile, onP
     };
     xhr.onload = () => {
       if (xhr.status < 200 || xhr.status >= 300)
-        return reject(errorFromAnswer(xhr.status, xhr.responseText, 'Authorization' in headers));
+        return reject(
+          errorFromAnswer(
+            xhr.status,
+            xhr.responseText,
+            'Authorization' in headers,
+            xhr.getResponseHeader('Retry-After'),
+          ),
+        );
       try {
         resolve(JSON.parse(xhr.responseText) as T);
       } catch {

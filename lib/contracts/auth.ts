@@ -1,10 +1,25 @@
 /** Account requests and answers, shared by the client forms and the server. */
 import { z } from 'zod';
 import { ROLES, type Role } from './enums';
+import { safeText } from './text';
+
+// Spaces a browser, a paste or a phone keyboard can leave around an address: every Unicode space
+// and line break (\s covers NBSP, U+3000 and the BOM) plus the zero-width ones \s leaves out.
+const EDGE_SPACE = /^[\s\u200B-\u200D\u2060]+|[\s\u200B-\u200D\u2060]+$/g;
+
+/**
+ * The one form of an e-mail address: what is stored, compared, looked up and used as a
+ * rate-limit key. NFKC first (full-width letters become ASCII, U+3000 a plain space), then
+ * the edges trimmed, then lower-cased, so "Ｔech@Shop.example\u00A0" and "tech@shop.example"
+ * are one address with one sign-in budget.
+ */
+export function normalizeEmail(raw: string): string {
+  return raw.normalize('NFKC').replace(EDGE_SPACE, '').toLowerCase();
+}
 
 export const Email = z
   .string({ error: 'E-mail is required' })
-  .trim()
+  .overwrite(normalizeEmail)
   .min(3)
   .max(254)
   .email('Enter a valid e-mail address');
@@ -17,11 +32,8 @@ export const NewPassword = z
 export const SignUpBody = z
   .object({
     email: Email,
-    displayName: z
-      .string({ error: 'Name is required' })
-      .trim()
+    displayName: safeText(80, { error: 'Name is required' })
       .min(2, 'Use at least 2 characters')
-      .max(80)
       .regex(/^[^<>]*$/, 'Angle brackets are not allowed'),
     password: NewPassword,
   })
@@ -46,7 +58,7 @@ export type ChangePasswordBody = z.infer<typeof ChangePasswordBody>;
 export const ROLE_VALUES = ROLES;
 export type RoleValue = Role;
 
-export const UsersQuery = z.object({ q: z.string().trim().max(120).optional() });
+export const UsersQuery = z.object({ q: safeText(120).optional() });
 export const UpdateUserBody = z
   .object({
     role: z.enum(ROLE_VALUES).optional(),

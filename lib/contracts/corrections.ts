@@ -8,23 +8,13 @@ import { specValueIssues, valueSchema, withCreateDefault } from './curation';
 import { REVIEWED_FIELDS, fieldsWith, hasFlag, type SpecValues } from './spec-fields';
 import { CORRECTION_STATUSES, type CorrectionKind, type CorrectionStatus, type Material } from './enums';
 
+import { safeText } from './text';
+
 type ReviewedField = (typeof REVIEWED_FIELDS)[number] & keyof SpecValues;
 
-const line = (label: string, max: number) =>
-  z
-    .string({ error: `${label} must be text` })
-    .trim()
-    .max(max, `${label}: at most ${max} characters`)
-    .refine((s) => !/[\r\n\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(s), `${label} must be one line of plain text`);
-const para = (label: string, max: number) =>
-  z
-    .string({ error: `${label} must be text` })
-    .trim()
-    .max(max, `${label}: at most ${max} characters`)
-    .refine(
-      (s) => !/[\u0000-\u0008\u000B\u000C\u000E-\u001F]/.test(s),
-      `${label} contains an invisible control character`,
-    );
+/** One line of plain text, or a paragraph (lib/contracts/text.ts). */
+const line = (label: string, max: number) => safeText(max, { label });
+const para = (label: string, max: number) => safeText(max, { label, multiline: true });
 const REVIEWED_DEFS = fieldsWith('reviewed');
 
 /**
@@ -55,10 +45,7 @@ export const CitationInput = z
     title: line('source title', 200).refine((s) => s.length > 0, 'source title is required'),
     edition: line('source edition', 200).default(''),
     page: line('source page', 40).refine((s) => s.length > 0, 'source page is required'),
-    url: z
-      .string()
-      .trim()
-      .max(500)
+    url: safeText(500, { label: 'url' })
       .refine((s) => s === '' || /^https?:\/\/\S+$/i.test(s), 'url must start with http:// or https://')
       .nullable()
       .optional()
@@ -129,7 +116,7 @@ export const RejectBody = z
 export const CorrectionsQuery = z.object({
   status: z.enum(CORRECTION_STATUSES).optional(),
   mine: z.enum(['true', 'false']).optional(),
-  make: z.string().trim().max(120).optional(),
+  make: safeText(120, { label: 'make' }).optional(),
   modelId: z.coerce.number().int().positive().optional(),
 });
 

@@ -9,6 +9,7 @@ import { z } from 'zod';
 import { parseUnit, type CanonicalUnit } from '../units';
 import { expectedKind } from '../specs/classify';
 import type { RevisionOrigin } from './enums';
+import { safeText } from './text';
 import type { SpecDetailDto } from './library';
 import {
   fieldsWith,
@@ -19,16 +20,8 @@ import {
   type SpecValues,
 } from './spec-fields';
 
-const CONTROL_CHARS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
-
-/** Trimmed text up to `max` characters; single-line unless `multiline`. */
-const text = (label: string, max: number, multiline = false) =>
-  z
-    .string({ error: `${label} must be text` })
-    .trim()
-    .max(max, `${label} is too long; the limit is ${max} characters`)
-    .refine((s) => !CONTROL_CHARS.test(s), `${label} contains an invisible control character; retype it`)
-    .refine((s) => multiline || !/[\r\n]/.test(s), `${label} must fit on one line`);
+/** Trimmed text up to `max` characters; single-line unless `multiline` (lib/contracts/text.ts). */
+const text = (label: string, max: number, multiline = false) => safeText(max, { label, multiline });
 const required = (label: string, max: number) => text(label, max).refine((s) => s.length > 0, `${label} is required`);
 
 const year = (label: string) =>
@@ -48,10 +41,7 @@ const unit = z.string({ error: 'unit is required' }).transform((s, ctx): Canonic
   return z.NEVER;
 });
 
-const url = z
-  .string()
-  .trim()
-  .max(500, 'source url is too long; the limit is 500 characters')
+const url = safeText(500, { label: 'source url' })
   .refine(
     (s) => s === '' || /^https?:\/\/[^\s/?#"<>]+[^\s"<>]*$/i.test(s),
     'source url must be a web address starting with http:// or https://',
@@ -59,11 +49,10 @@ const url = z
   .nullable()
   .transform((s) => s || null);
 
-export const Reason = z
-  .string({ error: 'reason is required: say why the spec changes' })
-  .trim()
-  .min(3, 'reason must be at least 3 characters')
-  .max(500, 'reason is too long; the limit is 500 characters');
+export const Reason = safeText(500, { label: 'reason', error: 'reason is required: say why the spec changes' }).min(
+  3,
+  'reason must be at least 3 characters',
+);
 
 export const SourceInput = z.object({
   title: required('source title', 200),

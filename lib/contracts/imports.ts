@@ -5,6 +5,7 @@
 import { z } from 'zod';
 import type { ImportStatus } from './enums';
 import { Reason, type FieldChangeDto } from './curation';
+import { safeText } from './text';
 
 const count = (name: string, max: number, fallback: number) =>
   z.coerce
@@ -32,7 +33,7 @@ export type ImportCommitBody = z.infer<typeof ImportCommitBody>;
 /** GET /api/exports/specs.csv: the whole published library, one make, or one model. */
 export const ExportQuery = z
   .object({
-    make: z.string().trim().min(1, 'make must not be empty').max(120).optional(),
+    make: safeText(120, { label: 'make' }).min(1, 'make must not be empty').optional(),
     modelId: z.coerce.number({ error: 'modelId must be a number' }).int().positive().max(2_147_483_647).optional(),
   })
   .refine((q) => !(q.make && q.modelId), { message: 'give make or modelId, not both', path: ['modelId'] });

@@ -1,14 +1,13 @@
 /** Job sheets and their readings: request schemas and answers, shared by client and server. */
 import { z } from 'zod';
+import { safeText } from './text';
 import { VerdictFields, exactlyOneSpec, type VerdictResponse } from './verdicts';
 
 /** VIN / frame numbers: letters, digits, spaces, dashes, dots and slashes. */
-const MachineId = z
-  .string()
-  .trim()
-  .max(40, 'At most 40 characters')
-  .regex(/^[A-Za-z0-9 ./-]*$/, 'Letters, digits, spaces, dots, dashes and slashes only');
-const Text = (max: number) => z.string().trim().max(max, `At most ${max} characters`);
+const MachineId = safeText(40).regex(/^[A-Za-z0-9 ./-]*$/, 'Letters, digits, spaces, dots, dashes and slashes only');
+/** One line of plain text; job notes may span lines (lib/contracts/text.ts). */
+const Text = (max: number) => safeText(max);
+const Notes = safeText(4000, { multiline: true });
 
 export const CreateJobBody = z
   .object({
@@ -16,7 +15,7 @@ export const CreateJobBody = z
     machineLabel: Text(160).optional(),
     machineId: MachineId.optional(),
     customerRef: Text(80).optional(),
-    notes: Text(4000).optional(),
+    notes: Notes.optional(),
   })
   .strict()
   .refine((b) => b.modelId !== undefined || (b.machineLabel ?? '').length > 0, {
@@ -30,7 +29,7 @@ export const UpdateJobBody = z
     machineLabel: Text(160).optional(),
     machineId: MachineId.optional(),
     customerRef: Text(80).optional(),
-    notes: Text(4000).optional(),
+    notes: Notes.optional(),
     status: z.enum(['open', 'closed']).optional(),
   })
   .strict();
@@ -59,7 +58,10 @@ export type ReadingBody = z.infer<typeof ReadingBody>;
 
 export const IDEMPOTENCY_KEY = /^[A-Za-z0-9_.:-]{8,80}$/;
 
-export type ReadingDto = Omit<VerdictResponse, 'specVersion'> & {
+/** Readings keep the verdict's reason and steps; the plain words and shown value are the live answer's. */
+export type ReadingDto = Omit<VerdictResponse, 'specVersion' | 'explanation' | 'valueText'> & {
+  explanation?: string;
+  valueText?: string;
   id: number;
   jobId: number;
   label: string;

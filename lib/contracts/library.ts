@@ -5,6 +5,7 @@
 import { z } from 'zod';
 import type { CanonicalUnit, Material, QuantityKind, RevisionOrigin, SpecStatus } from './enums';
 import type { SpecSnapshot, SpecValues } from './spec-fields';
+import { safeText } from './text';
 
 export type { QuantityKind } from './enums';
 
@@ -17,18 +18,26 @@ export const IdParams = z.object({
 });
 export type IdParams = z.infer<typeof IdParams>;
 
+/** Query limits (a longer query says nothing a shorter one does not, and costs the server more). */
+export const SEARCH_MAX_CHARS = 120;
+export const SEARCH_MAX_WORDS = 12;
+
 export const SearchQuery = z.object({
   q: z
     .string({ error: 'q is required' })
     .trim()
     .min(1, 'Type at least one character')
-    .max(200, 'Keep the query under 200 characters'),
+    .max(SEARCH_MAX_CHARS, `Keep the query to ${SEARCH_MAX_CHARS} characters or fewer`)
+    .refine(
+      (q) => q.split(/[^\p{L}\p{N}]+/u).filter(Boolean).length <= SEARCH_MAX_WORDS,
+      `Keep the query to ${SEARCH_MAX_WORDS} words or fewer`,
+    ),
   limit: z.coerce.number().int().min(1).max(100).default(40),
 });
 export type SearchQuery = z.infer<typeof SearchQuery>;
 
 export const ModelsQuery = z.object({
-  make: z.string().trim().max(120).optional(),
+  make: safeText(120, { label: 'make' }).optional(),
 });
 export type ModelsQuery = z.infer<typeof ModelsQuery>;
 

@@ -14,7 +14,13 @@ import { REQUIRED_COLUMNS, SPEC_CSV_COLUMNS, type RowProblem, type SpecCsvColumn
 export type ParsedCsv = { rows: { line: number; raw: Record<string, string> }[]; fileErrors: RowProblem[] };
 
 /** As ParsedCsv, but problems confined to one record (wrong cell count) kept apart. */
-export type DetailedParse = ParsedCsv & { rowErrors: RowProblem[] };
+export type DetailedParse = ParsedCsv & {
+  rowErrors: RowProblem[];
+  /** Rows with the wrong number of cells, all of them (rowErrors keeps the first ones). */
+  rowErrorCount: number;
+  /** The file has more rows than the limit: nothing of it is imported. */
+  tooManyRows?: boolean;
+};
 
 type CsvRecord = { line: number; cells: string[]; errors: Papa.ParseError[] };
 
@@ -26,22 +32,25 @@ const QUOTE_REASONS: Record<string, string> = {
     'a quoted cell has text after its closing quote; inside a quoted cell write a quote as two quotes ("")',
 };
 
-function readRecords(text: string): CsvRecord[] {
-  const records: CsvRecord[] = [];
+/**
+ * Hands each record to `onRecord` as papaparse reads it, so no list of every record is
+ * built; `onRecord` returns false to stop reading (a file over the row limit).
+ */
+function readRecords(text: string, onRecord: (record: CsvRecord) => boolean) {
   let pos = 0;
   let line = 1;
   Papa.parse<string[]>(text, {
     delimiter: ',',
     header: false,
     skipEmptyLines: false,
-    step: (result) => {
-      records.push({ line, cells: result.data, errors: result.errors });
+    step: (result, parser) => {
+      const record = { line, cells: result.data, errors: result.errors };
       const end = result.meta.cursor;
       line += (text.slice(pos, end).match(LINE_BREAK) ?? []).length;
       pos = end;
+      if (!onRecord(record)) parser.abort();
     },
   });
-  return records;
 }
 
 /** Papaparse's quote errors for one record, one problem per kind. */
@@ -121,40 +130,64 @@ function cellCountProblem(cells: string[], width: number, line: number): RowProb
   return null;
 }
 
+/** Rows a file may have (the importer's limit, README "CSV import"); a longer file is refused whole. */
+export const MAX_CSV_ROWS = 200_000;
+
+/** Cell-count problems kept (the count of rejected rows is kept in full by the validator). */
+const MAX_ROW_ERRORS = 1000;
+
 /**
- * Parses a spec CSV (header row required). `line` is the physical 1-based line where each
- * record starts. When the header is unusable, `rows` is empty. Rows with the wrong number
- * of cells are left out and reported in `rowErrors` with their line (the rest of the file is
- * fine); `fileErrors` mean the file cannot be used.
+ * Parses a spec CSV (header row required), record by record. `line` is the physical 1-based
+ * line where each record starts. When the header is unusable, `rows` is empty. Rows with the
+ * wrong number of cells are left out and reported in `rowErrors` with their line (the rest of
+ * the file is fine); `fileErrors` mean the file cannot be used. A file of more than `maxRows`
+ * rows stops at once with `tooManyRows`.
  */
-export function parseSpecCsvDetailed(input: string): DetailedParse {
+export function parseSpecCsvDetailed(input: string, maxRows = MAX_CSV_ROWS): DetailedParse {
   const text = input.startsWith('\uFEFF') ? input.slice(1) : input;
-  const result: DetailedParse = { rows: [], fileErrors: [], rowErrors: [] };
+  const result: DetailedParse = { rows: [], fileErrors: [], rowErrors: [], rowErrorCount: 0 };
   if (text.trim() === '') {
     result.fileErrors.push({ line: 1, column: null, reason: 'the file is empty' });
     return result;
   }
-  const records = readRecords(text).filter((r) => !isBlank(r.cells) || r.errors.length > 0);
-  const [headerRecord, ...data] = records;
-  if (headerRecord.errors.length) return { ...result, fileErrors: quoteProblems(headerRecord) };
-  const header = headerRecord.cells.map(normaliseHeader);
-  const headerProblems = checkHeader(header, headerRecord.cells, headerRecord.line);
-  if (headerProblems.length) return { ...result, fileErrors: headerProblems };
-  for (const record of data) {
+  let header: string[] | null = null;
+  let headerLine = 1;
+  let data = 0;
+  readRecords(text, (record) => {
+    if (isBlank(record.cells) && record.errors.length === 0) return true;
+    if (header === null) {
+      headerLine = record.line;
+      if (record.errors.length) result.fileErrors.push(...quoteProblems(record));
+      else
+        result.fileErrors.push(...checkHeader((header = record.cells.map(normaliseHeader)), record.cells, record.line));
+      return result.fileErrors.length === 0;
+    }
+    data += 1;
+    if (data > maxRows) {
+      result.fileErrors.push({
+        line: record.line,
+        column: null,
+        reason: `the file has more than ${maxRows.toLocaleString('en')} rows, the most one import takes; split it into smaller files`,
+      });
+      result.tooManyRows = true;
+      return false;
+    }
     if (record.errors.length) {
       result.fileErrors.push(...quoteProblems(record));
-      continue;
+      return true;
     }
     const countProblem = cellCountProblem(record.cells, header.length, record.line);
     if (countProblem) {
-      result.rowErrors.push(countProblem);
-      continue;
+      result.rowErrorCount += 1;
+      if (result.rowErrors.length < MAX_ROW_ERRORS) result.rowErrors.push(countProblem);
+      return true;
     }
     const raw: Record<string, string> = {};
     header.forEach((column, i) => (raw[column] = record.cells[i]));
     result.rows.push({ line: record.line, raw });
-  }
-  if (data.length === 0)
-    result.fileErrors.push({ line: headerRecord.line, column: null, reason: 'the file has a header but no data rows' });
+    return true;
+  });
+  if (data === 0 && !result.fileErrors.length)
+    result.fileErrors.push({ line: headerLine, column: null, reason: 'the file has a header but no data rows' });
   return result;
 }

@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { parseUnit, unitKind, type CanonicalUnit, type QuantityKind } from '../units';
 import type { Material } from '../contracts/enums';
 import { hasFlag, type FieldRule } from '../contracts/spec-fields';
+import { textProblem } from '../contracts/text';
 import {
   COLUMN_TO_FIELD,
   CSV_FIELDS,
@@ -24,11 +25,10 @@ export function cleanCell(value: string | undefined): string {
   return unneutraliseCell((value ?? '').trim()).trim();
 }
 
-const CONTROL_CHARS = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
 const ACCEPTED_UNITS = 'Ω (or ohm), kΩ, MΩ, V, mV, A, mA, mm, in, thou (or mil)';
 
 /**
- * Free text; only test_points, conditions and notes may span lines. A cell beginning with = + - @ is accepted as plain text: it is stored and
+ * Free text, by the one rule of lib/contracts/text.ts; only test_points, conditions and notes may span lines. A cell beginning with = + - @ is accepted as plain text: it is stored and
  * displayed, never evaluated, and neutralised again on export.
  */
 const text = (column: SpecCsvColumn, max: number, { required = false, multiline = false } = {}) =>
@@ -40,8 +40,10 @@ const text = (column: SpecCsvColumn, max: number, { required = false, multiline 
       const fail = (message: string) => ctx.addIssue({ code: 'custom', message });
       if (required && s === '') fail(`${column} is required`);
       else if (s.length > max) fail(`${column} is ${s.length} characters long; the limit is ${max}`);
-      else if (CONTROL_CHARS.test(s)) fail(`${column} contains an invisible control character; retype the cell`);
-      else if (!multiline && /[\r\n]/.test(s)) fail(`${column} must fit on one line; remove the line break`);
+      else {
+        const problem = textProblem(s, { multiline });
+        if (problem) fail(`${column} ${problem}`);
+      }
       return s;
     });
 
@@ -115,8 +117,10 @@ const url = z
   .transform((value, ctx) => {
     const s = cleanCell(value);
     if (s === '') return null;
+    const problem = textProblem(s);
     if (s.length > 500)
       ctx.addIssue({ code: 'custom', message: `source_url is ${s.length} characters long; the limit is 500` });
+    else if (problem) ctx.addIssue({ code: 'custom', message: `source_url ${problem}` });
     else if (!/^https?:\/\/[^\s/?#"<>]+[^\s"<>]*$/i.test(s))
       ctx.addIssue({ code: 'custom', message: 'source_url must be a web address starting with http:// or https://' });
     return s;

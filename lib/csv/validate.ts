@@ -41,9 +41,16 @@ function differingColumns(a: SpecCsvRow, b: SpecCsvRow): SpecCsvColumn[] {
 
 export type ValidatedCsv = {
   accepted: { line: number; row: SpecCsvRow; warnings: RowProblem[] }[];
+  /** The problems of the first MAX_REJECTED_KEPT rejected rows, by line. */
   rejected: RowProblem[];
+  /** How many rows were rejected in all. */
+  rejectedRows: number;
   fileErrors: RowProblem[];
+  tooManyRows?: boolean;
 };
+
+/** Rejected rows whose problems are kept and shown; the rest are counted (a file of junk stays small in memory). */
+export const MAX_REJECTED_KEPT = 1000;
 
 /**
  * Parses and validates a whole file. `fileErrors` (empty file, bad header, unclosed quote…)
@@ -53,12 +60,25 @@ export type ValidatedCsv = {
  */
 export function validateSpecCsv(text: string): ValidatedCsv {
   const parsed = parseSpecCsvDetailed(text);
-  const result: ValidatedCsv = { accepted: [], rejected: [...parsed.rowErrors], fileErrors: parsed.fileErrors };
+  const result: ValidatedCsv = {
+    accepted: [],
+    rejected: [...parsed.rowErrors],
+    rejectedRows: parsed.rowErrorCount,
+    fileErrors: parsed.fileErrors,
+    tooManyRows: parsed.tooManyRows,
+  };
+  let keptLines = new Set(parsed.rowErrors.map((e) => e.line)).size;
+  const reject = (line: number, problems: RowProblem[]) => {
+    result.rejectedRows += 1;
+    if (keptLines >= MAX_REJECTED_KEPT) return;
+    keptLines += 1;
+    result.rejected.push(...problems.map((p) => ({ ...p, line })));
+  };
   const firstByKey = new Map<string, { line: number; row: SpecCsvRow }>();
   for (const { line, raw } of parsed.rows) {
     const checked = validateSpecRow(raw, line);
     if (!checked.ok) {
-      result.rejected.push(...checked.errors);
+      reject(line, checked.errors);
       continue;
     }
     const key = naturalKey(checked.row);
@@ -69,14 +89,16 @@ export function validateSpecCsv(text: string): ValidatedCsv {
       continue;
     }
     const differing = differingColumns(first.row, checked.row);
-    result.rejected.push({
-      line,
-      column: differing[0] ?? null,
-      reason:
-        differing.length === 0
-          ? `duplicate of line ${first.line}: the same spec with the same values appears twice`
-          : `conflicts with line ${first.line}: the same spec (make, model, years, variant, component, parameter) with a different ${differing.join(', ')}`,
-    });
+    reject(line, [
+      {
+        line,
+        column: differing[0] ?? null,
+        reason:
+          differing.length === 0
+            ? `duplicate of line ${first.line}: the same spec with the same values appears twice`
+            : `conflicts with line ${first.line}: the same spec (make, model, years, variant, component, parameter) with a different ${differing.join(', ')}`,
+      },
+    ]);
   }
   result.rejected.sort((a, b) => a.line - b.line);
   return result;

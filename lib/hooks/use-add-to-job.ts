@@ -34,6 +34,8 @@ export function jobLink(params: { job?: string | string[]; retake?: string | str
 }
 
 export type AddToJobMode = 'idle' | 'picking' | 'creating';
+/** A reading's outcome as shown: as added, or — for one that was queued — what became of it since. */
+export type ShownOutcome = AddOutcome | { status: 'delivered' };
 type Sent = { for: string; jobId: number; outcome: AddOutcome };
 
 export function useAddToJob({ spec, jobId: linkedJob, retakeOf: linkedRetake }: AddToJobTarget) {
@@ -81,6 +83,14 @@ export function useAddToJob({ spec, jobId: linkedJob, retakeOf: linkedRetake }: 
     sending,
     send,
     /** What became of the reading sent for `input`; null once the input changed (a new reading). */
-    doneFor: (input: VerdictInput) => (sent?.for === JSON.stringify(input) ? sent : null),
+    doneFor: (input: VerdictInput): { jobId: number; outcome: ShownOutcome } | null => {
+      if (sent?.for !== JSON.stringify(input)) return null;
+      if (sent.outcome.status !== 'queued') return sent;
+      const fate = queue.fate(sent.outcome.key);
+      return {
+        jobId: sent.jobId,
+        outcome: fate.status === 'waiting' ? sent.outcome : fate,
+      };
+    },
   };
 }

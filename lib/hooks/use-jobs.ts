@@ -23,10 +23,17 @@ export function invalidateJob(qc: QueryClient, jobId: number) {
   ]);
 }
 
+const jobsKey = (status: JobsFilter['status'], q: string) => [...JOBS_KEY, status ?? 'all', q] as const;
+
+/** Fetches the open jobs into the cache (kept on the device), unless a fresh copy is there. */
+export function prefetchOpenJobs(qc: QueryClient) {
+  return qc.prefetchQuery({ queryKey: jobsKey('open', ''), queryFn: () => listJobs({ status: 'open' }) });
+}
+
 export function useJobsQuery(filter: JobsFilter, enabled = true) {
   const q = filter.q?.trim() ?? '';
   return useQuery({
-    queryKey: [...JOBS_KEY, filter.status ?? 'all', q],
+    queryKey: jobsKey(filter.status, q),
     queryFn: () => listJobs({ status: filter.status, q: q || undefined }),
     enabled,
     placeholderData: keepPreviousData,

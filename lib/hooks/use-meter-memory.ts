@@ -1,26 +1,21 @@
 import { useEffect, useState } from 'react';
 import AsyncStorage from '@react-native-async-storage/async-storage';
-import type { CalculatorForm } from '../calculator/form';
+import { EMPTY_MEMORY, parseMemory, type MeterMemory } from '../calculator/memory';
 
-/** The meter accuracy and lead resistance a technician last used, kept on this device. */
-export type MeterMemory = Pick<CalculatorForm, 'lead' | 'meterPercent' | 'meterCounts' | 'meterCountValue'>;
+export type { MeterMemory };
 
-const KEY = 'specbench.meter-memory.v1';
+/** The meter accuracy and lead resistance a technician last used, kept on this device (lib/calculator/memory). */
+const KEY = 'specbench.meter-memory.v2';
 
 export function useMeterMemory(): [MeterMemory | null, (m: MeterMemory) => void] {
   const [memory, setMemory] = useState<MeterMemory | null>(null);
   useEffect(() => {
     AsyncStorage.getItem(KEY)
-      .then((text) =>
-        setMemory(
-          text
-            ? (JSON.parse(text) as MeterMemory)
-            : { lead: '', meterPercent: '', meterCounts: '', meterCountValue: '' },
-        ),
-      )
-      .catch(() => setMemory({ lead: '', meterPercent: '', meterCounts: '', meterCountValue: '' }));
+      .then((text) => setMemory(parseMemory(text)))
+      .catch(() => setMemory(EMPTY_MEMORY));
   }, []);
   const remember = (m: MeterMemory) => {
+    setMemory(m);
     AsyncStorage.setItem(KEY, JSON.stringify(m)).catch(() => undefined);
   };
   return [memory, remember];

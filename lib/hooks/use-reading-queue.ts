@@ -11,9 +11,9 @@ import { ApiError } from '../api/client';
 import { addReading } from '../api/jobs';
 import { describeError } from '../api/describe-error';
 import { ReadingQueueRunner, type AddOutcome, type NewReading } from '../offline/queue-runner';
-import { pendingFor } from '../offline/reading-queue';
+import { pendingFor, sendable } from '../offline/reading-queue';
 import { useSession } from '../session/session-provider';
-import { invalidateJob } from './use-jobs';
+import { invalidateJob, prefetchOpenJobs } from './use-jobs';
 
 const RETRY_EVERY_MS = 10_000;
 
@@ -34,6 +34,14 @@ export function useReadingQueue() {
   const userId = user?.id ?? -1;
   return {
     pendingFor: (jobId: number) => pendingFor(state, userId, jobId),
+    /** Everything this account has waiting on the device (the header's "N readings waiting to be sent"). */
+    pendingCount: sendable(state, userId).length,
+    /** What became of a queued reading: still waiting, refused (with the server's reason), or sent. */
+    fate: (key: string): { status: 'waiting' } | { status: 'rejected'; message: string } | { status: 'delivered' } => {
+      if (state.pending.some((p) => p.key === key)) return { status: 'waiting' };
+      const r = state.rejected.find((x) => x.key === key);
+      return r ? { status: 'rejected', message: r.message } : { status: 'delivered' };
+    },
     rejectedFor: (jobId: number) => state.rejected.filter((r) => r.userId === userId && r.jobId === jobId),
     add: (reading: Omit<NewReading, 'userId'>): Promise<AddOutcome> => runner.add({ ...reading, userId }),
     dismiss: runner.dismiss,
@@ -43,8 +51,9 @@ export function useReadingQueue() {
 /** Mount once, inside the session and query providers. */
 export function useReadingQueueSync() {
   const qc = useQueryClient();
-  const { status, user } = useSession();
-  const userId = status === 'signed-in' ? user?.id : undefined;
+  const { status, user, connected } = useSession();
+  // Only with a token the API accepts: offline, or while the session resumes, readings wait.
+  const userId = status === 'signed-in' && connected ? user?.id : undefined;
 
   useEffect(
     () =>
@@ -61,6 +70,8 @@ export function useReadingQueueSync() {
       void runner.flush(userId);
     };
     flush();
+    // Keep the open jobs on the device, so "Add to job" has its list with no signal.
+    void prefetchOpenJobs(qc);
     const timer = setInterval(flush, RETRY_EVERY_MS);
     // TanStack's online manager follows the browser's online/offline events on web.
     const unsubscribe = onlineManager.subscribe((online) => {
@@ -70,5 +81,5 @@ export function useReadingQueueSync() {
       clearInterval(timer);
       unsubscribe();
     };
-  }, [userId]);
+  }, [userId, qc]);
 }

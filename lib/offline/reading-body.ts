@@ -2,7 +2,8 @@
  * The calculator's engine input → the body of POST /api/jobs/:id/readings. Library
  * specs go by id (the server judges against its own limits and records the version);
  * limits typed by hand go with the reading, with the technician's words for what was
- * measured. Units are the calculator's canonical units, which the API accepts as typed.
+ * measured. Units are the calculator's canonical units, which the API accepts as typed. The
+ * reading carries the meter mode it was taken in, so the server refuses one taken in another mode.
  */
 import type { ReadingBody } from '../contracts/jobs';
 import type { VerdictInput } from '../verdict';
@@ -19,7 +20,7 @@ export function toReadingBody(
 ): ReadingBody {
   const body: ReadingBody =
     'specId' in target
-      ? { specId: target.specId, reading: { ...input.reading } }
+      ? { specId: target.specId, reading: defined({ ...input.reading }) }
       : {
           spec: defined({
             min: input.spec.min ?? undefined,
@@ -29,9 +30,12 @@ export function toReadingBody(
             refTempC: input.spec.refTempC ?? undefined,
             material: input.spec.material ?? undefined,
             nearLimitPct: input.spec.nearLimitPct ?? undefined,
+            nearLimit: input.spec.nearLimit ?? undefined,
+            mode: input.spec.mode ?? undefined,
+            engineRpm: input.spec.engineRpm ?? undefined,
           }),
           label: target.label.trim(),
-          reading: { ...input.reading },
+          reading: defined({ ...input.reading }),
         };
   if (input.leadResistance) body.leadResistance = { ...input.leadResistance };
   if (input.seriesResistance) body.seriesResistance = defined({ ...input.seriesResistance });

@@ -5,7 +5,7 @@
  * caution categories apply. It knows the trade's synonyms (synonyms.ts), so "OCV" is a
  * rest voltage and a "high tension lead" an ignition lead, as the search finds them.
  */
-import type { Material, QuantityKind } from '../contracts/enums';
+import type { Material, MeasurementMode, QuantityKind } from '../contracts/enums';
 import { SYNONYM_GROUPS, synonymGroupsIn, withSynonyms } from './synonyms';
 
 const norm = (s: string) => s.toLowerCase().replace(/\s+/g, ' ').trim();
@@ -43,6 +43,29 @@ export function defaultMaterial(parameter: string, kind: QuantityKind): Material
   return /winding|coil|stator|pulser|pulse generator|pickup|pick-up/.test(p) ? 'copper' : 'none';
 }
 
+/** Ordered: the first pattern that matches a voltage parameter decides its meter mode. */
+const VOLTAGE_MODES: [RegExp, MeasurementMode][] = [
+  [/\bpeak\b|\bcdi output\b/, 'peak_voltage'],
+  [/\bdiode\b|forward voltage|rectifier forward/, 'diode_forward'],
+  [
+    /\ba\.?c\.?\b|\brms\b|stator output|alternator output|charging coil output|generator output|lighting coil/,
+    'ac_voltage',
+  ],
+];
+
+/**
+ * The meter mode a spec is read in when it states none, from its quantity and wording: 'primary
+ * peak voltage' → peak volts (through a peak-reading adapter), 'stator output voltage (AC)' → AC
+ * volts, 'rectifier diode forward voltage' → the diode range, any other voltage → DC volts; a
+ * 'continuity' resistance → continuity; a gap has no meter mode (null).
+ */
+export function defaultMode(parameter: string, kind: QuantityKind): MeasurementMode | null {
+  const p = norm(parameter);
+  if (kind === 'voltage') return VOLTAGE_MODES.find(([pattern]) => pattern.test(p))?.[1] ?? 'dc_voltage';
+  if (kind === 'resistance') return /continuity/.test(p) ? 'continuity' : 'resistance';
+  return kind === 'current' ? 'current' : null;
+}
+
 const REST_VOLTAGE = SYNONYM_GROUPS.find((g) => g.includes('rest voltage'))!;
 
 /** A battery's rest (open-circuit) voltage, under any of its trade names: the screen offers the charge estimate. */
@@ -65,7 +88,11 @@ export function cautionCategories(component: string, parameter: string): Caution
   return CAUTION_CATEGORIES.filter((c) => CAUTION_PATTERNS[c].test(text));
 }
 
-/** The standalone calculator has no spec: the cautions of what it measures ('voltage' is charging and battery work). */
+/**
+ * The standalone calculator has no spec: the cautions of what it measures ('voltage', DC or AC
+ * volts are charging and battery work; peak volts are ignition output, high voltage).
+ */
 export function cautionCategoriesForMode(mode: string): CautionCategory[] {
-  return mode === 'voltage' ? ['charging', 'battery'] : [];
+  if (mode === 'peak_voltage') return ['high-voltage'];
+  return ['voltage', 'dc_voltage', 'ac_voltage'].includes(mode) ? ['charging', 'battery'] : [];
 }

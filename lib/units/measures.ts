@@ -44,6 +44,9 @@ export const length: Measure<string, string> = {
   },
 };
 
+export { current, voltage };
+
+/** convert-units itself, for naming units and picking the best one; the conversion of values is ./exact's. */
 export const convertUnits = configureMeasurements({
   length,
   voltage,

@@ -1,6 +1,7 @@
 /**
  * The one-sentence reason shown beside a verdict. It names the limit involved and, when the
- * uncertainty is known, the interval x ± U that decided it.
+ * uncertainty is known, the interval x ± U that decided it (the formal statement; the plain
+ * words are ./words).
  */
 import { formatQuantity, formatRange } from '../units';
 import type { Decision, NearBands } from './decision';
@@ -8,13 +9,13 @@ import type { CheckedSpec } from './spec';
 
 const NO_METER = 'No meter accuracy was given, so the uncertainty is unknown.';
 
-function limitText(spec: CheckedSpec, side: 'lower' | 'upper'): string {
+export function limitText(spec: CheckedSpec, side: 'lower' | 'upper'): string {
   return side === 'upper'
     ? `the maximum ${formatQuantity(spec.upper as number, spec.unit)}`
     : `the minimum ${formatQuantity(spec.lower as number, spec.unit)}`;
 }
 
-function insideText(spec: CheckedSpec): string {
+export function insideText(spec: CheckedSpec): string {
   if (spec.lower !== undefined && spec.upper !== undefined) {
     return `Inside ${formatRange(spec.lower, null, spec.upper, spec.unit)}`;
   }
@@ -43,16 +44,23 @@ export function reasonWithUncertainty(d: Decision, x: number, U: number, spec: C
   }
 }
 
-export function reasonWithoutUncertainty(d: Decision, x: number, spec: CheckedSpec, bands: NearBands): string {
+/** 'near-limit band 5 % of the tolerance width' / '… 0.2 V, as the spec states' / none. */
+export function bandBasisText(spec: CheckedSpec, bands: NearBands): string {
+  if (bands.basis === 'absolute') return 'near-limit band stated by the spec';
+  if (bands.basis === 'width') return `near-limit band ${bands.pct} % of the tolerance width`;
+  return `near-limit band ${bands.pct} % of the limit, as the spec states`;
+}
+
+export function reasonWithoutUncertainty(d: Decision, distance: number, spec: CheckedSpec, bands: NearBands): string {
   const side = d.side === 'lower' ? 'lower' : 'upper';
   if (d.zone === 'fail') {
-    const limit = (side === 'upper' ? spec.upper : spec.lower) as number;
-    return `${outsideText(spec, side)} by ${formatQuantity(Math.abs(x - limit), spec.unit)}. ${NO_METER}`;
+    return `${outsideText(spec, side)} by ${formatQuantity(distance, spec.unit)}. ${NO_METER}`;
   }
   if (d.zone === 'pass') return `${insideText(spec)}. ${NO_METER}`;
-  const twoSided = spec.lower !== undefined && spec.upper !== undefined;
-  const basis = twoSided ? 'of the tolerance width' : 'of the limit';
-  const band = formatQuantity((side === 'upper' ? bands.upper : bands.lower) as number, spec.unit);
+  const band = side === 'upper' ? bands.upper : bands.lower;
+  if (!band || band.isZero()) {
+    return `Exactly on ${limitText(spec, side)}: neither a pass nor a fail without knowing the meter's accuracy. ${NO_METER}`;
+  }
   const where = d.side === 'both' ? 'of both limits' : `of ${limitText(spec, side)}`;
-  return `${insideText(spec)} but within ${band} ${where} (near-limit band ${spec.nearLimitPct} % ${basis}). ${NO_METER}`;
+  return `${insideText(spec)} but within ${formatQuantity(band.toNumber(), spec.unit)} ${where} (${bandBasisText(spec, bands)}). ${NO_METER}`;
 }

@@ -2,6 +2,7 @@
  * Types of the verdict engine (DESIGN.md §3). POST /api/verdicts maps 1:1 onto
  * `VerdictInput` → `VerdictResult`, so these shapes are a public contract.
  */
+import type { MeasurementMode } from '../contracts/enums';
 import type { CanonicalUnit } from '../units';
 
 export type Verdict = 'pass' | 'marginal' | 'fail';
@@ -14,18 +15,30 @@ export type SpecLimits = {
   /** Temperature the limits are quoted at; default 20 °C. */
   refTempC?: number | null;
   material?: 'copper' | 'none' | null;
-  /** Near-limit band used when the uncertainty is unknown; default 5 (%). */
+  /**
+   * Near-limit band used when the uncertainty is unknown, as a % of the tolerance width (two-sided;
+   * default 5) or of the limit (one-sided; no band unless stated).
+   */
   nearLimitPct?: number | null;
+  /** The same band as an absolute amount in the spec's unit; wins over nearLimitPct. */
+  nearLimit?: number | null;
+  /** How the meter is set; inferred from the unit's quantity when absent. */
+  mode?: MeasurementMode | null;
+  /** Engine speed the reading is taken at (stator output, charging voltage), rpm. */
+  engineRpm?: number | null;
 };
 
 export type Quantity = { value: number; unit: CanonicalUnit };
+
+/** The meter reading, with the mode the meter was on when it matters. */
+export type Reading = Quantity & { mode?: MeasurementMode };
 
 /** Handheld meter accuracy: ±(percent of reading + counts × countValue). */
 export type MeterAccuracy = { percent: number; counts: number; countValue: number; unit: CanonicalUnit };
 
 export type VerdictInput = {
   spec: SpecLimits;
-  reading: Quantity;
+  reading: Reading;
   /** Probes shorted together; subtracted from the reading. */
   leadResistance?: Quantity;
   /** Resistor cap / suppressor lead in series; subtracted, its tolerance adds uncertainty. */
@@ -47,7 +60,12 @@ export type VerdictResult = {
   expandedUncertainty: number | null;
   /** p_c for a normal PDF with u = U/2; null when U is unknown. */
   conformanceProbability: number | null;
+  /** The formal one-line reason (limits, interval, ILAC zone). */
   reason: string;
+  /** The same verdict in workshop words, corrections first. */
+  explanation: string;
+  /** The value as shown: the precision the reading and corrections carried ('88.40', '16.2996'). */
+  valueText: string;
   steps: VerdictStep[];
   zones: VerdictZones;
 };

@@ -8,6 +8,10 @@ import { VerdictInputError, type MeterAccuracy, type Quantity } from './types';
 import { requireFinite, requireUnit } from './validate';
 
 export const COVERAGE_FACTOR = 2;
+/** A meter's accuracy is a few % of reading at worst; more than 100 % is not an accuracy. */
+export const MAX_METER_PERCENT = 100;
+/** Counts of the last digit: a few to a few hundred on any handheld meter. */
+export const MAX_METER_COUNTS = 10000;
 
 function requireNonNegative(value: unknown, field: string): number {
   const v = requireFinite(value, field);
@@ -19,8 +23,20 @@ function requireNonNegative(value: unknown, field: string): number {
 export function meterHalfWidth(reading: Quantity, meter: MeterAccuracy): number {
   const x = requireFinite(reading.value, 'reading.value');
   const percent = requireNonNegative(meter.percent, 'meter.percent');
+  if (percent > MAX_METER_PERCENT) {
+    throw new VerdictInputError('meter.percent', `meter.percent must be at most ${MAX_METER_PERCENT} % of reading`);
+  }
   const counts = requireNonNegative(meter.counts, 'meter.counts');
+  if (counts > MAX_METER_COUNTS) {
+    throw new VerdictInputError('meter.counts', `meter.counts must be at most ${MAX_METER_COUNTS}`);
+  }
   const countValue = requireNonNegative(meter.countValue, 'meter.countValue');
+  if (counts > 0 && countValue === 0) {
+    throw new VerdictInputError(
+      'meter.countValue',
+      'meter.countValue must be the value of one count (the last digit on the range used), not 0, when counts are given',
+    );
+  }
   const meterUnit = requireUnit(meter.unit, 'meter.unit').unit;
   const readingUnit = requireUnit(reading.unit, 'reading.unit').unit;
   let d: number;
@@ -33,7 +49,9 @@ export function meterHalfWidth(reading: Quantity, meter: MeterAccuracy): number 
       `The meter count is in ${meterUnit} but the reading is in ${readingUnit}`,
     );
   }
-  return (percent / 100) * Math.abs(x) + counts * d;
+  const a = (percent / 100) * Math.abs(x) + counts * d;
+  if (!Number.isFinite(a)) throw new VerdictInputError('meter', 'The meter accuracy gives no finite uncertainty');
+  return a;
 }
 
 /** Standard uncertainty of a rectangular distribution of half-width a. */

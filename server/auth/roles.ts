@@ -6,7 +6,14 @@ export { ROLES, type Role };
 /** Who may call a route: anyone, any signed-in account, or at least the named role. */
 export type AccessRule = 'public' | 'signed-in' | Role;
 
-export type SignedInUser = { id: number; email: string; displayName: string; role: Role };
+export type SignedInUser = {
+  id: number;
+  email: string;
+  displayName: string;
+  role: Role;
+  /** The session the access token belongs to (set by passport.ts on every request). */
+  sessionId?: string;
+};
 
 export function roleAtLeast(role: Role, needed: Role): boolean {
   return ROLES.indexOf(role) >= ROLES.indexOf(needed);

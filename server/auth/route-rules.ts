@@ -8,6 +8,8 @@ import type { AccessRule } from './roles';
 
 export const ROUTE_RULES: Record<string, AccessRule> = {
   'GET /api/health': 'public',
+  'GET /api/health/ready': 'public',
+  'GET /api/health/live': 'public',
   'GET /api/search': 'public',
   'GET /api/models': 'public',
   'GET /api/models/:id': 'public',
@@ -51,4 +53,17 @@ export const ROUTE_RULES: Record<string, AccessRule> = {
   'GET /api/users': 'admin',
   'PATCH /api/users/:id': 'admin',
   'GET /api/users/:id/audit': 'admin',
+  'GET /api/plans': 'public',
+  'GET /api/plans/:id': 'public',
+  'POST /api/plans': 'editor',
+  'PATCH /api/plans/:id': 'editor',
+  'GET /api/plans/:id/revisions': 'editor',
+  'GET /api/plans/export.json': 'editor',
+  'POST /api/plans/import': 'editor',
+  'POST /api/jobs/:jobId/runs': 'signed-in',
+  'GET /api/jobs/:jobId/runs': 'signed-in',
+  'GET /api/jobs/:jobId/runs/:runId': 'signed-in',
+  'POST /api/jobs/:jobId/runs/:runId/results': 'signed-in',
+  'POST /api/jobs/:jobId/runs/:runId/back': 'signed-in',
+  'PUT /api/components/:id/connector': 'editor',
 };

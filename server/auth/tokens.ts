@@ -1,6 +1,7 @@
 /**
- * Access tokens (JWT, HS256 pinned, issuer and audience checked, short-lived) and
- * opaque random tokens (refresh, e-mail links) that the database keeps only as SHA-256.
+ * Access tokens (JWT, HS256 pinned, issuer and audience checked, short-lived, naming
+ * their session as `sid`) and opaque random tokens (refresh, e-mail links) that the
+ * database keeps only as SHA-256.
  */
 import { createHash, randomBytes } from 'node:crypto';
 import jwt from 'jsonwebtoken';
@@ -11,8 +12,9 @@ export const JWT_ALGORITHM = 'HS256' as const;
 export const JWT_ISSUER = 'specbench';
 export const JWT_AUDIENCE = 'specbench-app';
 
-export function signAccessToken(user: Pick<SignedInUser, 'id' | 'role'>): string {
-  return jwt.sign({ role: user.role }, config.jwtSecret, {
+/** A token for the account within one session (sign-in); passport.ts refuses it once the session ends. */
+export function signAccessToken(user: Pick<SignedInUser, 'id' | 'role'>, sessionId: string): string {
+  return jwt.sign({ role: user.role, sid: sessionId }, config.jwtSecret, {
     algorithm: JWT_ALGORITHM,
     issuer: JWT_ISSUER,
     audience: JWT_AUDIENCE,

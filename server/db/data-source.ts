@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import path from 'node:path';
 import { DataSource, type DataSourceOptions } from 'typeorm';
 import { config } from '../config';
+import { QueryTimeoutLogger } from './query-timeout';
 import { Make } from '../modules/library/make.entity';
 import { VehicleModel } from '../modules/library/vehicle-model.entity';
 import { Component } from '../modules/library/component.entity';
@@ -17,6 +18,11 @@ import { OutboxMessage } from '../modules/mail/outbox-message.entity';
 import { Job } from '../modules/jobs/job.entity';
 import { Reading } from '../modules/jobs/reading.entity';
 import { Correction } from '../modules/corrections/correction.entity';
+import { Plan } from '../modules/plans/plan.entity';
+import { PlanRevision } from '../modules/plans/plan-revision.entity';
+import { PlanRun } from '../modules/plans/plan-run.entity';
+import { PlanRunResult } from '../modules/plans/plan-run-result.entity';
+import { ComponentConnector } from '../modules/plans/component-connector.entity';
 
 export const ENTITIES = [
   Make,
@@ -34,6 +40,11 @@ export const ENTITIES = [
   Job,
   Reading,
   Correction,
+  Plan,
+  PlanRevision,
+  PlanRun,
+  PlanRunResult,
+  ComponentConnector,
 ];
 
 export function dataSourceOptions(database = config.DB_NAME): DataSourceOptions {
@@ -51,7 +62,11 @@ export function dataSourceOptions(database = config.DB_NAME): DataSourceOptions 
     entities: ENTITIES,
     // .ts under ts-jest and tsx, .js once compiled.
     migrations: [path.join(__dirname, 'migrations', '*.{ts,js}').replace(/\\/g, '/')],
-    extra: { connectionLimit: 20, connectTimeout: 5000 },
+    // Every query is bounded (see query-timeout.ts); so is opening a connection.
+    enableQueryTimeout: true,
+    maxQueryExecutionTime: config.DB_QUERY_TIMEOUT_MS,
+    logger: new QueryTimeoutLogger(),
+    extra: { connectionLimit: config.DB_POOL_SIZE, connectTimeout: 5000, enableKeepAlive: true },
   };
 }
 

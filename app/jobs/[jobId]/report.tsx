@@ -8,10 +8,12 @@ import { ReportHeader } from '@/components/jobs/report-header';
 import { ReportReading } from '@/components/jobs/report-reading';
 import { jobGate } from '@/components/jobs/job-gate';
 import { SupersededList } from '@/components/jobs/superseded-list';
+import { ReportPlanSummary } from '@/components/plans/report-plan-summary';
 import { Screen } from '@/components/ui/screen';
 import { EmptyState } from '@/components/ui/states';
 import { Text } from '@/components/ui/text';
 import { useJobQuery } from '@/lib/hooks/use-jobs';
+import { useRunsQuery } from '@/lib/hooks/use-plans';
 import { useSession } from '@/lib/session/session-provider';
 import { Spacing } from '@/lib/theme';
 
@@ -20,6 +22,7 @@ export default function JobReportScreen() {
   const id = Number(jobId);
   const session = useSession();
   const job = useJobQuery(id, session.status === 'signed-in');
+  const runs = useRunsQuery(id, session.status === 'signed-in');
   const [printedAt] = useState(() => new Date().toISOString());
 
   const gate = jobGate({
@@ -40,6 +43,9 @@ export default function JobReportScreen() {
       <View style={styles.page}>
         <PrintButton />
         <ReportHeader job={j} printedAt={printedAt} />
+        {(runs.data ?? []).map((run) => (
+          <ReportPlanSummary key={run.id} run={run} readings={j.readings} />
+        ))}
         <Text variant="heading">Readings</Text>
         {current.length === 0 ? <EmptyState message="No readings on this job yet." /> : null}
         {groupByComponent(current).map((g) => (

@@ -1,5 +1,13 @@
 import { Router, type CookieOptions, type Request, type Response } from 'express';
-import { ChangePasswordBody, ForgotBody, ResetBody, SignInBody, SignUpBody, TokenBody } from '@/lib/contracts/auth';
+import {
+  ChangePasswordBody,
+  ForgotBody,
+  normalizeEmail,
+  ResetBody,
+  SignInBody,
+  SignUpBody,
+  TokenBody,
+} from '@/lib/contracts/auth';
 import { config } from '@/server/config';
 import { AppError } from '@/server/errors/app-error';
 import { route } from '@/server/http/handler';
@@ -14,20 +22,22 @@ const cookieOptions = (req: Request): CookieOptions => ({
   sameSite: 'strict',
   secure: config.NODE_ENV === 'production' || req.secure,
   path: '/api/auth',
-  maxAge: config.REFRESH_TOKEN_TTL_DAYS * 86_400_000,
 });
 
+/** The cookie lives exactly as long as its session: until the absolute end set at sign-in. */
 function sendSession(req: Request, res: Response, result: auth.SessionResult) {
-  res.cookie(REFRESH_COOKIE, result.refreshToken, cookieOptions(req));
+  const maxAge = Math.max(0, result.refreshExpiresAt.getTime() - Date.now());
+  res.cookie(REFRESH_COOKIE, result.refreshToken, { ...cookieOptions(req), maxAge });
   res.json(result.session);
 }
 
 function clearSession(req: Request, res: Response) {
-  res
-    .clearCookie(REFRESH_COOKIE, { ...cookieOptions(req), maxAge: undefined })
-    .status(204)
-    .end();
+  res.clearCookie(REFRESH_COOKIE, cookieOptions(req)).status(204).end();
 }
+
+/** The typed address in its one normal form (lib/contracts/auth.ts), so " A@x" and "a@x" share a budget. */
+const addressOf = (req: Request) => normalizeEmail(typeof req.body?.email === 'string' ? req.body.email : '');
+const accountOf = (req: Request) => String(req.user?.id ?? '');
 
 /** Routes that act on the refresh cookie accept only requests from the app's own origin. */
 function sameOrigin(req: Request) {
@@ -50,7 +60,7 @@ const refresh = route({}, async ({ req, res }) => {
 });
 const signOut = route({}, async ({ req, res }) => {
   sameOrigin(req);
-  await auth.signOut(req.cookies?.[REFRESH_COOKIE]);
+  await auth.signOut(req.cookies?.[REFRESH_COOKIE], req.user?.sessionId);
   clearSession(req, res);
 });
 const forgot = route({ body: ForgotBody, status: 202 }, async ({ body }) => {
@@ -73,19 +83,23 @@ const signOutEverywhere = route({}, async ({ user, req, res }) => {
 export function authRouter() {
   const r = Router();
   // Per address (guessing one account's password) and per client (trying many accounts).
-  const signInLimit = [
-    limiter('sign-in', 10, 15 * MINUTE, (req) => String(req.body?.email ?? '').toLowerCase()),
-    limiter('sign-in-any', 60, 15 * MINUTE),
+  const signInLimit = [limiter('sign-in', 10, 15 * MINUTE, addressOf), limiter('sign-in-any', 60, 15 * MINUTE)];
+  // Per client, and per inbox from any client: one address cannot be flooded with reset mail.
+  const forgotLimit = [
+    limiter('forgot', 5, 15 * MINUTE),
+    limiter('forgot-address', 3, 60 * MINUTE, addressOf, { acrossClients: true }),
   ];
+  // Per account, from any client: a stolen access token cannot guess the current password.
+  const passwordLimit = limiter('password', 5, 15 * MINUTE, accountOf, { acrossClients: true });
   r.post('/sign-up', limiter('sign-up', 20, 60 * MINUTE), signUp);
   r.post('/verify', limiter('verify', 30, 15 * MINUTE), verify);
   r.post('/sign-in', ...signInLimit, signIn);
   r.post('/refresh', refresh);
   r.post('/sign-out', signOut);
-  r.post('/forgot', limiter('forgot', 5, 15 * MINUTE), forgot);
+  r.post('/forgot', ...forgotLimit, forgot);
   r.post('/reset', limiter('reset', 10, 15 * MINUTE), reset);
   r.get('/me', me);
-  r.post('/password', changePassword);
+  r.post('/password', passwordLimit, changePassword);
   r.post('/sign-out-everywhere', signOutEverywhere);
   return r;
 }

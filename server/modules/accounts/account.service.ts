@@ -13,14 +13,27 @@ import type { User } from '../users/user.entity';
 import { emailKey, toUserDto } from '../users/user.mapper';
 import { UserRepository } from '../users/user.repository';
 import { consumeLink, createLink, existingAccountMail, resetMail, verifyMail } from './email-links';
-import { checkPasswordStrength, DUMMY_HASH, hashPassword, verifyPassword } from './passwords';
-import { familyOf, issueRefreshToken, revokeAllFor, revokeFamily, rotateRefreshToken } from './session-tokens';
+import { checkPasswordStrength, dummyPasswordHash, hashPassword, needsRehash, verifyPassword } from './passwords';
+import {
+  revokeAllFor,
+  revokeSession,
+  rotateRefreshToken,
+  sessionOf,
+  startSession,
+  type IssuedToken,
+} from './session-tokens';
 
-export type SessionResult = { session: SessionDto; refreshToken: string };
+/** The answer's body and the refresh token (with its session's end) for the cookie. */
+export type SessionResult = { session: SessionDto; refreshToken: string; refreshExpiresAt: Date };
 
-const session = (user: User, refreshToken: string): SessionResult => ({
-  session: { accessToken: signAccessToken(user), expiresIn: config.ACCESS_TOKEN_TTL_S, user: toUserDto(user) },
-  refreshToken,
+const session = (user: User, issued: IssuedToken): SessionResult => ({
+  session: {
+    accessToken: signAccessToken(user, issued.sessionId),
+    expiresIn: config.ACCESS_TOKEN_TTL_S,
+    user: toUserDto(user),
+  },
+  refreshToken: issued.token,
+  refreshExpiresAt: issued.expiresAt,
 });
 
 export async function signUp(body: SignUpBody): Promise<void> {
@@ -30,7 +43,7 @@ export async function signUp(body: SignUpBody): Promise<void> {
     const existing = await m.withRepository(UserRepository).findByEmail(body.email);
     if (existing) return enqueue(m, existingAccountMail(existing.email));
     const user = await m.withRepository(UserRepository).save({
-      email: body.email.trim(),
+      email: body.email,
       emailKey: emailKey(body.email),
       displayName: body.displayName,
       passwordHash,
@@ -51,13 +64,17 @@ export async function verifyEmail(token: string): Promise<UserDto> {
 
 export async function signIn(body: SignInBody): Promise<SessionResult> {
   const user = await UserRepository.findByEmail(body.email);
-  const ok = await verifyPassword(body.password, user?.passwordHash ?? DUMMY_HASH);
+  // An unknown address costs one hash of the configured cost too (passwords.ts), so both take as long.
+  const ok = await verifyPassword(body.password, user?.passwordHash ?? (await dummyPasswordHash()));
   if (!user || !ok) throw new AppError(401, 'invalid_credentials', 'The e-mail address or the password is wrong.');
   if (user.disabledAt)
     throw new AppError(403, 'account_disabled', 'This account has been disabled. Ask an administrator.');
   if (!user.emailVerifiedAt)
     throw new AppError(403, 'email_not_verified', 'Confirm your e-mail address first: follow the link we sent you.');
-  return session(user, await AppDataSource.transaction((m) => issueRefreshToken(m, user.id)));
+  if (needsRehash(user.passwordHash)) {
+    await UserRepository.update({ id: user.id }, { passwordHash: await hashPassword(body.password) });
+  }
+  return session(user, await AppDataSource.transaction((m) => startSession(m, user.id)));
 }
 
 export async function refresh(token: string | undefined): Promise<SessionResult> {
@@ -67,23 +84,36 @@ export async function refresh(token: string | undefined): Promise<SessionResult>
   const user = await UserRepository.findById(rotation.userId);
   if (!user || user.disabledAt)
     throw new AppError(403, 'account_disabled', 'This account has been disabled. Ask an administrator.');
-  return session(user, rotation.token);
+  return session(user, rotation.issued);
 }
 
-export async function signOut(token: string | undefined): Promise<void> {
-  if (!token) return;
+/** Ends the cookie's session, and the bearer token's when one came with the request. */
+export async function signOut(token: string | undefined, bearerSessionId?: string): Promise<void> {
+  if (!token && !bearerSessionId) return;
   await AppDataSource.transaction(async (m) => {
-    const family = await familyOf(m, token);
-    if (family) await revokeFamily(m, family);
+    const sessionId = token ? await sessionOf(m, token) : null;
+    for (const id of new Set([sessionId, bearerSessionId])) if (id) await revokeSession(m, id);
   });
 }
+
+/**
+ * Every forgot-password answer takes this long at least: a known address writes a link and
+ * a message, an unknown one writes nothing, and the difference must not show in the timing.
+ * common practice, no published source: a floor well above the work (a few ms here).
+ */
+export const FORGOT_MIN_MS = 250;
 
 export async function forgotPassword(email: string): Promise<void> {
-  await AppDataSource.transaction(async (m) => {
-    const user = await m.withRepository(UserRepository).findByEmail(email);
-    if (!user || user.disabledAt) return;
-    await enqueue(m, resetMail(user.email, user.displayName, await createLink(m, user.id, 'reset')));
-  });
+  const floor = new Promise((resolve) => setTimeout(resolve, FORGOT_MIN_MS));
+  try {
+    await AppDataSource.transaction(async (m) => {
+      const user = await m.withRepository(UserRepository).findByEmail(email);
+      if (!user || user.disabledAt) return;
+      await enqueue(m, resetMail(user.email, user.displayName, await createLink(m, user.id, 'reset')));
+    });
+  } finally {
+    await floor;
+  }
 }
 
 export async function resetPassword(body: ResetBody): Promise<void> {
@@ -111,7 +141,7 @@ export async function changePassword(userId: number, body: ChangePasswordBody): 
   const token = await AppDataSource.transaction(async (m) => {
     await m.withRepository(UserRepository).update({ id: userId }, { passwordHash });
     await revokeAllFor(m, userId);
-    return issueRefreshToken(m, userId);
+    return startSession(m, userId);
   });
   return session(user, token);
 }

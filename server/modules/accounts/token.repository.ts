@@ -5,6 +5,7 @@
  */
 import { IsNull } from 'typeorm';
 import { AppDataSource } from '@/server/db/data-source';
+import { User } from '../users/user.entity';
 import { EmailToken } from './email-token.entity';
 import { RefreshToken } from './refresh-token.entity';
 
@@ -46,3 +47,20 @@ export const RefreshTokenRepository = AppDataSource.getRepository(RefreshToken).
     await this.update({ userId, revokedAt: IsNull() }, { revokedAt: new Date() });
   },
 });
+
+/**
+ * The per-request read behind every access token: the account, only while the token's
+ * session is open (not revoked, not past its absolute end). One query, so ending a session
+ * refuses its access tokens at once rather than when they expire.
+ */
+export function findSessionUser(userId: number, sessionId: string): Promise<User | null> {
+  return AppDataSource.getRepository(User)
+    .createQueryBuilder('u')
+    .where('u.id = :userId', { userId })
+    .andWhere(
+      'EXISTS (SELECT 1 FROM refresh_tokens r WHERE r.family_id = :sessionId AND r.user_id = u.id ' +
+        'AND r.revoked_at IS NULL AND r.expires_at > :now)',
+      { sessionId, now: new Date() },
+    )
+    .getOne();
+}

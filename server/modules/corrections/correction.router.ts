@@ -9,7 +9,9 @@ import { toReview } from './correction.view';
 
 const create = route({ body: ProposeBody, status: 201 }, ({ user, body }) => propose(user, body));
 const list = route({ query: CorrectionsQuery }, ({ user, query }) => listCorrections(user, query));
-const show = route({ params: IdParams }, async ({ user, params }) => toReview(await findVisible(user, params.id)));
+const show = route({ params: IdParams }, async ({ user, params }) =>
+  toReview(await findVisible(user, params.id), user),
+);
 const summary = route({}, ({ user }) => correctionSummary(user));
 const edit = route({ params: IdParams, body: EditProposalBody }, ({ user, params, body }) =>
   editProposal(user, params.id, body),

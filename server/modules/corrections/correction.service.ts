@@ -9,11 +9,13 @@ import type { AcceptBody, CorrectionReviewDto, EditProposalBody, ProposeBody } f
 import type { z } from 'zod';
 import { specValueIssues } from '@/lib/contracts/curation';
 import { AppDataSource } from '@/server/db/data-source';
+import { writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import { roleAtLeast, type SignedInUser } from '@/server/auth/roles';
 import { Component } from '../library/component.entity';
 import { VehicleModel } from '../library/vehicle-model.entity';
 import { Spec } from '../specs/spec.entity';
+import { checkVisible } from '../specs/spec.service';
 import { foldKey } from '../library/keys';
 import { Correction } from './correction.entity';
 import { toReview } from './correction.view';
@@ -23,10 +25,11 @@ import { markLibraryChanged } from '../search/search.service';
 
 const isEditor = (u: SignedInUser) => roleAtLeast(u.role, 'editor');
 
-async function target(m: EntityManager, b: ProposeBody) {
+async function target(m: EntityManager, b: ProposeBody, user: SignedInUser) {
   if (b.kind === 'change') {
     const spec = await m.getRepository(Spec).findOne({ where: { id: b.specId }, relations: { component: true } });
     if (!spec) throw AppError.notFound('spec', b.specId);
+    checkVisible(spec, user);
     return {
       modelId: spec.component.modelId,
       specId: spec.id,
@@ -69,8 +72,8 @@ function checkAgainst(parameter: string, values: ProposeBody['values']) {
 }
 
 export async function propose(user: SignedInUser, b: ProposeBody): Promise<CorrectionReviewDto> {
-  const saved = await AppDataSource.transaction(async (m) => {
-    const t = await target(m, b);
+  const saved = await writeTransaction(async (m) => {
+    const t = await target(m, b, user);
     checkAgainst(t.parameter, b.values);
     const proposed = {
       ...b.values,
@@ -101,9 +104,14 @@ export async function findVisible(user: SignedInUser, id: number): Promise<Corre
   return c;
 }
 
-async function lockPending(m: EntityManager, id: number): Promise<Correction> {
+/**
+ * The proposal, locked, while it is pending (409 once decided). With `ownerId` it must be
+ * that account's own: someone else's answers 404 whatever its status, so neither its
+ * existence nor its decision (nor who made it) shows.
+ */
+async function lockPending(m: EntityManager, id: number, ownerId?: number): Promise<Correction> {
   const c = await m.getRepository(Correction).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
-  if (!c) throw AppError.notFound('correction', id);
+  if (!c || (ownerId !== undefined && c.proposerId !== ownerId)) throw AppError.notFound('correction', id);
   if (c.status !== 'pending')
     throw new AppError(
       409,
@@ -115,9 +123,8 @@ async function lockPending(m: EntityManager, id: number): Promise<Correction> {
 }
 
 export async function editProposal(user: SignedInUser, id: number, b: EditProposalBody): Promise<CorrectionReviewDto> {
-  const saved = await AppDataSource.transaction(async (m) => {
-    const c = await lockPending(m, id);
-    if (c.proposerId !== user.id) throw AppError.notFound('correction', id);
+  const saved = await writeTransaction(async (m) => {
+    const c = await lockPending(m, id, user.id);
     if (b.values) {
       checkAgainst(c.proposed.parameter, b.values);
       c.proposed = {
@@ -130,18 +137,17 @@ export async function editProposal(user: SignedInUser, id: number, b: EditPropos
     if (b.rationale) c.rationale = b.rationale;
     return m.getRepository(Correction).save(c);
   });
-  return toReview(saved);
+  return toReview(saved, user);
 }
 
 export async function withdraw(user: SignedInUser, id: number): Promise<CorrectionReviewDto> {
-  const saved = await AppDataSource.transaction(async (m) => {
-    const c = await lockPending(m, id);
-    if (c.proposerId !== user.id) throw AppError.notFound('correction', id);
+  const saved = await writeTransaction(async (m) => {
+    const c = await lockPending(m, id, user.id);
     c.status = 'withdrawn';
     c.decidedAt = new Date();
     return m.getRepository(Correction).save(c);
   });
-  return toReview(saved);
+  return toReview(saved, user);
 }
 
 export async function decide(
@@ -149,7 +155,7 @@ export async function decide(
   id: number,
   decision: { accept: true; body: z.infer<typeof AcceptBody> } | { accept: false; note: string },
 ): Promise<CorrectionReviewDto> {
-  const saved = await AppDataSource.transaction(async (m) => {
+  const saved = await writeTransaction(async (m) => {
     const c = await lockPending(m, id);
     if (decision.accept) c.specId = await applyCorrection(m, c, editor, decision.body.confirmStale === true);
     Object.assign(c, {

@@ -11,6 +11,8 @@ import { Spec } from '../specs/spec.entity';
 import { SpecRevision } from '../specs/spec-revision.entity';
 import { Source } from '../library/source.entity';
 import { User } from '../users/user.entity';
+import { seesDrafts } from '../specs/spec.service';
+import type { SignedInUser } from '@/server/auth/roles';
 import type { Correction } from './correction.entity';
 
 /** The fields a review compares, then the citation as one 'source' line. */
@@ -115,10 +117,12 @@ async function valuesAt(specId: number, version: number | null): Promise<Values 
   );
 }
 
-export async function toReview(r: Correction): Promise<CorrectionReviewDto> {
+/** The proposal with the three-way view; a spec turned draft since shows no current values below editor. */
+export async function toReview(r: Correction, viewer?: SignedInUser): Promise<CorrectionReviewDto> {
   const [dto] = await toDtos([r]);
-  const spec =
+  const found =
     r.specId && r.kind === 'change' ? await AppDataSource.getRepository(Spec).findOneBy({ id: r.specId }) : null;
+  const spec = found && (found.status === 'published' || !viewer || seesDrafts(viewer)) ? found : null;
   const current = spec ? await valuesOfSpec(spec) : null;
   const before = spec ? await valuesAt(spec.id, r.baseVersion) : null;
   const p = r.proposed;

@@ -6,10 +6,12 @@
 import { createHash } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import { checkCsvBytes, decodeCsv, validateSpecCsv, type RowProblem, type ValidatedCsv } from '@/lib/csv';
+import { MAX_CSV_ROWS } from '@/lib/csv/parse';
 import type { ImportBatchSummaryDto, ImportPreviewDto, ImportPreviewQuery } from '@/lib/contracts/imports';
 import { AppDataSource } from '@/server/db/data-source';
+import { writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
-import { markLibraryChanged } from '../search/search.service';
+import { lastRevisionId, markLibraryChanged, recordImportChanges } from '../library/library-changes';
 import { ImportBatch, type ImportCounts } from './import-batch.entity';
 import { planImport, type PlannedRow } from './import-plan';
 import { applyImport, type Actor } from './import-apply';
@@ -28,7 +30,7 @@ export const problemPath = (p: RowProblem) => `line ${p.line}${p.column ? `, col
 /** Bytes → validated rows; file-level problems (encoding, header, quotes, no rows) in fileErrors. */
 export function validateUpload(bytes: Uint8Array): ValidatedCsv {
   const encoding = checkCsvBytes(bytes);
-  if (encoding) return { accepted: [], rejected: [], fileErrors: [encoding] };
+  if (encoding) return { accepted: [], rejected: [], rejectedRows: 0, fileErrors: [encoding] };
   return validateSpecCsv(decodeCsv(bytes));
 }
 
@@ -38,7 +40,7 @@ function countsOf(plan: PlannedRow[], checked: ValidatedCsv): ImportCounts {
     created: n('create'),
     updated: n('update'),
     unchanged: n('unchanged'),
-    rejected: new Set(checked.rejected.map((r) => r.line)).size,
+    rejected: checked.rejectedRows,
     warnings: checked.accepted.reduce((sum, a) => sum + a.warnings.length, 0),
   };
 }
@@ -87,6 +89,12 @@ async function rejectFile(upload: Upload, actor: Actor, fileErrors: RowProblem[]
   });
 }
 
+/** 413 for a file over the row limit (MAX_CSV_ROWS): nothing of it is staged. */
+const tooManyRows = (upload: Upload, checked: ValidatedCsv) =>
+  new AppError(413, 'payload_too_large', `${upload.fileName} cannot be imported: ${checked.fileErrors[0].reason}.`, {
+    limit: MAX_CSV_ROWS,
+  });
+
 /** Upload → preview. Nothing is written but the batch and its staged rows. */
 export async function previewImport(upload: Upload, actor: Actor, page = FIRST_PAGE): Promise<ImportPreviewDto> {
   return previewValidated(upload, validateUpload(upload.bytes), actor, page);
@@ -99,8 +107,9 @@ export async function previewValidated(
   actor: Actor,
   page = FIRST_PAGE,
 ): Promise<ImportPreviewDto> {
+  if (checked.tooManyRows) throw tooManyRows(upload, checked);
   if (checked.fileErrors.length) return rejectFile(upload, actor, checked.fileErrors);
-  const batch = await AppDataSource.transaction(async (m) =>
+  const batch = await writeTransaction(async (m) =>
     stageBatch(m, checked, await planImport(m, checked.accepted), uploaderOf(upload, actor)),
   );
   return buildPreview(AppDataSource.manager, batch, page);
@@ -139,7 +148,9 @@ async function commitLocked(
       `Import #${id} failed validation, so there is nothing to commit. Fix the file and upload it again.`,
     );
   batch.reason = reason ?? `CSV import of ${batch.fileName}`;
+  const revisionsBefore = await lastRevisionId(m);
   await applyImport(m, id, actor, batch.reason, batch.counts);
+  await recordImportChanges(m, id, revisionsBefore);
   Object.assign(batch, {
     status: 'committed',
     committedAt: new Date(),
@@ -149,9 +160,13 @@ async function commitLocked(
   return m.getRepository(ImportBatch).save(batch);
 }
 
-/** Writes every accepted row and one revision per changed spec, in one transaction, once. */
+/**
+ * Writes every accepted row and one revision per changed spec, in one transaction, once.
+ * Two commits creating the same new makes can deadlock in InnoDB; the victim runs again
+ * and then finds the other's specs (409) or nothing in its way.
+ */
 export async function commitImport(id: number, actor: Actor, reason?: string): Promise<ImportBatchSummaryDto> {
-  const batch = await AppDataSource.transaction((m) => commitLocked(m, id, actor, reason));
+  const batch = await writeTransaction((m) => commitLocked(m, id, actor, reason));
   if (batch.counts.created + batch.counts.updated > 0) markLibraryChanged();
   return toBatchSummary(batch);
 }
@@ -176,7 +191,7 @@ export async function importCsvNow(
       checked.fileErrors.map((e) => ({ path: problemPath(e), message: e.reason })),
     );
   }
-  const summary = await AppDataSource.transaction(async (m): Promise<ImportSummary> => {
+  const summary = await writeTransaction(async (m): Promise<ImportSummary> => {
     const plan = (await planImport(m, checked.accepted)).map((p) =>
       options.createOnly && p.action === 'update' ? { ...p, action: 'unchanged' as const, changes: [] } : p,
     );
@@ -186,7 +201,9 @@ export async function importCsvNow(
       ...uploaderOf({ fileName, bytes: Buffer.from(text, 'utf8') }, actor),
       reason,
     });
+    const revisionsBefore = await lastRevisionId(m);
     await applyImport(m, batch.id, actor, reason, counts);
+    await recordImportChanges(m, batch.id, revisionsBefore);
     await m.getRepository(ImportBatch).update(batch.id, {
       status: 'committed',
       committedAt: new Date(),

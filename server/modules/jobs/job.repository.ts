@@ -71,5 +71,8 @@ export const ReadingRepository = AppDataSource.getRepository(Reading).extend({
 
 /** The spec a reading is judged against, with what the reading records of it (component, source). */
 export function specForReading(m: EntityManager, specId: number): Promise<Spec | null> {
-  return m.getRepository(Spec).findOne({ where: { id: specId }, relations: { component: true, source: true } });
+  // Published only, as for verdicts: a draft is not in the library yet (hardening, issue 13).
+  return m
+    .getRepository(Spec)
+    .findOne({ where: { id: specId, status: 'published' }, relations: { component: true, source: true } });
 }

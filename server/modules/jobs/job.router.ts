@@ -6,6 +6,7 @@ import { route } from '@/server/http/handler';
 import { createJob, getJob, listJobs, updateJob } from './job.service';
 import { addReading } from './reading.service';
 import { readingsCsv } from './readings-csv';
+import { requestHash } from './request-hash';
 
 const create = route({ body: CreateJobBody, status: 201 }, ({ user, body }) => createJob(user, body));
 const list = route({ query: JobsQuery }, ({ user, query }) => listJobs(user, query));
@@ -17,7 +18,7 @@ const addReadingRoute = route({ params: IdParams, body: ReadingBody }, async ({ 
   const key = req.get('Idempotency-Key');
   if (key !== undefined && !IDEMPOTENCY_KEY.test(key))
     throw AppError.badRequest('Idempotency-Key must be 8–80 letters, digits, or . _ : -');
-  const { reading, created } = await addReading(user, params.id, body, key);
+  const { reading, created } = await addReading(user, params.id, body, { key, hash: requestHash(req.body) });
   res.status(created ? 201 : 200);
   return reading;
 });

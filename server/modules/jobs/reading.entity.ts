@@ -74,6 +74,10 @@ export class Reading {
   @Column({ name: 'idempotency_key', type: 'varchar', length: 80 })
   idempotencyKey: string;
 
+  /** SHA-256 of the request body (request-hash.ts); null for readings stored before it was kept. */
+  @Column({ name: 'request_hash', type: 'char', length: 64, nullable: true })
+  requestHash: string | null;
+
   @Column({ name: 'superseded_by', type: 'int', nullable: true })
   supersededBy: number | null;
 

@@ -6,11 +6,12 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import type { ReadingBody, ReadingDto } from '@/lib/contracts/jobs';
-import { AppDataSource } from '@/server/db/data-source';
+import { writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import type { SignedInUser } from '@/server/auth/roles';
 import { judge, toVerdictInput } from '../verdicts/verdict.service';
 import type { Job } from './job.entity';
+import type { Reading } from './reading.entity';
 import { ownJobOr404 } from './job-access';
 import { citationText } from '@/lib/format/citation';
 import { toReadingDto } from './job.mapper';
@@ -31,19 +32,31 @@ async function lockOpenJob(m: EntityManager, user: SignedInUser, jobId: number):
   return job;
 }
 
+/** The reading stored under this key answers again, but only for the same request body. */
+function replay(existing: Reading, hash: string): AddedReading {
+  if (existing.requestHash !== null && existing.requestHash !== hash)
+    throw new AppError(
+      422,
+      'idempotency_key_reused',
+      'This Idempotency-Key was already used for a different reading on this job. Send a new key with a new reading.',
+    );
+  return { reading: toReadingDto(existing, existing.specVersion), created: false };
+}
+
+/** `hash`: requestHash() of the body as sent, kept beside the key. */
 export async function addReading(
   user: SignedInUser,
   jobId: number,
   body: ReadingBody,
-  key: string | undefined,
+  request: { key: string | undefined; hash: string },
 ): Promise<AddedReading> {
-  const idempotencyKey = key ?? randomUUID();
+  const idempotencyKey = request.key ?? randomUUID();
   try {
-    return await AppDataSource.transaction(async (m) => {
+    return await writeTransaction(async (m) => {
       await lockOpenJob(m, user, jobId);
       const readings = m.withRepository(ReadingRepository);
       const existing = await readings.findByKey(jobId, idempotencyKey);
-      if (existing) return { reading: toReadingDto(existing, existing.specVersion), created: false };
+      if (existing) return replay(existing, request.hash);
       const { input, specVersion } = await toVerdictInput(body);
       const result = judge(input);
       const about =
@@ -67,6 +80,7 @@ export async function addReading(
         steps: result.steps,
         zones: result.zones,
         idempotencyKey,
+        requestHash: request.hash,
         supersededBy: null,
         takenAt: body.takenAt ? new Date(body.takenAt) : new Date(),
       });
@@ -76,8 +90,7 @@ export async function addReading(
   } catch (err) {
     // Two copies of the same reading raced: the other one won; answer with it.
     if ((err as { code?: string; driverError?: { code?: string } }).driverError?.code !== 'ER_DUP_ENTRY') throw err;
-    const existing = await ReadingRepository.getByKey(jobId, idempotencyKey);
-    return { reading: toReadingDto(existing, existing.specVersion), created: false };
+    return replay(await ReadingRepository.getByKey(jobId, idempotencyKey), request.hash);
   }
 }
 

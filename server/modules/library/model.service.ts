@@ -9,7 +9,12 @@ import { ComponentRepository, ModelRepository } from './library.repository';
 export async function listModels(query: ModelsQuery): Promise<ModelSummaryDto[]> {
   const models = await ModelRepository.listWithMakes(query.make ? foldKey(query.make) : undefined);
   const counts = await ComponentRepository.countsByModel(models.map((m) => m.id));
-  return models.map((m) => ({ ...toModelRef(m), ...(counts.get(m.id) ?? { componentCount: 0, specCount: 0 }) }));
+  // A model with no published spec yet (only drafts, say) is not in the library's list: its name alone would
+  // show an editor's work in progress.
+  return models.flatMap((m) => {
+    const c = counts.get(m.id);
+    return c && c.specCount > 0 ? [{ ...toModelRef(m), ...c }] : [];
+  });
 }
 
 export async function getModel(id: number): Promise<ModelDetailDto> {

@@ -1,6 +1,9 @@
 /**
- * The outbox_messages queries: enqueue, claim what is due (SKIP LOCKED, so several
- * workers never send one message twice), and record each attempt.
+ * The outbox_messages queries: enqueue, claim what is due, and record each attempt.
+ * A claim is its own short transaction: it locks due rows (SKIP LOCKED, so workers in
+ * other processes take other rows), pushes their next attempt out by a lease and counts
+ * the attempt, then commits, so nothing is held while the mail server is talked to. A
+ * worker that dies mid-send leaves its messages to be retried when the lease ends.
  */
 import { AppDataSource } from '@/server/db/data-source';
 import { OutboxMessage } from './outbox-message.entity';
@@ -11,20 +14,32 @@ export const OutboxRepository = AppDataSource.getRepository(OutboxMessage).exten
   async enqueue(mail: Mail): Promise<void> {
     await this.insert({ ...mail, attempts: 0, nextAttemptAt: new Date() });
   },
-  /** Up to `limit` unsent messages that are due, oldest first, locked (others skip them). */
-  claimDue(limit: number): Promise<OutboxMessage[]> {
-    return this.createQueryBuilder('o')
-      .where('o.sentAt IS NULL AND o.nextAttemptAt <= :now', { now: new Date() })
-      .orderBy('o.id', 'ASC')
-      .limit(limit)
-      .setLock('pessimistic_write')
-      .setOnLocked('skip_locked')
-      .getMany();
+  /** Up to `limit` due messages, oldest first, leased to this worker for `leaseMs`. */
+  claimDue(limit: number, leaseMs: number): Promise<OutboxMessage[]> {
+    return this.manager.transaction(async (m) => {
+      const due = await m
+        .getRepository(OutboxMessage)
+        .createQueryBuilder('o')
+        .where('o.sentAt IS NULL AND o.nextAttemptAt <= :now', { now: new Date() })
+        .orderBy('o.id', 'ASC')
+        .limit(limit)
+        .setLock('pessimistic_write')
+        .setOnLocked('skip_locked')
+        .getMany();
+      if (!due.length) return [];
+      await m
+        .createQueryBuilder()
+        .update(OutboxMessage)
+        .set({ nextAttemptAt: new Date(Date.now() + leaseMs), attempts: () => 'attempts + 1' })
+        .whereInIds(due.map((d) => d.id))
+        .execute();
+      return due.map((d) => Object.assign(d, { attempts: d.attempts + 1 }));
+    });
   },
   async markSent(msg: OutboxMessage): Promise<void> {
-    await this.update(msg.id, { sentAt: new Date(), attempts: msg.attempts + 1, lastError: null });
+    await this.update(msg.id, { sentAt: new Date(), lastError: null });
   },
   async markFailed(msg: OutboxMessage, error: string, nextAttemptAt: Date): Promise<void> {
-    await this.update(msg.id, { attempts: msg.attempts + 1, lastError: error, nextAttemptAt });
+    await this.update(msg.id, { lastError: error, nextAttemptAt });
   },
 });

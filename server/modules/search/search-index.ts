@@ -1,12 +1,22 @@
 /**
- * An in-memory, typo-tolerant index of the published specs. Each query word is
- * matched against the index's vocabulary (exactly, by prefix, or fuzzily through
- * fuse.js); every word must match some field of a spec (make, model, years,
- * variant, component, parameter or one of their synonyms). Matching the vocabulary
- * rather than every document keeps a query fast at 100 000 specs.
+ * An in-memory, typo-tolerant index of the published specs, built for a million of them.
+ * Each spec has a slot; each term (term-vocabulary.ts) a posting list of slots with the
+ * field's weight, in growable typed arrays (postings.ts). A query word stands for a few
+ * terms (exact, prefix, fuzzy); every word must match some field (make, model, years,
+ * variant, component, parameter or a synonym of theirs). Words are taken cheapest first and
+ * each later one only scores the slots every earlier one matched, so a year or a very
+ * common word costs no more than the candidates left; when no spec matches every word, the
+ * best partial matches are scored instead. The work is bounded: at most MAX_QUERY_WORDS
+ * words and POSTING_BUDGET posting entries per query. Specs are added, replaced and removed
+ * one at a time (a removed slot is skipped until the next full build), so an edit needs no
+ * rebuild.
  */
-import Fuse from 'fuse.js';
-import { SYNONYM_GROUPS } from './synonyms';
+import { SEARCH_MAX_WORDS } from '@/lib/contracts/library';
+import { FIELD_WEIGHT, STOP_WORDS, cachedSynonymTokens, isNumber, tokenize, yearOf } from './search-tokens';
+import { TermVocabulary, type TermMatch } from './term-vocabulary';
+import { Posting, Scratch, SlotTable } from './postings';
+
+export { tokenize } from './search-tokens';
 
 export type SearchDoc = {
   specId: number;
@@ -20,121 +30,195 @@ export type SearchDoc = {
   parameter: string;
 };
 
-export type SearchMatch = { doc: SearchDoc; score: number };
+export type SearchMatch<D extends SearchDoc = SearchDoc> = { doc: D; score: number };
 
-const STOP_WORDS = new Set(['the', 'of', 'for', 'and', 'a', 'an', 'to', 'on', 'at', 'in', 'spec', 'specs']);
-const FIELD_WEIGHT = { parameter: 1.2, component: 1.1, model: 1.0, make: 0.9, variant: 0.8, synonym: 1.1 } as const;
+/** Words of a query that are looked up; the API refuses longer queries (lib/contracts/library.ts). */
+export const MAX_QUERY_WORDS = SEARCH_MAX_WORDS;
+/** Posting entries one query may visit, over all its words and both passes. */
+const POSTING_BUDGET = 2_500_000;
+/** What checking one candidate's own terms costs, in posting entries walked (measured roughly). */
+const FORWARD_COST = 24;
 
-export function tokenize(text: string): string[] {
-  return text
-    .toLowerCase()
-    .split(/[^\p{L}\p{N}]+/u)
-    .filter((t) => t.length > 0);
-}
+type Word = { year: number | null; terms: TermMatch[]; cost: number };
 
-function synonymTokens(text: string): string[] {
-  const lower = ` ${tokenize(text).join(' ')} `;
-  return SYNONYM_GROUPS.filter((g) => g.some((p) => lower.includes(` ${tokenize(p).join(' ')} `)))
-    .flat()
-    .flatMap(tokenize);
-}
+export class SearchIndex<D extends SearchDoc = SearchDoc> {
+  private readonly vocabulary = new TermVocabulary();
+  private readonly postings: Posting[] = [];
+  private readonly table = new SlotTable<D>();
+  private readonly scratch = new Scratch();
+  /** Term ids of a field's text, per distinct text (a million specs share a few thousand names). */
+  private readonly textTerms = new Map<string, Int32Array>();
 
-export class SearchIndex {
-  private readonly postings = new Map<string, Map<number, number>>();
-  private readonly vocabulary: string[];
-  private readonly fuse: Fuse<string>;
-
-  constructor(readonly docs: SearchDoc[]) {
-    docs.forEach((d, i) => {
-      const add = (text: string, weight: number) => tokenize(text).forEach((t) => this.post(t, i, weight));
-      add(d.parameter, FIELD_WEIGHT.parameter);
-      add(d.component, FIELD_WEIGHT.component);
-      add(d.model, FIELD_WEIGHT.model);
-      add(d.make, FIELD_WEIGHT.make);
-      add(d.variant, FIELD_WEIGHT.variant);
-      synonymTokens(`${d.component} ${d.parameter}`).forEach((t) => this.post(t, i, FIELD_WEIGHT.synonym));
-    });
-    this.vocabulary = [...this.postings.keys()].filter((t) => !/^\d+$/.test(t));
-    this.fuse = new Fuse(this.vocabulary, {
-      includeScore: true,
-      threshold: 0.4,
-      ignoreLocation: true,
-      minMatchCharLength: 2,
-    });
+  constructor(docs: Iterable<D> = []) {
+    for (const d of docs) this.upsert(d);
   }
 
-  private post(token: string, doc: number, weight: number) {
-    let list = this.postings.get(token);
-    if (!list) this.postings.set(token, (list = new Map()));
-    if ((list.get(doc) ?? 0) < weight) list.set(doc, weight);
+  get size() {
+    return this.table.live;
   }
 
-  /** Vocabulary terms a query word may stand for, with a quality from 0 to 1. */
-  private termsFor(word: string): [string, number][] {
-    const terms = new Map<string, number>();
-    if (this.postings.has(word)) terms.set(word, 1);
-    if (word.length >= 2) {
-      for (const t of this.postings.keys()) if (t !== word && t.startsWith(word)) terms.set(t, 0.85);
+  /** Share of slots held by removed or replaced specs (a full build reclaims them). */
+  get wasted() {
+    return this.table.wasted;
+  }
+
+  get termCount() {
+    return this.vocabulary.size;
+  }
+
+  has(specId: number) {
+    return this.table.has(specId);
+  }
+
+  private termsOf(text: string): Int32Array {
+    let ids = this.textTerms.get(text);
+    if (!ids) {
+      if (this.textTerms.size > 300_000) this.textTerms.clear();
+      ids = Int32Array.from(tokenize(text), (t) => this.vocabulary.intern(t));
+      this.textTerms.set(text, ids);
     }
-    if (word.length >= 3 && !/^\d+$/.test(word)) {
-      for (const r of this.fuse.search(word, { limit: 12 })) {
-        const quality = 0.75 * (1 - (r.score ?? 1));
-        if ((terms.get(r.item) ?? 0) < quality) terms.set(r.item, quality);
+    return ids;
+  }
+
+  /** Adds the spec, or replaces the one with its id. */
+  upsert(doc: D) {
+    const slot = this.table.add(doc);
+    const mark = this.scratch.marks(this.vocabulary.size + 64);
+    const post = (ids: Int32Array, weight: number) => {
+      for (const id of ids) {
+        if (mark.slot[id] === slot + 1 && mark.weight[id] >= weight) continue;
+        if (mark.slot[id] !== slot + 1) {
+          mark.slot[id] = slot + 1;
+          (this.postings[id] ??= new Posting()).push(slot, weight);
+        } else this.postings[id].raise(slot, weight);
+        mark.weight[id] = weight;
+      }
+    };
+    for (const [ids, weight] of this.fieldsOf(doc)) post(ids, weight);
+  }
+
+  remove(specId: number) {
+    this.table.remove(specId);
+  }
+
+  /** The terms a query word may stand for, best first, and how many posting entries they hold. */
+  private lookUp(word: string): Word {
+    const terms = new Map<number, number>();
+    const exact = this.vocabulary.id(word);
+    if (exact !== undefined) terms.set(exact, 1);
+    // Two letters prefix too many words to say anything; two digits (a displacement) do not.
+    if (word.length >= 3 || (word.length === 2 && isNumber(word)))
+      for (const id of this.vocabulary.prefixed(word)) terms.set(id, 0.85);
+    for (const { term, quality } of this.vocabulary.fuzzy(word)) {
+      if ((terms.get(term) ?? 0) < quality) terms.set(term, quality);
+    }
+    const list = [...terms].map(([term, quality]) => ({ term, quality })).sort((a, b) => b.quality - a.quality);
+    const year = yearOf(word);
+    const cost = list.reduce((n, t) => n + (this.postings[t.term]?.length ?? 0), 0);
+    return { year, terms: list, cost: year === null ? cost : this.table.slots.length };
+  }
+
+  /**
+   * Adds one word's best match per slot into the scores. With `only` (the number of words
+   * already taken), slots that missed an earlier word are passed over. Returns the entries visited.
+   */
+  private scoreWord(w: Word, budget: number, only: number | null): number {
+    const s = this.scratch;
+    const { alive, yearFrom, yearTo } = this.table;
+    const eligible = (slot: number) => alive[slot] === 1 && (only === null || s.hits[slot] === only);
+    let visited = 0;
+    if (w.year !== null && only !== null && only > 0) {
+      for (let i = 0; i < s.count; i += 1) {
+        const slot = s.touched[i];
+        if (s.hits[slot] === only && yearFrom[slot] <= w.year && w.year <= yearTo[slot]) s.offer(slot, 1);
+      }
+      visited += s.count;
+    } else if (w.year !== null) {
+      for (let slot = 0; slot < alive.length && slot < this.table.slots.length; slot += 1) {
+        if (eligible(slot) && yearFrom[slot] <= w.year && w.year <= yearTo[slot]) s.offer(slot, 1);
+      }
+      visited += this.table.slots.length;
+    }
+    if (only !== null && only > 0 && w.year === null && s.count * FORWARD_COST < w.cost)
+      return visited + this.scoreCandidates(w, only);
+    for (const { term, quality } of w.terms) {
+      const p = this.postings[term];
+      if (!p || visited >= budget) continue;
+      const end = Math.min(p.length, budget - visited);
+      visited += end;
+      const { slots, weights } = p;
+      const hits = s.hits;
+      const q = quality / 10;
+      if (only === null) {
+        for (let i = 0; i < end; i += 1) if (alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
+      } else {
+        for (let i = 0; i < end; i += 1)
+          if (hits[slots[i]] === only && alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
       }
     }
-    return [...terms.entries()];
+    s.commitWord();
+    return visited;
   }
 
-  /** Per document, the best quality with which one query word matches it. */
-  private wordMatches(word: string): Map<number, number> {
-    const best = new Map<number, number>();
-    for (const [term, quality] of this.termsFor(word)) {
-      for (const [doc, weight] of this.postings.get(term)!) {
-        const q = quality * weight;
-        if ((best.get(doc) ?? 0) < q) best.set(doc, q);
-      }
-    }
-    const year = Number(word);
-    if (/^\d{4}$/.test(word) && year >= 1900 && year <= 2100) {
-      this.docs.forEach((d, i) => {
-        if (d.yearFrom <= year && year <= (d.yearTo ?? 9999) && (best.get(i) ?? 0) < 1) best.set(i, 1);
-      });
-    }
-    return best;
+  /** The spec's fields as term ids with their weights (the texts' ids are cached). */
+  private fieldsOf(doc: D): [Int32Array, number][] {
+    const synonyms = cachedSynonymTokens(doc.component, doc.parameter);
+    return [
+      [this.termsOf(doc.parameter), FIELD_WEIGHT.parameter],
+      [this.termsOf(doc.component), FIELD_WEIGHT.component],
+      [this.termsOf(doc.model), FIELD_WEIGHT.model],
+      [this.termsOf(doc.make), FIELD_WEIGHT.make],
+      [this.termsOf(doc.variant), FIELD_WEIGHT.variant],
+      [this.termsOf(synonyms.join(' ')), FIELD_WEIGHT.synonym],
+    ];
   }
 
-  search(query: string, limit: number): { matches: SearchMatch[]; total: number } {
-    const words = tokenize(query).filter((w) => !STOP_WORDS.has(w));
-    if (words.length === 0) return { matches: [], total: 0 };
-    const perWord = words.map((w) => this.wordMatches(w));
-    const totals = new Map<number, { score: number; hits: number }>();
-    for (const matches of perWord) {
-      for (const [doc, q] of matches) {
-        const t = totals.get(doc) ?? { score: 0, hits: 0 };
-        t.score += q;
-        t.hits += 1;
-        totals.set(doc, t);
+  /**
+   * A later word when few candidates are left: each candidate's own terms are checked
+   * against the word's, instead of walking the word's (long) postings.
+   */
+  private scoreCandidates(w: Word, only: number): number {
+    const s = this.scratch;
+    const quality = new Map(w.terms.map((t) => [t.term, t.quality]));
+    for (let i = 0; i < s.count; i += 1) {
+      const slot = s.touched[i];
+      const doc = this.table.slots[slot];
+      if (s.hits[slot] !== only || doc === null) continue;
+      let best = 0;
+      for (const [ids, weight] of this.fieldsOf(doc)) {
+        for (const id of ids) {
+          const q = quality.get(id);
+          if (q !== undefined && (q * weight) / 10 > best) best = (q * weight) / 10;
+        }
       }
+      if (best > 0) s.offer(slot, best);
     }
-    // Every word must match; when no spec matches them all, the best partial matches are shown.
-    let most = 0;
-    for (const t of totals.values()) if (t.hits > most) most = t.hits;
-    const needed = Math.min(words.length, most);
-    if (needed === 0) return { matches: [], total: 0 };
-    // Keep only the best `limit` (a full sort of tens of thousands of hits is the slow part).
-    const top: SearchMatch[] = [];
-    let total = 0;
-    const better = (a: SearchMatch, b: SearchMatch) => b.score - a.score || a.doc.specId - b.doc.specId;
-    for (const [doc, t] of totals) {
-      if (t.hits < needed) continue;
-      total += 1;
-      const match = { doc: this.docs[doc], score: t.score / words.length };
-      if (top.length === limit && better(match, top[top.length - 1]) >= 0) continue;
-      let i = top.length;
-      while (i > 0 && better(match, top[i - 1]) < 0) i -= 1;
-      top.splice(i, 0, match);
-      if (top.length > limit) top.pop();
+    s.commitWord();
+    return s.count * FORWARD_COST;
+  }
+
+  /** Scores every word over the index (`all`: each word only where the earlier ones all matched). */
+  private pass(words: Word[], all: boolean, budget: number): number {
+    this.scratch.reset();
+    for (let k = 0; k < words.length; k += 1) {
+      budget = Math.max(0, budget - this.scoreWord(words[k], budget, all ? k : null));
+      if (all && this.scratch.count === 0) break;
     }
-    return { matches: top, total };
+    return budget;
+  }
+
+  search(query: string, limit: number): { matches: SearchMatch<D>[]; total: number } {
+    const unique = [...new Set(tokenize(query).filter((w) => !STOP_WORDS.has(w)))].slice(0, MAX_QUERY_WORDS);
+    if (unique.length === 0) return { matches: [], total: 0 };
+    const words = unique.map((w) => this.lookUp(w)).sort((a, b) => a.cost - b.cost);
+    this.scratch.fit(this.table.slots.length);
+    const left = this.pass(words, true, POSTING_BUDGET);
+    let needed = words.length;
+    if (!this.scratch.hasHits(needed)) {
+      // No spec matches every word: show the ones that match the most.
+      this.pass(words, false, left);
+      needed = this.scratch.mostHits();
+    }
+    return this.scratch.top(needed, limit, words.length, this.table.slots);
   }
 }

@@ -1,10 +1,20 @@
 import { Router } from 'express';
 import { SearchQuery } from '@/lib/contracts/library';
 import { route } from '@/server/http/handler';
-import { searchLibrary } from './search.service';
+import { limiter } from '@/server/middleware/rate-limit';
+import { searchEngine, searchLibrary } from './search.service';
+import type { SearchEngine } from './search-engine';
 
-const search = route({ query: SearchQuery }, ({ query }) => searchLibrary(query));
+/** Generous for a person (several searches a second while typing), a ceiling for a script. */
+const SEARCHES_PER_MINUTE = 600;
 
-export const searchRouter = Router();
-
-searchRouter.get('/', search);
+/** Each app gets its own router and limiter; a test may hand it an engine of its own (another "process"). */
+export function searchRouter(engine: SearchEngine = searchEngine) {
+  const router = Router();
+  router.get(
+    '/',
+    limiter('search', SEARCHES_PER_MINUTE, 60_000),
+    route({ query: SearchQuery }, ({ query }) => searchLibrary(query, engine)),
+  );
+  return router;
+}

@@ -5,26 +5,21 @@
 import type { RevertSpecBody, RevisionDiffDto, RevisionListDto } from '@/lib/contracts/curation';
 import type { SpecDetailDto } from '@/lib/contracts/library';
 import { diffSnapshots, valuesOfSnapshot } from '@/lib/contracts/spec-snapshot';
-import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
+import type { SignedInUser } from '@/server/auth/roles';
 import { markLibraryChanged } from '../search/search.service';
-import { Spec } from './spec.entity';
-import { SpecRevision } from './spec-revision.entity';
+import type { SpecRevision } from './spec-revision.entity';
+import { RevisionRepository, SpecRepository } from './spec.repository';
 import { checkValues, inSpecTransaction, lockSpec, writeSpecChange } from './spec-write';
-import { getSpec } from './spec.service';
+import { checkVisible, getSpec } from './spec.service';
 
-/** Newest first, each with its changes against the revision before it. */
-export async function listRevisions(specId: number): Promise<RevisionListDto> {
-  const spec = await AppDataSource.getRepository(Spec).findOne({
-    where: { id: specId },
-    select: { id: true, version: true },
-  });
+/** Newest first, each with its changes against the revision before it (a draft's only for editors). */
+export async function listRevisions(specId: number, viewer: SignedInUser | undefined): Promise<RevisionListDto> {
+  const spec = await SpecRepository.versionOf(specId);
   if (!spec) throw AppError.notFound('spec', specId);
-  const revisions = await AppDataSource.getRepository(SpecRevision).find({
-    where: { specId },
-    order: { version: 'ASC' },
-  });
+  checkVisible(spec, viewer);
+  const revisions = await RevisionRepository.historyOf(specId, 'ASC');
   const withDiffs = revisions.map((r, i): RevisionDiffDto => ({
     id: r.id,
     version: r.version,
@@ -41,9 +36,9 @@ export async function listRevisions(specId: number): Promise<RevisionListDto> {
 }
 
 async function revisionOf(specId: number, revisionId: number): Promise<SpecRevision> {
-  const revision = await AppDataSource.getRepository(SpecRevision).findOneBy({ id: revisionId });
+  const revision = await RevisionRepository.findOneBy({ id: revisionId });
   if (revision?.specId === specId) return revision;
-  if (!(await AppDataSource.getRepository(Spec).existsBy({ id: specId }))) throw AppError.notFound('spec', specId);
+  if (!(await SpecRepository.existsBy({ id: specId }))) throw AppError.notFound('spec', specId);
   throw AppError.notFound(`revision of spec ${specId}`, revisionId);
 }
 

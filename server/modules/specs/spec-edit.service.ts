@@ -13,10 +13,10 @@ import { parseUnit } from '@/lib/units';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
 import { foldKey } from '../library/keys';
+import { recordSpecChange } from '../library/library-changes';
 import { markLibraryChanged } from '../search/search.service';
 import { Spec } from './spec.entity';
-import { SpecRevision } from './spec-revision.entity';
-import { Source } from '../library/source.entity';
+import { RevisionRepository, SourceRepository, SpecRepository } from './spec.repository';
 import { ensureComponent, ensureSource } from './spec-library';
 import { StaleSpec, checkValues, inSpecTransaction, lockSpec, writeSpecChange } from './spec-write';
 import { getSpec } from './spec.service';
@@ -31,7 +31,7 @@ export async function insertNewSpec(
   from: { origin: 'edit' | 'correction'; originRef: string | null } = { origin: 'edit', originRef: null },
 ): Promise<number> {
   const componentId = await ensureComponent(m, b);
-  const existing = await m.getRepository(Spec).findOneBy({ componentId, parameterKey: foldKey(b.parameter) });
+  const existing = await m.withRepository(SpecRepository).findByParameterKey(componentId, foldKey(b.parameter));
   if (existing)
     throw new StaleSpec(
       existing.id,
@@ -42,21 +42,21 @@ export async function insertNewSpec(
   const material = b.material ?? defaultMaterial(b.parameter, kind);
   const values = pickValues({ ...b, material, sourceId, sourcePage: b.source.page });
   const { identifiers } = await m
-    .getRepository(Spec)
+    .withRepository(SpecRepository)
     .insert({ ...values, componentId, parameterKey: foldKey(b.parameter), quantityKind: kind, version: 1 });
   const id = Number(identifiers[0].id);
-  const source = await m.getRepository(Source).findOneByOrFail({ id: sourceId });
-  await m.getRepository(SpecRevision).insert({
+  const source = await m.withRepository(SourceRepository).findOneByOrFail({ id: sourceId });
+  await m.withRepository(RevisionRepository).append({
     specId: id,
     version: 1,
     snapshot: snapshotOfSpec(values, source),
     changedFields: ['created'],
-    authorId: actor.id,
-    authorName: actor.name,
+    actor,
     reason: b.reason,
     origin: from.origin,
     originRef: from.originRef,
   });
+  await recordSpecChange(m, id);
   return id;
 }
 

@@ -9,14 +9,15 @@ import { specValueIssues } from '@/lib/contracts/curation';
 import type { SpecValues } from '@/lib/contracts/spec-fields';
 import { diffSnapshots, snapshotOfSpec } from '@/lib/contracts/spec-snapshot';
 import { parseUnit } from '@/lib/units';
-import { AppDataSource } from '@/server/db/data-source';
+import { isLockContention, writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
 import { foldKey } from '../library/keys';
-import { Source } from '../library/source.entity';
+import { recordSpecChange } from '../library/library-changes';
+import type { Source } from '../library/source.entity';
 import { Spec } from './spec.entity';
+import { RevisionRepository, SourceRepository, SpecRepository } from './spec.repository';
 import type { RevisionOrigin } from '@/lib/contracts/enums';
-import { SpecRevision } from './spec-revision.entity';
 import { getSpec } from './spec.service';
 
 /** Thrown inside a transaction; becomes 409 with the current spec once it has rolled back. */
@@ -31,11 +32,10 @@ export class StaleSpec extends Error {
 
 export async function inSpecTransaction<T>(fn: (m: EntityManager) => Promise<T>): Promise<T> {
   try {
-    return await AppDataSource.transaction(fn);
+    return await writeTransaction(fn);
   } catch (err) {
     if (err instanceof StaleSpec) throw AppError.conflict(err.message, { current: await getSpec(err.specId) });
-    const code = (err as { driverError?: { code?: string } }).driverError?.code;
-    if (code === 'ER_LOCK_DEADLOCK' || code === 'ER_LOCK_WAIT_TIMEOUT')
+    if (isLockContention(err))
       throw AppError.conflict('Someone else is saving this spec right now. Load it again and retry.');
     throw err;
   }
@@ -47,7 +47,7 @@ export async function lockSpec(
   id: number,
   version: number,
 ): Promise<{ spec: Spec; source: Source | null }> {
-  const spec = await m.getRepository(Spec).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+  const spec = await m.withRepository(SpecRepository).lockById(id);
   if (!spec) throw AppError.notFound('spec', id);
   if (spec.version !== version) {
     throw new StaleSpec(
@@ -55,7 +55,7 @@ export async function lockSpec(
       `Spec ${id} has changed since version ${version} (it is now at version ${spec.version}). Nothing was saved; review the current values and apply your change again.`,
     );
   }
-  const source = spec.sourceId === null ? null : await m.getRepository(Source).findOneBy({ id: spec.sourceId });
+  const source = await m.withRepository(SourceRepository).findCited(spec.sourceId);
   return { spec, source };
 }
 
@@ -68,7 +68,7 @@ export function checkValues(values: SpecValues) {
 async function checkParameterFree(m: EntityManager, spec: Spec, parameter: string) {
   const key = foldKey(parameter);
   if (key === spec.parameterKey) return;
-  const other = await m.getRepository(Spec).findOneBy({ componentId: spec.componentId, parameterKey: key });
+  const other = await m.withRepository(SpecRepository).findByParameterKey(spec.componentId, key);
   if (other)
     throw AppError.conflict(`This component already has a spec for '${other.parameter}' (spec ${other.id}).`, {
       specId: other.id,
@@ -89,11 +89,7 @@ export async function writeSpecChange(
 ): Promise<boolean> {
   const { values } = change;
   const nextSource =
-    values.sourceId === source?.id
-      ? source
-      : values.sourceId === null
-        ? null
-        : await m.getRepository(Source).findOneBy({ id: values.sourceId });
+    values.sourceId === source?.id ? source : await m.withRepository(SourceRepository).findCited(values.sourceId);
   const after = snapshotOfSpec(values, nextSource);
   const changes = diffSnapshots(snapshotOfSpec(spec, source), after);
   if (changes.length === 0) return false;
@@ -107,16 +103,16 @@ export async function writeSpecChange(
     .execute();
   if (result.affected !== 1)
     throw new StaleSpec(spec.id, `Spec ${spec.id} changed while this edit was being saved. Nothing was saved.`);
-  await m.getRepository(SpecRevision).insert({
+  await m.withRepository(RevisionRepository).append({
     specId: spec.id,
     version: spec.version + 1,
     snapshot: after,
     changedFields: changes.map((c) => c.field),
-    authorId: change.actor.id,
-    authorName: change.actor.name,
+    actor: change.actor,
     reason: change.reason,
     origin: change.origin,
     originRef: change.originRef,
   });
+  await recordSpecChange(m, spec.id);
   return true;
 }

@@ -7,7 +7,8 @@ import { readSpec } from './spec.service';
 import { createSpec, updateSpec } from './spec-edit.service';
 import { listRevisions, revertSpec } from './revision.service';
 
-const show = route({ params: IdParams }, ({ params }) => readSpec(params.id));
+// Public routes: req.user is the signed-in viewer when there is one (drafts are for editors).
+const show = route({ params: IdParams }, ({ params, req }) => readSpec(params.id, req.user));
 // Editors' writes and the revision history (route-rules.ts: editor and up).
 const create = route({ use: [requireJson], body: CreateSpecBody, created: true }, ({ body, actor }) =>
   createSpec(body, actor),
@@ -15,7 +16,7 @@ const create = route({ use: [requireJson], body: CreateSpecBody, created: true }
 const update = route({ params: IdParams, use: [requireJson], body: UpdateSpecBody }, ({ params, body, actor }) =>
   updateSpec(params.id, body, actor),
 );
-const revisions = route({ params: IdParams }, ({ params }) => listRevisions(params.id));
+const revisions = route({ params: IdParams }, ({ params, req }) => listRevisions(params.id, req.user));
 const revert = route({ params: IdParams, use: [requireJson], body: RevertSpecBody }, ({ params, body, actor }) =>
   revertSpec(params.id, body, actor),
 );

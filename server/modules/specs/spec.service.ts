@@ -1,23 +1,29 @@
 /** Reading specs: one spec with its citation, place in the library and full history. */
 import type { SpecDetailDto } from '@/lib/contracts/library';
-import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
-import { Spec } from './spec.entity';
-import { SpecRevision } from './spec-revision.entity';
+import { roleAtLeast, type SignedInUser } from '@/server/auth/roles';
+import { RevisionRepository, SpecRepository } from './spec.repository';
 import { toRevision, toSpecSummary, specValuesOf } from './spec.mapper';
 import { toComponent, toModelRef, toSource } from '../library/library.mapper';
 import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
+import { libraryFollower } from '../library/library-follower';
+
+/**
+ * Drafts are the editors' work in progress: to everyone below editor (and to anonymous
+ * visitors) a draft spec does not exist, on every path that reads a spec by id, as in
+ * search, model sheets and verdicts.
+ */
+export const seesDrafts = (viewer: SignedInUser | undefined) => !!viewer && roleAtLeast(viewer.role, 'editor');
+
+/** 404 unless the spec is published or the viewer may see drafts. */
+export function checkVisible(spec: { id: number; status: string }, viewer: SignedInUser | undefined) {
+  if (spec.status !== 'published' && !seesDrafts(viewer)) throw AppError.notFound('spec', spec.id);
+}
 
 export async function getSpec(id: number): Promise<SpecDetailDto> {
-  const spec = await AppDataSource.getRepository(Spec).findOne({
-    where: { id },
-    relations: { component: { model: { make: true } }, source: true },
-  });
+  const spec = await SpecRepository.findCard(id);
   if (!spec) throw AppError.notFound('spec', id);
-  const revisions = await AppDataSource.getRepository(SpecRevision).find({
-    where: { specId: id },
-    order: { version: 'DESC' },
-  });
+  const revisions = await RevisionRepository.historyOf(id, 'DESC');
   return {
     ...toSpecSummary(spec),
     ...specValuesOf(spec),
@@ -31,16 +37,27 @@ export async function getSpec(id: number): Promise<SpecDetailDto> {
 
 /**
  * Spec cards are read far more often than written: GET /api/specs/:id answers from a
- * small in-memory cache, dropped whenever the library changes in this process and
- * trusted for at most a few seconds (another server process may have written).
- * Writers use getSpec(), which always reads the database.
+ * small in-memory cache, dropped whenever the library changes in this process, entry by
+ * entry when library_changes names a spec written by any process (libraryFollower), and
+ * trusted for at most a few seconds in any case. Writers use getSpec(), which always
+ * reads the database.
  */
 const CACHE_TTL_MS = 5000;
 const CACHE_MAX = 5000;
 const cache = new Map<number, { dto: SpecDetailDto; at: number }>();
 onLibraryChanged(() => cache.clear());
+libraryFollower.subscribe((ids) => {
+  for (const id of ids) cache.delete(id);
+});
 
-export async function readSpec(id: number): Promise<SpecDetailDto> {
+export async function readSpec(id: number, viewer: SignedInUser | undefined): Promise<SpecDetailDto> {
+  const dto = await cachedSpec(id);
+  checkVisible(dto, viewer);
+  return dto;
+}
+
+async function cachedSpec(id: number): Promise<SpecDetailDto> {
+  libraryFollower.start();
   const hit = cache.get(id);
   if (hit && Date.now() - hit.at < CACHE_TTL_MS) return hit.dto;
   const generation = libraryGeneration();

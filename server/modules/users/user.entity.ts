@@ -6,7 +6,7 @@ export class User {
   @PrimaryGeneratedColumn({ type: 'int' })
   id: number;
 
-  /** Stored as typed; unique on the lower-cased form (case-insensitive). */
+  /** As signed up: normalizeEmail (lib/contracts/auth.ts) form; older rows may keep capitals. email_key is unique. */
   @Column({ type: 'varchar', length: 254 })
   email: string;
 

@@ -1,4 +1,4 @@
-import type { UserDto } from '@/lib/contracts/auth';
+import { normalizeEmail, type UserDto } from '@/lib/contracts/auth';
 import type { User } from './user.entity';
 
 export function toUserDto(u: User): UserDto {
@@ -13,4 +13,5 @@ export function toUserDto(u: User): UserDto {
   };
 }
 
-export const emailKey = (email: string) => email.trim().toLowerCase();
+/** The unique key of an address (lib/contracts/auth.ts normalizeEmail: NFKC, trimmed, lower-case). */
+export const emailKey = normalizeEmail;

@@ -1,7 +1,7 @@
 /** Admin work on accounts: list and search, change a role, disable or enable — each change recorded. */
 import { z } from 'zod';
 import type { UpdateUserBody, UserAuditDto, UserDto } from '@/lib/contracts/auth';
-import { AppDataSource } from '@/server/db/data-source';
+import { writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import type { Actor } from '@/server/auth/actor';
 import { revokeAllFor } from '../accounts/session-tokens';
@@ -13,7 +13,7 @@ export async function listUsers(q?: string): Promise<UserDto[]> {
 }
 
 export async function updateUser(id: number, body: z.infer<typeof UpdateUserBody>, actor: Actor): Promise<UserDto> {
-  return AppDataSource.transaction(async (m) => {
+  return writeTransaction(async (m) => {
     const users = m.withRepository(UserRepository);
     const user = await users.lockById(id);
     if (!user) throw AppError.notFound('user', id);

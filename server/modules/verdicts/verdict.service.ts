@@ -1,10 +1,13 @@
 /**
  * Judging a reading over HTTP: units as typed become canonical units, a spec named by
- * id is read from the library, and the shared engine (lib/verdict) decides. Every
- * impossible input is refused with 422 naming its field.
+ * id is read from the library (its meter mode, when it states none, from the parameter's
+ * words: lib/specs/classify.ts defaultMode), and the shared engine (lib/verdict) decides.
+ * Every impossible input is refused with 422 naming its field, a reading taken in another
+ * mode than the spec's included ('reading.mode').
  */
 import type { VerdictBody, VerdictResponse } from '@/lib/contracts/verdicts';
-import { CANONICAL_UNITS, parseUnit, type CanonicalUnit } from '@/lib/units';
+import { defaultMode } from '@/lib/specs/classify';
+import { CANONICAL_UNITS, parseUnit, unitKind, type CanonicalUnit } from '@/lib/units';
 import { evaluateReading, VerdictInputError, type SpecLimits, type VerdictInput } from '@/lib/verdict';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
@@ -26,14 +29,18 @@ async function specLimits(body: VerdictBody): Promise<{ limits: SpecLimits; vers
   }
   const spec = await AppDataSource.getRepository(Spec).findOneBy({ id: body.specId!, status: 'published' });
   if (!spec) throw AppError.notFound('spec', body.specId);
+  const unit = spec.unit as CanonicalUnit;
   return {
     limits: {
       min: spec.min,
       nominal: spec.nominal,
       max: spec.max,
-      unit: spec.unit as CanonicalUnit,
+      unit,
       refTempC: spec.refTempC,
       material: spec.material,
+      mode: spec.mode ?? defaultMode(spec.parameter, unitKind(unit)),
+      nearLimit: spec.nearLimit,
+      engineRpm: spec.engineRpm,
     },
     version: spec.version,
   };
@@ -46,6 +53,7 @@ export async function toVerdictInput(body: VerdictBody): Promise<{ input: Verdic
     spec: limits,
     reading: { value: body.reading.value, unit: unitAt(body.reading.unit, 'reading.unit') },
   };
+  if (body.reading.mode) input.reading.mode = body.reading.mode;
   if (body.leadResistance)
     input.leadResistance = {
       value: body.leadResistance.value,

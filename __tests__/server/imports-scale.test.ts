@@ -1,0 +1,96 @@
+/**
+ * The importer at scale (issue 14): the row limit, rejected rows capped in the preview,
+ * the staged-row cleanup (safe when several processes run it at once), and an import
+ * commit logged in library_changes for every process to follow.
+ */
+import request from 'supertest';
+import { SPEC_CSV_COLUMNS } from '@/lib/csv';
+import { MAX_CSV_ROWS } from '@/lib/csv/parse';
+import { MAX_REJECTED_KEPT } from '@/lib/csv/validate';
+import { createApp } from '@/server/app';
+import { AppDataSource } from '@/server/db/data-source';
+import { cleanUpImports } from '@/server/modules/imports/import-cleanup';
+import { lastChangeId } from '@/server/modules/library/library-changes';
+import { useTestDatabase } from '../helpers/test-db';
+import { expectProblem } from '../helpers/problems';
+import { authHeader } from '../helpers/auth';
+import { toCsv, uniqueMake, validFile, validRow } from '../fixtures/csv/rows';
+
+useTestDatabase();
+const app = createApp({ webDist: null });
+let editor: { Authorization: string };
+beforeAll(async () => {
+  editor = await authHeader('editor');
+});
+
+const upload = (text: string) =>
+  request(app)
+    .post('/api/imports')
+    .set(editor)
+    .attach('file', Buffer.from(text, 'utf8'), { filename: 'specs.csv', contentType: 'text/csv' });
+const staged = async (batchId: number) =>
+  Number((await AppDataSource.query('SELECT COUNT(*) AS n FROM import_batch_rows WHERE batch_id = ?', [batchId]))[0].n);
+const statusOf = async (batchId: number) =>
+  (await AppDataSource.query('SELECT status FROM import_batches WHERE id = ?', [batchId]))[0].status;
+
+describe('POST /api/imports limits', () => {
+  it('when the file has more rows than the limit, responds 413 and stages nothing', async () => {
+    const before = Number((await AppDataSource.query('SELECT COUNT(*) AS n FROM import_batches'))[0].n);
+    const text = `${SPEC_CSV_COLUMNS.join(',')}\n${'x\n'.repeat(MAX_CSV_ROWS + 1)}`;
+    const res = await upload(text);
+    expectProblem(res, 413, 'payload_too_large');
+    expect(res.body.detail).toMatch(/more than 200,000 rows/);
+    expect(Number((await AppDataSource.query('SELECT COUNT(*) AS n FROM import_batches'))[0].n)).toBe(before);
+  });
+
+  it('rejected rows beyond the cap are counted but not listed', async () => {
+    const make = uniqueMake();
+    const bad = Array.from({ length: MAX_REJECTED_KEPT + 50 }, (_, i) =>
+      validRow(make, { model: `M${i}`, unit: 'furlong' }),
+    );
+    const res = await upload(toCsv([validRow(make), ...bad])).expect(201);
+    expect(res.body.counts).toMatchObject({ created: 1, rejected: MAX_REJECTED_KEPT + 50 });
+    expect(await staged(res.body.id)).toBe(1 + MAX_REJECTED_KEPT);
+  });
+});
+
+describe('staged-row cleanup', () => {
+  it('closes previews older than a day and superseded ones, and removes the staged rows of committed batches', async () => {
+    const old = (await upload(validFile(uniqueMake(), 3)).expect(201)).body.id;
+    await AppDataSource.query('UPDATE import_batches SET created_at = NOW(3) - INTERVAL 25 HOUR WHERE id = ?', [old]);
+    const file = validFile(uniqueMake(), 2);
+    const first = (await upload(file).expect(201)).body.id;
+    const second = (await upload(file).expect(201)).body.id;
+    const committed = (await upload(validFile(uniqueMake(), 2)).expect(201)).body.id;
+    await request(app).post(`/api/imports/${committed}/commit`).set(editor).send({}).expect(200);
+    const fresh = (await upload(validFile(uniqueMake(), 2)).expect(201)).body.id;
+
+    // Two processes at once: each batch is closed once and nothing fails.
+    await Promise.all([cleanUpImports(), cleanUpImports()]);
+
+    expect(await statusOf(old)).toBe('failed');
+    expect(await statusOf(first)).toBe('failed');
+    expect(await statusOf(second)).toBe('previewed');
+    expect(await statusOf(fresh)).toBe('previewed');
+    for (const id of [old, first, committed]) expect(await staged(id)).toBe(0);
+    expect(await staged(second)).toBe(2);
+    expectProblem(await request(app).post(`/api/imports/${old}/commit`).set(editor).send({}), 422);
+  });
+});
+
+describe('import commit and library_changes', () => {
+  it('logs every spec the commit wrote, in the same transaction', async () => {
+    const before = await lastChangeId();
+    const batch = (await upload(validFile(uniqueMake(), 4)).expect(201)).body.id;
+    await request(app).post(`/api/imports/${batch}/commit`).set(editor).send({}).expect(200);
+    const rows = await AppDataSource.query('SELECT spec_id AS specId FROM library_changes WHERE id > ?', [before]);
+    const specs = await AppDataSource.query(
+      'SELECT spec_id AS specId FROM spec_revisions WHERE origin_ref = ? ORDER BY spec_id',
+      [`batch #${batch}`],
+    );
+    expect(rows.map((r: { specId: number }) => r.specId).sort()).toEqual(
+      specs.map((r: { specId: number }) => r.specId).sort(),
+    );
+    expect(rows).toHaveLength(4);
+  });
+});

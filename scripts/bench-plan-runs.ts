@@ -1,0 +1,93 @@
+/**
+ * Benchmark (issue 12): starting a plan run and answering its first step, under load, against
+ * the server bench.sh starts (demo library and accounts loaded). Each of BENCH_RUN_CONNECTIONS
+ * (10) workers signs in as the demo contributor's session, keeps its own job on the demo 650
+ * Moorland and, for BENCH_RUN_SECONDS (15), starts the no-spark plan and answers its battery
+ * step with a fresh Idempotency-Key. Prints p50 / p95 / p99 of each request against the API's
+ * p95 goal (25 ms, DESIGN §8) and the error count.
+ */
+import { performance } from 'node:perf_hooks';
+
+const base = process.env.BENCH_URL ?? 'http://127.0.0.1:8090';
+const connections = Number(process.env.BENCH_RUN_CONNECTIONS ?? 10);
+const seconds = Number(process.env.BENCH_RUN_SECONDS ?? 15);
+const GOAL_MS = 25;
+
+async function call(path: string, init: RequestInit & { token?: string } = {}) {
+  const headers: Record<string, string> = {
+    'Content-Type': 'application/json',
+    ...(init.headers as Record<string, string>),
+  };
+  if (init.token) headers.Authorization = `Bearer ${init.token}`;
+  const res = await fetch(`${base}${path}`, { ...init, headers });
+  return { status: res.status, body: (await res.json().catch(() => null)) as Record<string, unknown> & unknown[] };
+}
+
+async function arrange() {
+  const password = process.env.DEMO_PASSWORD ?? 'bench-demo-2026';
+  const signIn = await call('/api/auth/sign-in', {
+    method: 'POST',
+    body: JSON.stringify({ email: 'contributor@specbench.example', password }),
+  });
+  const token = signIn.body.accessToken as string;
+  const models = (await call('/api/models')).body as unknown as { id: number; name: string; yearFrom: number }[];
+  const moorland = models.find((m) => m.name === '650 Moorland')!;
+  const plan = ((await call('/api/plans?q=no%20spark')).body as unknown as { id: number }[])[0];
+  const jobs: number[] = [];
+  for (let i = 0; i < connections; i++) {
+    const job = await call('/api/jobs', {
+      method: 'POST',
+      token,
+      body: JSON.stringify({ modelId: moorland.id, notes: 'bench' }),
+    });
+    jobs.push(job.body.id as number);
+  }
+  return { token, planId: plan.id, jobs };
+}
+
+const pct = (xs: number[], q: number) => xs[Math.min(xs.length - 1, Math.ceil((q / 100) * xs.length) - 1)];
+
+function report(name: string, xs: number[]) {
+  xs.sort((a, b) => a - b);
+  const p95 = pct(xs, 95);
+  console.log(
+    `${name}: ${xs.length} requests · p50 ${pct(xs, 50).toFixed(2)} ms · p95 ${p95.toFixed(2)} ms · p99 ${pct(xs, 99).toFixed(2)} ms · target p95 ≤ ${GOAL_MS} ms → ${p95 <= GOAL_MS ? 'met' : 'MISSED'}`,
+  );
+}
+
+async function main() {
+  const { token, planId, jobs } = await arrange();
+  const starts: number[] = [];
+  const answers: number[] = [];
+  let errors = 0;
+  const end = performance.now() + seconds * 1000;
+  const worker = async (jobId: number, w: number) => {
+    for (let n = 0; performance.now() < end; n++) {
+      let t = performance.now();
+      const run = await call(`/api/jobs/${jobId}/runs`, { method: 'POST', token, body: JSON.stringify({ planId }) });
+      starts.push(performance.now() - t);
+      if (run.status !== 201) {
+        errors += 1;
+        continue;
+      }
+      t = performance.now();
+      const res = await call(`/api/jobs/${jobId}/runs/${run.body.id}/results`, {
+        method: 'POST',
+        token,
+        headers: { 'Idempotency-Key': `bench-${w}-${n}-${Date.now()}` },
+        body: JSON.stringify({ stepId: 'battery', reading: { value: 13.1, unit: 'V' } }),
+      });
+      answers.push(performance.now() - t);
+      if (res.status !== 201) errors += 1;
+    }
+  };
+  await Promise.all(jobs.map(worker));
+  console.log(`plan runs: ${connections} connections × ${seconds} s, ${errors} errors`);
+  report('start a run', starts);
+  report('answer a step', answers);
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});

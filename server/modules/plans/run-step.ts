@@ -1,0 +1,62 @@
+/**
+ * A run's steps as the technician sees them: each step with the library spec it judges
+ * against on the job's model (by component and parameter), or null when the step offers
+ * typed limits, and the connector face of its test point's component.
+ */
+import type { EntityManager } from 'typeorm';
+import type { ConnectorDto, PlanStep, RunStepDto, SpecForStepDto } from '@/lib/contracts/plans';
+import { findComponent, findSpec } from '@/lib/plans/applicability';
+import { formatRange, type CanonicalUnit } from '@/lib/units';
+import type { Component } from '../library/component.entity';
+import type { Spec } from '../specs/spec.entity';
+import { connectorsOf, modelParts } from './plan.repository';
+
+export type JobModelParts = { components: Component[]; connectors: Map<number, ConnectorDto> };
+
+export async function jobModelParts(modelId: number | null, m?: EntityManager): Promise<JobModelParts> {
+  if (modelId === null) return { components: [], connectors: new Map() };
+  const components = await modelParts(modelId, m);
+  const connectors = await connectorsOf(
+    components.map((c) => c.id),
+    m,
+  );
+  return { components, connectors: new Map(connectors.map((c) => [c.componentId, c.connector])) };
+}
+
+/** The published spec a step's check names on this model, or null. */
+export function specOfStep(step: PlanStep, parts: JobModelParts): { spec: Spec; component: Component } | null {
+  if (step.check.kind !== 'spec') return null;
+  const component = findComponent(step.check.component, parts.components);
+  const spec = component ? findSpec(step.check.parameter, component.specs) : null;
+  return component && spec ? { spec, component } : null;
+}
+
+function specDto(s: Spec): SpecForStepDto {
+  return {
+    id: s.id,
+    mode: s.mode ?? null,
+    engineRpm: s.engineRpm ?? null,
+    min: s.min,
+    nominal: s.nominal,
+    max: s.max,
+    unit: s.unit,
+    display: formatRange(s.min, s.nominal, s.max, s.unit as CanonicalUnit),
+    testPoints: s.testPoints,
+    conditions: s.conditions,
+  };
+}
+
+export function toRunStep(steps: PlanStep[], id: string | null, parts: JobModelParts): RunStepDto | null {
+  const position = steps.findIndex((s) => s.id === id);
+  if (position < 0) return null;
+  const step = steps[position];
+  const found = specOfStep(step, parts);
+  const pointComponent = step.testPoint.component ? findComponent(step.testPoint.component, parts.components) : null;
+  const component = pointComponent ?? found?.component ?? null;
+  return {
+    ...step,
+    position,
+    spec: found ? specDto(found.spec) : null,
+    connector: component ? (parts.connectors.get(component.id) ?? null) : null,
+  };
+}

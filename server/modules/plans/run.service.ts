@@ -1,0 +1,239 @@
+/**
+ * Running a plan on a job. A run copies the plan's steps when it starts (a generic plan is
+ * checked against the job's model then: 422 naming the step it cannot run), and keeps its
+ * state on the server so it can be paused on one device and resumed on another. Each result
+ * is judged on the server (run-judge.ts), kept as a job reading linked to its step, and moves
+ * the run by the plan's rules (lib/plans/branching.ts) to the next step or to a finding. An
+ * Idempotency-Key makes a resent result land exactly once.
+ */
+import { randomUUID } from 'node:crypto';
+import type { EntityManager } from 'typeorm';
+import type { RunAnswerDto, RunDto, RunResultBody, RunResultDto } from '@/lib/contracts/plans';
+import { fitProblems } from '@/lib/plans/applicability';
+import { targetFor } from '@/lib/plans/branching';
+import type { SignedInUser } from '@/server/auth/roles';
+import { AppDataSource } from '@/server/db/data-source';
+import { AppError } from '@/server/errors/app-error';
+import type { Job } from '../jobs/job.entity';
+import { ownJobOr404 } from '../jobs/job-access';
+import { toReadingDto } from '../jobs/job.mapper';
+import { JobRepository, ReadingRepository } from '../jobs/job.repository';
+import type { PlanRun } from './plan-run.entity';
+import type { PlanRunResult } from './plan-run-result.entity';
+import { PlanRepository, PlanRunRepository, PlanRunResultRepository } from './plan.repository';
+import { judgeStep } from './run-judge';
+import { jobModelParts, toRunStep, type JobModelParts } from './run-step';
+
+function toResultDto(r: PlanRunResult, run: PlanRun): RunResultDto {
+  return {
+    id: r.id,
+    stepId: r.stepId,
+    title: run.steps.find((s) => s.id === r.stepId)?.title ?? r.stepId,
+    outcome: r.outcome === 'skip' ? 'skipped' : r.outcome,
+    verdict: r.verdict,
+    reason: r.reason,
+    readingId: r.readingId,
+    skipReason: r.skipReason,
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
+function toRunDto(run: PlanRun, results: PlanRunResult[], parts: JobModelParts): RunDto {
+  return {
+    id: run.id,
+    jobId: run.jobId,
+    planId: run.planId,
+    planVersion: run.planVersion,
+    title: run.title,
+    symptom: run.symptom,
+    system: run.system,
+    status: run.status,
+    stepCount: run.steps.length,
+    currentStep: toRunStep(run.steps, run.currentStep, parts),
+    finding: run.finding,
+    results: results.filter((r) => !r.undone).map((r) => toResultDto(r, run)),
+    startedAt: run.startedAt.toISOString(),
+    updatedAt: run.updatedAt.toISOString(),
+  };
+}
+
+async function jobFor(m: EntityManager, user: SignedInUser, jobId: number, lock: boolean): Promise<Job> {
+  const jobs = m.withRepository(JobRepository);
+  return ownJobOr404(user, lock ? await jobs.lockById(jobId) : await jobs.findOneBy({ id: jobId }), jobId);
+}
+
+/** Only the job's owner answers steps (an admin may look, not measure). */
+function ownerOnly(user: SignedInUser, job: Job) {
+  if (job.ownerId !== user.id)
+    throw AppError.forbidden('Only the technician who owns this job can record its results.');
+  if (job.status === 'closed') throw AppError.conflict('This job is closed. Reopen it to run a plan.');
+}
+
+export async function startRun(user: SignedInUser, jobId: number, planId: number): Promise<RunDto> {
+  return AppDataSource.transaction(async (m) => {
+    const job = await jobFor(m, user, jobId, true);
+    ownerOnly(user, job);
+    const plan = await m.withRepository(PlanRepository).findOneBy({ id: planId, status: 'published' });
+    if (!plan)
+      throw AppError.unprocessable(`No published plan with id ${planId}.`, [
+        { path: 'planId', message: 'No such plan' },
+      ]);
+    if (plan.modelId !== null && plan.modelId !== job.modelId)
+      throw AppError.unprocessable('This plan is for another model.', [
+        { path: 'planId', message: 'Plan is for another model' },
+      ]);
+    const parts = await jobModelParts(job.modelId, m);
+    if (job.modelId !== null && plan.modelId === null) {
+      const problems = fitProblems(plan.steps, parts.components, false);
+      if (problems.length) throw AppError.unprocessable(problems[0].message, problems);
+    }
+    const runs = m.withRepository(PlanRunRepository);
+    const run = await runs.save(
+      runs.create({
+        jobId,
+        planId: plan.id,
+        planVersion: plan.version,
+        title: plan.title,
+        symptom: plan.symptom,
+        system: plan.system,
+        steps: plan.steps,
+        currentStep: plan.steps[0].id,
+        status: 'active',
+        finding: null,
+      }),
+    );
+    return toRunDto(run, [], parts);
+  });
+}
+
+export async function getRun(user: SignedInUser, jobId: number, runId: number): Promise<RunDto> {
+  const job = await jobFor(AppDataSource.manager, user, jobId, false);
+  const run = await PlanRunRepository.findOneBy({ id: runId, jobId });
+  if (!run) throw AppError.notFound('run', runId);
+  return toRunDto(run, await PlanRunResultRepository.listFor([run.id]), await jobModelParts(job.modelId));
+}
+
+export async function listRuns(user: SignedInUser, jobId: number): Promise<RunDto[]> {
+  const job = await jobFor(AppDataSource.manager, user, jobId, false);
+  const runs = await PlanRunRepository.listForJob(jobId);
+  const results = await PlanRunResultRepository.listFor(runs.map((r) => r.id));
+  const parts = await jobModelParts(job.modelId);
+  return runs.map((run) =>
+    toRunDto(
+      run,
+      results.filter((r) => r.runId === run.id),
+      parts,
+    ),
+  );
+}
+
+async function answerOf(
+  m: EntityManager,
+  run: PlanRun,
+  result: PlanRunResult,
+  parts: JobModelParts,
+): Promise<RunAnswerDto> {
+  const results = await m.withRepository(PlanRunResultRepository).listFor([run.id]);
+  const reading = result.readingId
+    ? await m.withRepository(ReadingRepository).findOneBy({ id: result.readingId })
+    : null;
+  const dto = toRunDto(run, results, parts);
+  return {
+    judged: toResultDto(result, run),
+    reading: reading ? toReadingDto(reading, reading.specVersion) : null,
+    next: dto.currentStep,
+    finding: dto.finding,
+    run: dto,
+  };
+}
+
+async function lockRun(m: EntityManager, user: SignedInUser, jobId: number, runId: number) {
+  const job = await jobFor(m, user, jobId, true);
+  ownerOnly(user, job);
+  const run = await m.withRepository(PlanRunRepository).lockOnJob(runId, jobId);
+  if (!run) throw AppError.notFound('run', runId);
+  return { job, run, parts: await jobModelParts(job.modelId, m) };
+}
+
+export async function answerStep(
+  user: SignedInUser,
+  jobId: number,
+  runId: number,
+  body: RunResultBody,
+  key?: string,
+): Promise<RunAnswerDto & { created: boolean }> {
+  const idempotencyKey = key ?? randomUUID();
+  return AppDataSource.transaction(async (m) => {
+    const { run, parts } = await lockRun(m, user, jobId, runId);
+    const results = m.withRepository(PlanRunResultRepository);
+    const seen = await results.findOneBy({ runId, idempotencyKey });
+    if (seen) return { ...(await answerOf(m, run, seen, parts)), created: false };
+    if (run.status === 'concluded')
+      throw AppError.conflict('This run has reached its finding. Go back a step to change it.');
+    if (body.stepId !== run.currentStep)
+      throw AppError.conflict(`The run is at step "${run.currentStep}", not "${body.stepId}".`, {
+        currentStep: run.currentStep,
+      });
+    const step = run.steps.find((s) => s.id === run.currentStep)!;
+    const judged = await judgeStep(step, body, parts);
+    const readingId = judged.reading
+      ? await keepReading(m, jobId, runId, step.id, judged.reading, idempotencyKey)
+      : null;
+    const saved = await results.save(
+      results.create({
+        runId,
+        stepId: step.id,
+        outcome: judged.outcome,
+        verdict: judged.verdict,
+        reason: judged.reason,
+        readingId,
+        skipReason: body.skipReason ?? null,
+        idempotencyKey,
+        undone: false,
+      }),
+    );
+    const target = targetFor(step, judged.outcome);
+    if ('step' in target) Object.assign(run, { currentStep: target.step, status: 'active', finding: null });
+    else
+      Object.assign(run, { currentStep: null, status: 'concluded', finding: { ...target.finding, stepId: step.id } });
+    await m.withRepository(PlanRunRepository).save(run);
+    return { ...(await answerOf(m, run, saved, parts)), created: true };
+  });
+}
+
+/** Saves the step's reading on the job; a step answered again after going back re-takes its old reading. */
+async function keepReading(
+  m: EntityManager,
+  jobId: number,
+  runId: number,
+  stepId: string,
+  reading: NonNullable<Awaited<ReturnType<typeof judgeStep>>['reading']>,
+  idempotencyKey: string,
+): Promise<number> {
+  const readings = m.withRepository(ReadingRepository);
+  const saved = await readings.save({ ...reading, jobId, idempotencyKey, supersededBy: null, takenAt: new Date() });
+  const undone = await m
+    .withRepository(PlanRunResultRepository)
+    .find({ where: { runId, stepId, undone: true }, order: { id: 'DESC' } });
+  const old = undone.find((r) => r.readingId !== null);
+  if (old) {
+    const previous = await readings.findOneBy({ id: old.readingId! });
+    if (previous && previous.supersededBy === null) await readings.markSuperseded(previous.id, saved.id);
+  }
+  return saved.id;
+}
+
+/** Goes back one step: the last result is marked undone (kept), the run waits at that step again. */
+export async function stepBack(user: SignedInUser, jobId: number, runId: number): Promise<RunDto> {
+  return AppDataSource.transaction(async (m) => {
+    const { run, parts } = await lockRun(m, user, jobId, runId);
+    const results = m.withRepository(PlanRunResultRepository);
+    const live = (await results.listFor([runId])).filter((r) => !r.undone);
+    const last = live.at(-1);
+    if (!last) throw AppError.conflict('The run is at its first step.');
+    await results.update(last.id, { undone: true });
+    Object.assign(run, { currentStep: last.stepId, status: 'active', finding: null });
+    await m.withRepository(PlanRunRepository).save(run);
+    return toRunDto(run, await results.listFor([runId]), parts);
+  });
+}
