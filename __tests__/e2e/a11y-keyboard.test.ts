@@ -5,7 +5,7 @@
  */
 import type { Locator, Page } from 'playwright-core';
 import { AppDataSource } from '@/server/db/data-source';
-import { signAccessToken } from '@/server/auth/tokens';
+import { bearerFor } from '../helpers/auth';
 import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
 import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
@@ -131,7 +131,7 @@ it('an editor reviews a correction by keyboard', async () => {
   const user = await AppDataSource.getRepository(User).findOneByOrFail({ emailKey: emailKey(contributor.email) });
   const res = await fetch(`${app.url}/api/corrections`, {
     method: 'POST',
-    headers: { Authorization: `Bearer ${signAccessToken(user)}`, 'Content-Type': 'application/json' },
+    headers: { ...(await bearerFor(user)), 'Content-Type': 'application/json' },
     body: JSON.stringify({
       kind: 'change',
       specId: spec.id,

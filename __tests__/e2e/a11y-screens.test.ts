@@ -6,7 +6,7 @@
  */
 import type { Browser, Page } from 'playwright-core';
 import { AppDataSource } from '@/server/db/data-source';
-import { signAccessToken } from '@/server/auth/tokens';
+import { bearerFor } from '../helpers/auth';
 import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
 import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
@@ -25,7 +25,7 @@ async function api(email: string, method: string, path: string, body?: unknown):
   const user = await AppDataSource.getRepository(User).findOneByOrFail({ emailKey: emailKey(email) });
   const res = await fetch(`${app.url}/api${path}`, {
     method,
-    headers: { Authorization: `Bearer ${signAccessToken(user)}`, 'Content-Type': 'application/json' },
+    headers: { ...(await bearerFor(user)), 'Content-Type': 'application/json' },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
   if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);

@@ -3,12 +3,7 @@ import type { Locator, Page } from 'playwright-core';
 
 /** True when the element (or a descendant, e.g. the input inside a field) has the keyboard focus. */
 export async function hasFocus(target: Locator): Promise<boolean> {
-  // Runs in the browser; typed by hand, as the e2e project's tsconfig has no DOM types.
-  type Node = { contains: (other: unknown) => boolean };
-  return target.first().evaluate((el: Node) => {
-    const active = (globalThis as unknown as { document: { activeElement: unknown } }).document.activeElement;
-    return el === active || el.contains(active);
-  });
+  return target.first().evaluate((el) => el === document.activeElement || el.contains(document.activeElement));
 }
 
 /**
