@@ -1,6 +1,7 @@
 import { Pressable, StyleSheet } from 'react-native';
 import { usePathname, useRouter } from 'expo-router';
 import { Spacing } from '@/lib/theme';
+import { useHydrated } from '@/lib/hooks/use-hydrated';
 import { useTheme } from '@/lib/theme/use-theme';
 import { focusRing } from './focus-ring';
 import { LinkRow } from './link-row';
@@ -15,6 +16,8 @@ export function HeaderBack() {
   const router = useRouter();
   const path = usePathname();
   const t = useTheme();
+  const hydrated = useHydrated();
+  if (!hydrated) return null;
   if (router.canGoBack())
     return (
       <Pressable

@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { usePathname, useRouter, type Href } from 'expo-router';
+import { useHydrated } from '@/lib/hooks/use-hydrated';
 import { useSession } from '@/lib/session/session-provider';
 import { Spacing } from '@/lib/theme';
 import { useIsWide, useTheme } from '@/lib/theme/use-theme';
@@ -23,7 +24,8 @@ export function BottomBar() {
   const router = useRouter();
   const path = usePathname();
   const { status, can } = useSession();
-  if (wide) return null;
+  const hydrated = useHydrated();
+  if (wide || !hydrated) return null;
   const items = [SEARCH, CALCULATOR, ...(status === 'signed-in' ? [JOBS] : []), ...(can('editor') ? [REVIEW] : [])];
   return (
     <View
