@@ -1,11 +1,16 @@
-import { useEffect, useState } from 'react';
+import { useSyncExternalStore } from 'react';
+
+const subscribe = () => () => undefined;
 
 /**
- * False during the static (server) render and the first client render, true after: parts that depend on
- * the window's width, the session or the history render only then, so hydration sees the same HTML.
+ * False during the static (server) render and while hydrating, true after: parts that depend on the
+ * window's width, the session or the history render only then, so hydration sees the same HTML.
+ * (useSyncExternalStore's server snapshot is what React uses for both.)
  */
 export function useHydrated(): boolean {
-  const [hydrated, setHydrated] = useState(false);
-  useEffect(() => setHydrated(true), []);
-  return hydrated;
+  return useSyncExternalStore(
+    subscribe,
+    () => true,
+    () => false,
+  );
 }
