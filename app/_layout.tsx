@@ -6,6 +6,8 @@ import { Stack } from 'expo-router';
 import { ApiError } from '@/lib/api/client';
 import { SessionProvider } from '@/lib/session/session-provider';
 import { HeaderAccount } from '@/components/ui/header-account';
+import { HeaderBack } from '@/components/ui/app-header';
+import { BottomBar } from '@/components/ui/bottom-bar';
 import { ReadingQueueSync } from '@/components/jobs/reading-queue-sync';
 import { useHeaderOptions } from '@/lib/theme/use-header-options';
 import { useAppFonts } from '@/lib/theme/use-app-fonts';
@@ -76,6 +78,7 @@ export default function RootLayout() {
           <Stack
             screenOptions={{
               ...header,
+              headerLeft: () => <HeaderBack />,
               headerRight: () => <HeaderAccount />,
             }}
           >
@@ -99,6 +102,7 @@ export default function RootLayout() {
             <Stack.Screen name="editor/specs/[specId]" options={{ title: 'Edit spec' }} />
           </Stack>
         </View>
+        <BottomBar />
       </SessionProvider>
     </QueryProvider>
   );

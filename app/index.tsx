@@ -62,17 +62,25 @@ export default function SearchScreen() {
         ) : null}
         <EditorActions />
       </View>
-      <MainAndSide
-        main={<SearchArea q={q} onOpenSpec={openSpec} onOpenModel={openModel} />}
-        side={
-          (wide || q.trim() === '') && (
-            <>
-              <Text variant="heading">Browse the library</Text>
-              <BrowseModels onOpenModel={openModel} />
-            </>
-          )
-        }
-      />
+      {q.trim() === '' ? (
+        // Nothing searched yet: the library fills the page (no empty results column beside it).
+        <View style={styles.browse}>
+          <Text variant="heading">Browse the library</Text>
+          <BrowseModels onOpenModel={openModel} columns={wide} />
+        </View>
+      ) : (
+        <MainAndSide
+          main={<SearchArea q={q} onOpenSpec={openSpec} onOpenModel={openModel} />}
+          side={
+            wide && (
+              <>
+                <Text variant="heading">Browse the library</Text>
+                <BrowseModels onOpenModel={openModel} />
+              </>
+            )
+          }
+        />
+      )}
     </Screen>
   );
 }
@@ -108,17 +116,18 @@ function SearchArea({
   );
 }
 
-function BrowseModels({ onOpenModel }: { onOpenModel: (id: number) => void }) {
+function BrowseModels({ onOpenModel, columns = false }: { onOpenModel: (id: number) => void; columns?: boolean }) {
   const models = useModelsQuery();
   if (models.isPending) return <LoadingState label="Loading models" />;
   if (models.error) return <ErrorState message={describeError(models.error)} onRetry={models.refetch} />;
   if (models.data.length === 0)
     return <EmptyState message="The library is empty. An editor can import specs from CSV." />;
-  return <ModelList models={models.data} onOpenModel={onOpenModel} />;
+  return <ModelList models={models.data} onOpenModel={onOpenModel} columns={columns} />;
 }
 
 const styles = StyleSheet.create({
   intro: { gap: Spacing.xs },
+  browse: { gap: Spacing.md },
   calcButton: { alignSelf: 'flex-start' },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: Spacing.sm },
   plans: { gap: Spacing.sm },

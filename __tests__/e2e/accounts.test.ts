@@ -169,6 +169,9 @@ describe('accounts in the browser', () => {
     await waitUntil(async () => (await rows.count()) === 1 && (await rows.first().innerText()).includes(TECH.email));
     const row = rows.first();
     await row.getByRole('radio', { name: 'Role: Editor' }).click();
+    await expectText(row.getByTestId(/^confirm-\d+$/), 'to Editor?', 'the confirmation');
+    await row.getByRole('button', { name: 'Yes, make Editor' }).click();
+    await expectText(users.getByTestId('users-notice'), 'is now Editor.', 'the message afterwards');
     const roleOf = async () =>
       (await AppDataSource.getRepository(User).findOneByOrFail({ emailKey: emailKey(TECH.email) })).role;
     await waitUntil(async () => (await roleOf()) === 'editor', 'the role change to be saved');

@@ -1,4 +1,5 @@
 import { Stack } from 'expo-router';
+import { HeaderBack } from '@/components/ui/app-header';
 import { useHeaderOptions } from '@/lib/theme/use-header-options';
 
 /**
@@ -14,6 +15,7 @@ export default function AuthLayout() {
         ...header,
         // Each page names itself in its card; `title` still names the browser tab.
         headerTitle: 'Specbench',
+        headerLeft: () => <HeaderBack />,
       }}
     >
       <Stack.Screen name="sign-in" options={{ title: 'Sign in' }} />

@@ -6,6 +6,7 @@ import { FormAlert } from '@/components/ui/form-alert';
 import { FormPanel } from '@/components/ui/form-panel';
 import { formFailure } from '@/components/ui/form-failure';
 import { UserRow } from '@/components/account/user-row';
+import { ROLE_LABELS } from '@/components/account/account-summary';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { MainAndSide } from '@/components/ui/main-and-side';
@@ -56,6 +57,24 @@ function UserAdmin({ selfId }: { selfId: number }) {
   const [selected, setSelected] = useState<UserDto | null>(null);
   const users = useUsersQuery(useDebouncedValue(text, 250));
   const update = useUpdateUserMutation();
+  const [notice, setNotice] = useState<string | null>(null);
+  /** Sends the change, then says what happened (announced: FormAlert is a live region). */
+  const change = (u: UserDto, patch: { role: UserDto['role'] } | { disabled: boolean }) => {
+    setNotice(null);
+    update.mutate(
+      { id: u.id, ...patch },
+      {
+        onSuccess: () =>
+          setNotice(
+            'role' in patch
+              ? `${u.displayName} is now ${ROLE_LABELS[patch.role]}.`
+              : patch.disabled
+                ? `${u.displayName}’s account is disabled.`
+                : `${u.displayName}’s account is enabled again.`,
+          ),
+      },
+    );
+  };
   const busyId = update.isPending ? update.variables.id : null;
   const toggle = (u: UserDto) => setSelected(selected?.id === u.id ? null : u);
 
@@ -71,8 +90,8 @@ function UserAdmin({ selfId }: { selfId: number }) {
           isSelf={u.id === selfId}
           busy={busyId === u.id}
           selected={selected?.id === u.id}
-          onRole={(role) => update.mutate({ id: u.id, role })}
-          onDisabled={(disabled) => update.mutate({ id: u.id, disabled })}
+          onRole={(role) => change(u, { role })}
+          onDisabled={(disabled) => change(u, { disabled })}
           onSelect={() => toggle(u)}
         />
         {!wide && selected?.id === u.id ? <AuditSection user={u} /> : null}
@@ -100,6 +119,7 @@ function UserAdmin({ selfId }: { selfId: number }) {
         testID="users-search"
         style={styles.search}
       />
+      {notice ? <FormAlert tone="success" message={notice} testID="users-notice" /> : null}
       {update.error ? (
         <FormAlert tone="error" message={formFailure(update.error)!.message} testID="users-error" />
       ) : null}

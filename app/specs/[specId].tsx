@@ -1,4 +1,4 @@
-import { Pressable } from 'react-native';
+import { StyleSheet } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { BatteryCharge } from '@/components/calculator/battery-charge';
 import { Calculator } from '@/components/calculator/calculator';
@@ -10,6 +10,8 @@ import { EditSpecButton } from '@/components/spec-editor/edit-spec-button';
 import { SafetyNotes } from '@/components/library/safety-notes';
 import { cautionCategories, defaultMode, isRestVoltage } from '@/lib/specs/classify';
 import { SpecValues } from '@/components/library/spec-values';
+import { FormAlert } from '@/components/ui/form-alert';
+import { LinkRow } from '@/components/ui/link-row';
 import { Screen } from '@/components/ui/screen';
 import { TwoColumns } from '@/components/ui/two-columns';
 import { Text } from '@/components/ui/text';
@@ -20,7 +22,12 @@ import { useSpecQuery } from '@/lib/hooks/use-library';
 import { useIsWide } from '@/lib/theme/use-theme';
 
 export default function SpecCardScreen() {
-  const { specId, ...link } = useLocalSearchParams<{ specId: string; job?: string; retake?: string }>();
+  const { specId, saved, ...link } = useLocalSearchParams<{
+    specId: string;
+    job?: string;
+    retake?: string;
+    saved?: string;
+  }>();
   const router = useRouter();
   const wide = useIsWide();
   const spec = useSpecQuery(Number(specId));
@@ -73,13 +80,15 @@ export default function SpecCardScreen() {
   return (
     <Screen testID="spec-screen">
       <Stack.Screen options={{ title: s.parameter }} />
-      <Pressable
-        accessibilityRole="link"
+      {saved ? <FormAlert tone="success" message={`Saved as version ${saved}.`} testID="spec-saved" /> : null}
+      <LinkRow
+        href={`/models/${s.model.id}`}
         accessibilityLabel={`Open model sheet ${modelTitle(s.model)}`}
         onPress={() => router.push(`/models/${s.model.id}`)}
+        style={styles.modelLink}
       >
         <Text color="primary">{modelTitle(s.model)}</Text>
-      </Pressable>
+      </LinkRow>
       <EditSpecButton specId={s.id} />
       {/* On a phone the calculator comes right after the values; on a wide screen it has the right column. */}
       <TwoColumns
@@ -94,3 +103,7 @@ export default function SpecCardScreen() {
     </Screen>
   );
 }
+
+const styles = StyleSheet.create({
+  modelLink: { minHeight: 44, justifyContent: 'center', alignSelf: 'flex-start' },
+});

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import Svg, { Circle, Line, Rect, Text as SvgText } from 'react-native-svg';
+import Svg, { Circle, Defs, Line, Pattern, Rect, Text as SvgText } from 'react-native-svg';
 import { bandOf, scale } from '@/lib/calculator/band';
 import { formatNumber } from '@/lib/units';
 import type { VerdictResult } from '@/lib/verdict';
@@ -25,7 +25,10 @@ export function BandPicture({ result }: { result: VerdictResult }) {
   const hi = band.upper !== undefined ? x(band.upper) : width;
   // Limit labels that would overlap are pushed apart: min to the left of its mark, max to the right.
   const crowded = band.lower !== undefined && band.upper !== undefined && hi - lo < 90;
-  const label = `Tolerance band: ${band.lower !== undefined ? `lower limit ${formatNumber(band.lower)}` : 'no lower limit'}, ${band.upper !== undefined ? `upper limit ${formatNumber(band.upper)}` : 'no upper limit'}, reading ${formatNumber(band.value)} ${result.unit}: ${result.verdict}`;
+  const interval = band.interval
+    ? `, interval ${formatNumber(band.interval[0])} to ${formatNumber(band.interval[1])} ${result.unit}`
+    : '';
+  const label = `Tolerance band: ${band.lower !== undefined ? `lower limit ${formatNumber(band.lower)}` : 'no lower limit'}, ${band.upper !== undefined ? `upper limit ${formatNumber(band.upper)}` : 'no upper limit'}, reading ${formatNumber(band.value)} ${result.unit}${interval}: ${result.verdict}`;
   return (
     <View
       testID="band-picture"
@@ -36,8 +39,25 @@ export function BandPicture({ result }: { result: VerdictResult }) {
     >
       {width > 0 && (
         <Svg width={width} height={HEIGHT}>
-          <Rect x={0} y={AXIS_Y - 10} width={width} height={20} fill={t.failSurface} />
-          <Rect x={lo} y={AXIS_Y - 10} width={Math.max(0, hi - lo)} height={20} fill={t.passSurface} />
+          {/* Outside the limits is hatched in the fail colour, inside is plain and outlined in the pass colour:
+              the two differ by pattern as well as hue, and each line has > 3:1 against the other zone in both
+              schemes (dark: #ff8a80 on #3d1715 and #6fd08a on #3d1715). */}
+          <Defs>
+            <Pattern id="band-out" patternUnits="userSpaceOnUse" width={8} height={8} patternTransform="rotate(45)">
+              <Rect x={0} y={0} width={8} height={8} fill={t.failSurface} />
+              <Line x1={0} y1={0} x2={0} y2={8} stroke={t.fail} strokeWidth={3} />
+            </Pattern>
+          </Defs>
+          <Rect x={0} y={AXIS_Y - 10} width={width} height={20} fill="url(#band-out)" />
+          <Rect
+            x={lo}
+            y={AXIS_Y - 10}
+            width={Math.max(0, hi - lo)}
+            height={20}
+            fill={t.passSurface}
+            stroke={t.pass}
+            strokeWidth={2}
+          />
           {band.marginal.map(([a, b]) => (
             <Rect
               key={`${a}-${b}`}
@@ -87,11 +107,11 @@ export function BandPicture({ result }: { result: VerdictResult }) {
         </Svg>
       )}
       <Text variant="small" color="textMuted">
-        Green: inside the limits
+        Green, plain: inside the limits
         {band.marginal.length
           ? ` · amber: marginal zone${result.expandedUncertainty !== null ? ' (limit ± U)' : ' (near-limit band)'}`
           : ''}{' '}
-        · red: outside
+        · red, hatched: outside
         {band.interval ? ' · bar: reading ± U (k = 2)' : ''}
       </Text>
     </View>

@@ -1,10 +1,11 @@
-import { ActivityIndicator, Pressable, StyleSheet, View } from 'react-native';
+import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { describeError } from '@/lib/api/describe-error';
 import type { ImportPreviewDto } from '@/lib/contracts/imports';
 import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
+import { LinkRow } from '../ui/link-row';
 import { Text } from '../ui/text';
 
 export type CommitPanelProps = {
@@ -36,9 +37,9 @@ export function CommitPanel({ preview: p, committing, error, onCommit, onOpenSpe
           (batch #{p.id}).
         </Text>
         {written.map((r) => (
-          <Pressable
+          <LinkRow
             key={r.line}
-            accessibilityRole="link"
+            href={`/specs/${r.specId}`}
             accessibilityLabel={`Open ${r.component} — ${r.parameter}`}
             onPress={() => onOpenSpec(r.specId!)}
             style={styles.link}
@@ -47,7 +48,7 @@ export function CommitPanel({ preview: p, committing, error, onCommit, onOpenSpe
             <Text color="primary">
               {r.make} {r.model} · {r.component} — {r.parameter}: {r.display}
             </Text>
-          </Pressable>
+          </LinkRow>
         ))}
       </Card>
     );
@@ -82,5 +83,5 @@ export function CommitPanel({ preview: p, committing, error, onCommit, onOpenSpe
 
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'center', gap: Spacing.md },
-  link: { minHeight: 32, justifyContent: 'center' },
+  link: { minHeight: 44, justifyContent: 'center' },
 });

@@ -1,8 +1,9 @@
 import type { ReactNode } from 'react';
-import { Pressable, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import type { ImportProblemDto, ImportRowDto } from '@/lib/contracts/imports';
 import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
+import { LinkRow } from '../ui/link-row';
 import { Text } from '../ui/text';
 
 const years = (r: ImportRowDto) => `${r.yearFrom}–${r.yearTo ?? ''}`;
@@ -34,16 +35,17 @@ export function ImportRow({
           </Text>
         </View>
         {row.specId && onOpenSpec ? (
-          <Pressable
-            accessibilityRole="link"
+          <LinkRow
+            href={`/specs/${row.specId}`}
             accessibilityLabel={`Open the spec from line ${row.line}`}
             onPress={() => onOpenSpec(row.specId!)}
             style={styles.link}
+            testID={`open-spec-line-${row.line}`}
           >
             <Text variant="label" color="primary">
               Open
             </Text>
-          </Pressable>
+          </LinkRow>
         ) : null}
       </View>
       {children}
@@ -76,5 +78,6 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', gap: Spacing.sm, alignItems: 'flex-start' },
   line: { width: 64 },
   body: { flex: 1, minWidth: 0, gap: 2 },
-  link: { minHeight: 32, justifyContent: 'center', paddingHorizontal: Spacing.xs },
+  // 44 × 44 px at least (WCAG 2.5.8 asks 24; 44 is the platforms' own guideline for touch).
+  link: { minHeight: 44, minWidth: 44, alignItems: 'center', justifyContent: 'center', paddingHorizontal: Spacing.sm },
 });

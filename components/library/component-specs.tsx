@@ -1,8 +1,9 @@
-import { Pressable, StyleSheet } from 'react-native';
+import { StyleSheet } from 'react-native';
 import type { ModelDetailDto } from '@/lib/contracts/library';
 import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
 import { Card } from '../ui/card';
+import { LinkRow } from '../ui/link-row';
 import { Text } from '../ui/text';
 
 export type ComponentSpecsProps = { component: ModelDetailDto['components'][number]; onOpenSpec: (id: number) => void };
@@ -19,9 +20,9 @@ export function ComponentSpecs({ component, onOpenSpec }: ComponentSpecsProps) {
         </Text>
       ) : null}
       {component.specs.map((s) => (
-        <Pressable
+        <LinkRow
           key={s.id}
-          accessibilityRole="link"
+          href={`/specs/${s.id}`}
           accessibilityLabel={`${s.parameter}: ${s.display}`}
           onPress={() => onOpenSpec(s.id)}
           style={({ pressed }) => [
@@ -33,7 +34,7 @@ export function ComponentSpecs({ component, onOpenSpec }: ComponentSpecsProps) {
           <Text variant="label" style={styles.value}>
             {s.display}
           </Text>
-        </Pressable>
+        </LinkRow>
       ))}
     </Card>
   );

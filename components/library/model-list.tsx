@@ -1,28 +1,35 @@
-import { Pressable, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import type { ModelSummaryDto } from '@/lib/contracts/library';
 import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
 import { Card } from '../ui/card';
+import { LinkRow } from '../ui/link-row';
 import { Text } from '../ui/text';
 import { modelTitle } from '@/lib/format/model-title';
 
-export type ModelListProps = { models: ModelSummaryDto[]; onOpenModel: (id: number) => void };
+export type ModelListProps = {
+  models: ModelSummaryDto[];
+  onOpenModel: (id: number) => void;
+  /** Makes side by side (a wide screen with nothing else beside the list). */
+  columns?: boolean;
+};
 
 /** Every model in the library, by make: the way in when you do not know what to type. */
-export function ModelList({ models, onOpenModel }: ModelListProps) {
+export function ModelList({ models, onOpenModel, columns = false }: ModelListProps) {
   const t = useTheme();
   const makes = [...new Set(models.map((m) => m.make.name))];
   return (
-    <View style={styles.list} testID="model-list">
+    <View style={[styles.list, columns && styles.grid]} testID="model-list">
       {makes.map((make) => (
-        <Card key={make}>
+        <Card key={make} style={columns ? styles.cell : undefined}>
           <Text variant="heading">{make}</Text>
           {models
             .filter((m) => m.make.name === make)
             .map((m) => (
-              <Pressable
+              <LinkRow
                 key={m.id}
-                accessibilityRole="link"
+                href={`/models/${m.id}`}
+                testID={`model-row-${m.id}`}
                 accessibilityLabel={`Open model sheet ${modelTitle(m)}`}
                 onPress={() => onOpenModel(m.id)}
                 style={({ pressed }) => [
@@ -34,7 +41,7 @@ export function ModelList({ models, onOpenModel }: ModelListProps) {
                 <Text variant="small" color="textMuted">
                   {m.specCount === 1 ? '1 spec' : `${m.specCount} specs`}
                 </Text>
-              </Pressable>
+              </LinkRow>
             ))}
         </Card>
       ))}
@@ -44,6 +51,8 @@ export function ModelList({ models, onOpenModel }: ModelListProps) {
 
 const styles = StyleSheet.create({
   list: { gap: Spacing.md },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start' },
+  cell: { flexBasis: 340, flexGrow: 1 },
   row: {
     flexDirection: 'row',
     alignItems: 'center',

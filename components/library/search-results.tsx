@@ -1,8 +1,9 @@
-import { Pressable, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import type { SearchResultDto } from '@/lib/contracts/library';
 import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
 import { Card } from '../ui/card';
+import { LinkRow } from '../ui/link-row';
 import { Text } from '../ui/text';
 import { modelTitle } from '@/lib/format/model-title';
 
@@ -22,20 +23,21 @@ export function SearchResults({ result, onOpenSpec, onOpenModel }: SearchResults
       </Text>
       {result.groups.map((g) => (
         <Card key={g.model.id}>
-          <Pressable
-            accessibilityRole="link"
+          <LinkRow
+            href={`/models/${g.model.id}`}
             accessibilityLabel={`Open model sheet ${modelTitle(g.model)}`}
             onPress={() => onOpenModel(g.model.id)}
+            style={styles.heading}
           >
             <Text variant="heading" color="primary">
               {modelTitle(g.model)}
             </Text>
-          </Pressable>
+          </LinkRow>
           {g.hits.map((h) => (
-            <Pressable
+            <LinkRow
               key={h.specId}
               testID={`hit-${h.specId}`}
-              accessibilityRole="link"
+              href={`/specs/${h.specId}`}
               accessibilityLabel={`${h.component}, ${h.parameter}: ${h.display}`}
               onPress={() => onOpenSpec(h.specId)}
               style={({ pressed }) => [
@@ -52,7 +54,7 @@ export function SearchResults({ result, onOpenSpec, onOpenModel }: SearchResults
               <Text variant="label" style={styles.value}>
                 {h.display}
               </Text>
-            </Pressable>
+            </LinkRow>
           ))}
         </Card>
       ))}
@@ -62,6 +64,7 @@ export function SearchResults({ result, onOpenSpec, onOpenModel }: SearchResults
 
 const styles = StyleSheet.create({
   list: { gap: Spacing.md },
+  heading: { minHeight: 44, justifyContent: 'center' },
   hit: {
     flexDirection: 'row',
     alignItems: 'center',

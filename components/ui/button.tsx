@@ -1,6 +1,7 @@
 import { Pressable, StyleSheet, type PressableProps } from 'react-native';
 import { Radius, Spacing, Type } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
+import { focusRing } from './focus-ring';
 import { Text } from './text';
 
 export type ButtonProps = Omit<PressableProps, 'children'> & {
@@ -27,6 +28,7 @@ export function Button({ label, variant = 'primary', disabled, style, ...rest }:
         styles.base,
         { backgroundColor: colors.bg, borderColor: colors.border, opacity: disabled ? 0.5 : state.pressed ? 0.8 : 1 },
         typeof style === 'function' ? style(state) : style,
+        focusRing(t, (state as { focused?: boolean }).focused),
       ]}
       {...rest}
     >

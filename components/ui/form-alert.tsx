@@ -14,7 +14,8 @@ export function FormAlert({ tone, message, testID }: FormAlertProps) {
       : { bg: t.passSurface, border: t.pass, fg: 'text' as const };
   return (
     <View
-      accessibilityRole="alert"
+      // A failure interrupts (alert); a success waits its turn (status, a polite live region).
+      role={tone === 'error' ? 'alert' : 'status'}
       testID={testID}
       style={[styles.box, { backgroundColor: colors.bg, borderColor: colors.border }]}
     >

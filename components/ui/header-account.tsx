@@ -51,7 +51,7 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     borderRadius: Radius.lg,
     paddingHorizontal: Spacing.sm,
-    minHeight: 32,
+    minHeight: 44,
     justifyContent: 'center',
   },
 });

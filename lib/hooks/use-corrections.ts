@@ -37,10 +37,12 @@ export function useCorrectionSummaryQuery() {
 }
 
 export function useCorrectionQuery(id: number) {
+  const { status } = useSession();
   return useQuery({
     queryKey: [...CORRECTIONS_KEY, 'one', id],
     queryFn: () => getCorrection(id),
-    enabled: Number.isInteger(id) && id > 0,
+    // A page opened directly waits for the session to be restored (a 401 otherwise).
+    enabled: status !== 'restoring' && Number.isInteger(id) && id > 0,
   });
 }
 

@@ -35,7 +35,9 @@ export default function EditSpecScreen() {
   const save = (body: UpdateSpecBody, mine: SpecFormValues) =>
     update.mutate(body, {
       // Back to the spec card the edit was opened from, or to it in place of the editor.
-      onSuccess: (saved) => router.dismissTo(`/specs/${saved.id}`),
+      // The card then says "Saved as version N" (a status message, announced).
+      onSuccess: (saved) =>
+        router.dismissTo({ pathname: '/specs/[specId]', params: { specId: saved.id, saved: saved.version } }),
       onError: (err) => {
         const current = staleCurrent(err);
         if (current) setConflict({ current, body, mine });

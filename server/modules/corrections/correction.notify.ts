@@ -18,7 +18,7 @@ export async function notifyEditors(m: EntityManager, c: Correction, proposerNam
   for (const e of editors) {
     await enqueue(m, {
       to: e.email,
-      subject: `Correction #${c.id} to review: ${what}`.slice(0, 200),
+      subject: `Correction #${c.id} to review: ${what}`,
       text: `Hello ${e.displayName},\n\n${proposerName} proposed a correction to ${what}.\n\nRationale: ${c.rationale}\nSource: ${citationText(c.citation, c.citation.page)}\n\nReview it: ${config.appUrl}/review/${c.id}\n`,
     });
   }

@@ -15,13 +15,14 @@ import { AppDataSource } from '@/server/db/data-source';
 import { within } from '@/server/http/lifecycle';
 import { logger } from '@/server/http/logging';
 import { fakeSmtp } from './fake-smtp';
+import { subjectLine } from './subject';
 import type { OutboxMessage } from './outbox-message.entity';
 import { OutboxRepository, type Mail } from './outbox.repository';
 
 export type { Mail };
 
 export async function enqueue(m: EntityManager, mail: Mail): Promise<void> {
-  await m.withRepository(OutboxRepository).enqueue(mail);
+  await m.withRepository(OutboxRepository).enqueue({ ...mail, subject: subjectLine(mail.subject) });
 }
 
 /** Per-message bounds (common practice, no published source): connect, greeting, whole send. */
