@@ -1,6 +1,7 @@
 import { useEffect, useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import Head from 'expo-router/head';
 import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
 import { Stack } from 'expo-router';
 import { ApiError } from '@/lib/api/client';
@@ -68,9 +69,16 @@ export default function RootLayout() {
     startOnlineFromDevice();
     registerServiceWorker();
   }, []);
-  if (!fontsReady) return null;
+  // Every page keeps a title (WCAG 2.4.2): Expo Router's head manager owns <title> once the app runs.
+  const title = (
+    <Head>
+      <title>Specbench</title>
+    </Head>
+  );
+  if (!fontsReady) return title;
   return (
     <QueryProvider>
+      {title}
       <SessionProvider>
         <ReadingQueueSync />
         <AppStatus />

@@ -51,7 +51,9 @@ function writeShells() {
       const f = path.join(dir, e.name);
       return e.isDirectory() ? walk(f) : e.name.endsWith('.html') ? [f] : [];
     });
-  for (const file of walk(dist).filter((f) => f.includes('['))) {
+  // Pages that read their query string (/verify?token=…, /reset?token=…) differ from their static render too.
+  const byQuery = /[\\/](verify|reset)\.html$/;
+  for (const file of walk(dist).filter((f) => f.includes('[') || byQuery.test(f))) {
     fs.writeFileSync(file, fs.readFileSync(file, 'utf8').replace(HYDRATE_FLAG, ''));
   }
   const index = fs.readFileSync(path.join(dist, 'index.html'), 'utf8');
