@@ -8,11 +8,23 @@
 import request from 'supertest';
 import { PLAN_FILE_FORMAT } from '@/lib/contracts/plans';
 import { apiRouters, createApp } from '@/server/app';
+import { AppDataSource } from '@/server/db/data-source';
 import { useTestDatabase } from '../helpers/test-db';
 import { authHeader, testUser } from '../helpers/auth';
 import { uniqueMake, validFile } from '../fixtures/csv/rows';
 
 useTestDatabase();
+
+// The probes queue hundreds of messages (sign-ups, password changes); later files in this worker's database
+// must not wait behind them, so the sweep leaves none queued.
+let outboxBefore = 0;
+beforeAll(async () => {
+  const [row] = await AppDataSource.query('SELECT COALESCE(MAX(id), 0) AS id FROM outbox_messages');
+  outboxBefore = Number(row.id);
+});
+afterAll(async () => {
+  await AppDataSource.query('DELETE FROM outbox_messages WHERE id > ? AND sent_at IS NULL', [outboxBefore]);
+});
 jest.setTimeout(300_000);
 const app = createApp({ webDist: null });
 
