@@ -22,7 +22,7 @@ beforeAll(async () => {
   const [row] = await AppDataSource.query('SELECT COALESCE(MAX(id), 0) AS id FROM outbox_messages');
   outboxBefore = Number(row.id);
 });
-afterAll(async () => {
+afterEach(async () => {
   await AppDataSource.query('DELETE FROM outbox_messages WHERE id > ? AND sent_at IS NULL', [outboxBefore]);
 });
 jest.setTimeout(300_000);
