@@ -7,14 +7,13 @@ import { User } from '@/server/modules/users/user.entity';
 import { emailKey } from '@/server/modules/users/user.mapper';
 import { DESKTOP, PHONE, launchChromium, screenshot, startWebServer } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
-import { drainOutbox } from '../helpers/mail';
+import { drainOutbox, emptyOutbox } from '../helpers/mail';
 import { expectText, expectVisible, step } from '../helpers/expect-visible';
 
 // Declared before useTestDatabase(): after-all hooks run in declaration order, and the
 // outbox worker must stop (and finish a round in flight) before the database closes.
 afterAll(async () => {
-  stopOutboxWorker();
-  await new Promise((resolve) => setTimeout(resolve, 300));
+  await stopOutboxWorker();
 });
 useTestDatabase();
 let web: Awaited<ReturnType<typeof startWebServer>>;
@@ -25,6 +24,7 @@ const TECH = { name: 'Tamsin Reed', email: `tamsin.${suffix}@shop.example`, pass
 const ADMIN = { name: 'Odile Admin', email: `odile.${suffix}@shop.example`, password: 'stator-phase-check-2026' };
 
 beforeAll(async () => {
+  await emptyOutbox();
   await fakeSmtp.start(0);
   resetTransport();
   startOutboxWorker(200);
@@ -52,7 +52,6 @@ const headerAccount = (page: Page) => page.getByTestId('header-account').filter(
 
 /** Reloads the development mailbox until a message to `to` is listed (the outbox worker sends within about a second). */
 async function waitForMail(page: Page, to: string): Promise<Locator> {
-  // Other files in this worker's database may have left hundreds of messages queued ahead of ours.
   await drainOutbox();
   for (let i = 0; i < 40; i += 1) {
     await page.goto(`${web.url}/dev/mailbox`);

@@ -1,9 +1,21 @@
 /** The local fake SMTP server for API tests, and reading links out of the messages it caught. */
 import { fakeSmtp } from '@/server/modules/mail/fake-smtp';
+import { AppDataSource } from '@/server/db/data-source';
 import { deliverDue, resetTransport } from '@/server/modules/mail/mailer';
 
+/**
+ * Deletes the unsent mail that earlier files in this worker's database left queued (the
+ * rate-limit and input probes queue hundreds), so this file's messages are the only ones
+ * due. Safe: a jest worker runs one file at a time, and each worker has its own database.
+ */
+export async function emptyOutbox(): Promise<void> {
+  await AppDataSource.query('DELETE FROM outbox_messages WHERE sent_at IS NULL');
+}
+
+/** Call after useTestDatabase(): the outbox is emptied once the database is connected. */
 export function useFakeMail() {
   beforeAll(async () => {
+    await emptyOutbox();
     await fakeSmtp.start(0);
     resetTransport();
   });
@@ -13,10 +25,7 @@ export function useFakeMail() {
   });
 }
 
-/**
- * Sends everything the outbox holds, a batch at a time (bounded): earlier files in this
- * worker's database may have queued hundreds of messages (the input sweep signs up accounts).
- */
+/** Sends everything the outbox holds, a batch at a time (bounded). */
 export async function drainOutbox(): Promise<void> {
   for (let i = 0; i < 500 && (await deliverDue()) > 0; i += 1);
 }
