@@ -86,7 +86,7 @@ export default function StandaloneCalculatorScreen() {
         second={
           <>
             <Calculator spec={spec} kind={kind} testID="standalone-calculator" job={jobLink(link)} />
-            {beepOnly ? <QualitativeCheck kind={beepOnly} /> : null}
+            {beepOnly ? <QualitativeCheck kind={beepOnly} job={jobLink(link)} /> : null}
           </>
         }
       />

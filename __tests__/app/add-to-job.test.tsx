@@ -21,7 +21,8 @@ const INPUT: VerdictInput = {
   spec: { min: 0.2, nominal: null, max: 0.6, unit: 'Ω', refTempC: null, material: 'none' },
   reading: { value: 0.4, unit: 'Ω' },
 } as VerdictInput;
-const RESULT = evaluateReading(INPUT);
+const DRAFT = { kind: 'measured' as const, input: INPUT };
+const VERDICT = evaluateReading(INPUT).verdict;
 
 function wrapper({ children }: { children: ReactNode }) {
   const qc = new QueryClient({ defaultOptions: { queries: { retry: false, gcTime: Infinity } } });
@@ -33,7 +34,7 @@ beforeEach(() => mockAdd.mockReset().mockResolvedValue({ status: 'queued', key: 
 describe('AddToJob', () => {
   it('on a spec card, sends the reading by spec id to the job and re-take the screen passed', async () => {
     const spec = { id: 31, modelId: 2, parameter: 'stator winding resistance', componentName: 'stator' };
-    render(<AddToJob input={INPUT} result={RESULT} spec={spec} jobId={5} retakeOf={88} />, { wrapper });
+    render(<AddToJob draft={DRAFT} verdict={VERDICT} spec={spec} jobId={5} retakeOf={88} />, { wrapper });
 
     expect(screen.getByTestId('add-to-job-retake')).toBeTruthy();
     expect(screen.queryByLabelText('What did you measure?')).toBeNull();
@@ -48,7 +49,7 @@ describe('AddToJob', () => {
   });
 
   it('with limits typed by hand, asks what was measured before sending, then sends the label', async () => {
-    render(<AddToJob input={INPUT} result={RESULT} jobId={5} />, { wrapper });
+    render(<AddToJob draft={DRAFT} verdict={VERDICT} jobId={5} />, { wrapper });
 
     fireEvent.press(screen.getByRole('button', { name: 'Add to job #5' }));
     expect(await screen.findByText('Say what you measured, e.g. “stator, yellow to yellow”.')).toBeTruthy();
@@ -59,5 +60,24 @@ describe('AddToJob', () => {
 
     await waitFor(() => expect(mockAdd).toHaveBeenCalled());
     expect(mockAdd.mock.calls[0][0].body).toMatchObject({ label: 'Plug gap, rear', spec: { min: 0.2, max: 0.6 } });
+  });
+
+  it("a beep-only diode check goes as a check with the technician's label, and its preview is in words", async () => {
+    const draft = {
+      kind: 'check' as const,
+      check: { kind: 'diode' as const, forward: 'conducts' as const, reverse: 'open' as const },
+    };
+    render(<AddToJob draft={draft} verdict="pass" jobId={5} />, { wrapper });
+
+    fireEvent.changeText(screen.getByLabelText('What did you measure?'), 'Rectifier diode D1');
+    fireEvent.press(screen.getByRole('button', { name: 'Add to job #5' }));
+
+    await waitFor(() => expect(mockAdd).toHaveBeenCalled());
+    const sent = mockAdd.mock.calls[0][0];
+    expect(sent.body).toEqual({
+      label: 'Rectifier diode D1',
+      check: { kind: 'diode', forward: 'conducts', reverse: 'open' },
+    });
+    expect(sent.preview).toMatchObject({ text: 'Forward conducts, reverse open', verdict: 'pass' });
   });
 });

@@ -2,6 +2,7 @@ import { StyleSheet } from 'react-native';
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { BatteryCharge } from '@/components/calculator/battery-charge';
 import { Calculator } from '@/components/calculator/calculator';
+import { QualitativeCheck } from '@/components/calculator/qualitative-check';
 import { Citation } from '@/components/library/citation';
 import { ProposeLinks } from '@/components/corrections/propose-links';
 import { modelTitle } from '@/lib/format/model-title';
@@ -45,6 +46,13 @@ export default function SpecCardScreen() {
       </Screen>
     );
   const s = spec.data;
+  // A spec without a stated mode is read in the one its parameter's words imply.
+  const mode = s.mode ?? defaultMode(s.parameter, s.quantityKind);
+  const target = {
+    spec: { id: s.id, modelId: s.model.id, parameter: s.parameter, componentName: s.component.name },
+    ...jobLink(link),
+  };
+  const beepOnly = mode === 'diode_forward' ? 'diode' : mode === 'continuity' ? 'continuity' : null;
   const check = (
     <>
       <SafetyNotes categories={cautionCategories(s.component.name, s.parameter)} />
@@ -58,15 +66,23 @@ export default function SpecCardScreen() {
           refTempC: s.refTempC,
           material: s.material,
           // A spec without a stated mode is read in the one its parameter's words imply.
-          mode: s.mode ?? defaultMode(s.parameter, s.quantityKind),
+          mode,
           nearLimit: s.nearLimit,
           engineRpm: s.engineRpm,
         }}
-        job={{
-          spec: { id: s.id, modelId: s.model.id, parameter: s.parameter, componentName: s.component.name },
-          ...jobLink(link),
-        }}
+        job={target}
       />
+      {beepOnly ? (
+        <QualitativeCheck
+          kind={beepOnly}
+          job={target}
+          intro={
+            beepOnly === 'diode'
+              ? 'Meter only beeps on its diode range? Test both ways instead of typing a forward voltage.'
+              : 'Meter only beeps? Record what it showed instead of a resistance.'
+          }
+        />
+      ) : null}
       {isRestVoltage(s.parameter) ? <BatteryCharge /> : null}
     </>
   );

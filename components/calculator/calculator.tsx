@@ -106,7 +106,7 @@ export function Calculator({ spec, kind, testID = 'calculator', job }: Calculato
         {field('meterCountValue', 'One count is worth', 'meterUnit', countHint(form.meterUnit))}
       </OptionalFields>
       {result ? <VerdictPanel result={result} /> : null}
-      <AddToJob input={input} result={result} {...job} />
+      <AddToJob draft={input && { kind: 'measured', input }} verdict={result?.verdict ?? null} {...job} />
     </Card>
   );
 }

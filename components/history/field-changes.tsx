@@ -22,14 +22,14 @@ export function FieldChanges({ changes, testID, created }: FieldChangesProps) {
           </Text>
           {created ? (
             <Text variant="small" style={styles.value} selectable>
-              {showValue(c.after)}
+              {showValue(c.after, c.field)}
             </Text>
           ) : (
             <Text variant="small" style={styles.value} selectable>
               <Text variant="small" color="textMuted">
-                {showValue(c.before)}
+                {showValue(c.before, c.field)}
               </Text>{' '}
-              → <Text variant="label">{showValue(c.after)}</Text>
+              → <Text variant="label">{showValue(c.after, c.field)}</Text>
             </Text>
           )}
         </View>

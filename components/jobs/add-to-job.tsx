@@ -8,7 +8,8 @@ import { ReadingBody } from '@/lib/contracts/jobs';
 import { useAddToJob, type AddToJobTarget } from '@/lib/hooks/use-add-to-job';
 import { useSession } from '@/lib/session/session-provider';
 import { formatNumber } from '@/lib/units';
-import type { VerdictInput, VerdictResult } from '@/lib/verdict';
+import type { ReadingDraft } from '@/lib/offline/reading-body';
+import type { Verdict } from '@/lib/verdict';
 import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
 import { Button } from '../ui/button';
@@ -19,7 +20,8 @@ import { formatWhen, machineName } from './job-format';
 import { JobPicker } from './job-picker';
 import { NewJobPanel } from './new-job-panel';
 
-export type AddToJobProps = AddToJobTarget & { input: VerdictInput | null; result: VerdictResult | null };
+/** `draft`: the reading as it stands (null while incomplete); `verdict`: this device's verdict on it. */
+export type AddToJobProps = AddToJobTarget & { draft: ReadingDraft | null; verdict: Verdict | null };
 
 const LabelValues = z.object({ label: ReadingBody.shape.label.unwrap() });
 type LabelValues = z.infer<typeof LabelValues>;
@@ -30,10 +32,10 @@ const SAY_WHAT = 'Say what you measured, e.g. “stator, yellow to yellow”.';
  * spec id; with limits typed by hand it goes with them and a label. The screen passes the
  * job to preselect and the reading being re-taken (links from the job sheet).
  */
-export function AddToJob({ input, result, ...target }: AddToJobProps) {
+export function AddToJob({ draft, verdict, ...target }: AddToJobProps) {
   const router = useRouter();
   const { status } = useSession();
-  if (status === 'restoring' || !input || !result) return null;
+  if (status === 'restoring' || !draft || !verdict) return null;
   if (status !== 'signed-in') {
     return (
       <Button
@@ -44,12 +46,12 @@ export function AddToJob({ input, result, ...target }: AddToJobProps) {
       />
     );
   }
-  return <AddToJobPanel input={input} result={result} target={target} />;
+  return <AddToJobPanel draft={draft} verdict={verdict} target={target} />;
 }
 
-type PanelProps = { input: VerdictInput; result: VerdictResult; target: AddToJobTarget };
+type PanelProps = { draft: ReadingDraft; verdict: Verdict; target: AddToJobTarget };
 
-function AddToJobPanel({ input, result, target }: PanelProps) {
+function AddToJobPanel({ draft, verdict, target }: PanelProps) {
   const t = useTheme();
   const router = useRouter();
   const job = useAddToJob(target);
@@ -58,13 +60,13 @@ function AddToJobPanel({ input, result, target }: PanelProps) {
     resolver: zodResolver(LabelValues),
   });
   const { jobId, retakeOf, retaken, mode, setMode } = job;
-  const done = job.doneFor(input);
+  const done = job.doneFor(draft);
   // Re-taking a hand-typed check: the old label stands unless a new one is typed.
   const send = (to: number) =>
     handleSubmit(({ label }) => {
       const typed = label || retaken?.label || '';
       if (!target.spec && !typed) return setError('label', { type: 'required', message: SAY_WHAT });
-      return job.send(to, input, result, typed);
+      return job.send(to, draft, verdict, typed);
     })();
 
   return (

@@ -2,6 +2,7 @@
  * Words for the job sheet and its report: the machine's name, the verdict counts, the
  * readings grouped by component, the corrections as typed. Pure (no React).
  */
+import { MEASUREMENT_MODE_LABEL, type MeasurementMode } from '@/lib/contracts/enums';
 import type { JobSummaryDto, ReadingDto } from '@/lib/contracts/jobs';
 import { formatNumber, formatRange, type CanonicalUnit } from '@/lib/units';
 import type { VerdictResult, VerdictStep } from '@/lib/verdict';
@@ -58,6 +59,18 @@ export function asVerdictResult(r: ReadingDto): VerdictResult {
   };
 }
 
+/** The result as shown on the sheet: '2.81 Ω ± 0.05 Ω', or a beep-only check's words. */
+export function resultText(
+  r: Pick<ReadingDto, 'value' | 'unit' | 'expandedUncertainty' | 'valueText' | 'inputs'>,
+): string {
+  if (r.inputs.check) return r.valueText ?? '';
+  const u = r.expandedUncertainty !== null ? ` ± ${formatNumber(r.expandedUncertainty, 2)} ${r.unit}` : '';
+  return `${formatNumber(r.value)} ${r.unit}${u}`;
+}
+
+/** A beep-only check (no limits, no band to draw). */
+export const isCheck = (r: Pick<ReadingDto, 'inputs'>) => r.inputs.check !== undefined;
+
 type Q = { value: number; unit: string };
 const q = (x: Q) => `${formatNumber(x.value)} ${x.unit}`;
 
@@ -89,12 +102,17 @@ export function inputLines(inputs: Record<string, unknown>): string[] {
 /** "2.4–3.2 Ω (nominal 2.8) at 20 °C" from the limits kept with a reading. */
 export function limitsText(limits: Record<string, unknown>): string {
   const n = (k: string) => (typeof limits[k] === 'number' ? (limits[k] as number) : null);
+  const mode = limits.mode as MeasurementMode | undefined;
+  if (n('min') === null && n('max') === null && n('nominal') === null && mode)
+    return `${MEASUREMENT_MODE_LABEL[mode]} check`;
   const temp = n('refTempC') !== null && limits.material === 'copper' ? ` at ${formatNumber(n('refTempC')!)} °C` : '';
   return `${formatRange(n('min'), n('nominal'), n('max'), String(limits.unit ?? '') as CanonicalUnit)}${temp}`;
 }
 
 /** One working step on a line: 'label: formula = value unit' (formulas that end in their result are not repeated). */
 export function stepText(s: VerdictStep): string {
+  // A beep-only check's steps are words ('conducts', 'yes'); their 1/0 is for the record only.
+  if (!s.unit && s.formula && /^[a-z ]+$/i.test(s.formula)) return `${s.label}: ${s.formula}`;
   const result = `${formatNumber(s.value, 6)}${s.unit ? ` ${s.unit}` : ''}`;
   if (!s.formula) return `${s.label} = ${result}`;
   return s.formula.includes('=') ? `${s.label}: ${s.formula}` : `${s.label}: ${s.formula} = ${result}`;

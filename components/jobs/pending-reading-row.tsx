@@ -24,7 +24,7 @@ export function PendingReadingRow({ item }: PendingReadingRowProps) {
         </Text>
       </View>
       <Text>
-        Meter reading {formatNumber(p.value)} {p.unit}
+        {p.text !== undefined ? `Meter showed: ${p.text}` : `Meter reading ${formatNumber(p.value)} ${p.unit}`}
         {p.verdict ? ` · ${p.verdict.toUpperCase()} on this device (the server confirms when it arrives)` : ''}
       </Text>
       <Text variant="small" color="textMuted">

@@ -1,12 +1,11 @@
 import { StyleSheet, View } from 'react-native';
 import type { ReadingDto } from '@/lib/contracts/jobs';
-import { formatNumber } from '@/lib/units';
 import { Radius, Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
 import { BandPicture } from '../calculator/band-picture';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
-import { asVerdictResult, formatWhen, inputLines } from './job-format';
+import { asVerdictResult, formatWhen, inputLines, isCheck, resultText } from './job-format';
 import { VerdictChip } from './verdict-chip';
 
 export type ReadingCardProps = { reading: ReadingDto; onRetake?: () => void };
@@ -30,10 +29,9 @@ export function ReadingCard({ reading: r, onRetake }: ReadingCardProps) {
         <VerdictChip verdict={r.verdict} muted={retaken} testID="reading-verdict" />
       </View>
       <Text variant="value" style={strike} color={retaken ? 'textMuted' : 'text'}>
-        {formatNumber(r.value)} {r.unit}
-        {r.expandedUncertainty !== null ? ` ± ${formatNumber(r.expandedUncertainty, 2)} ${r.unit}` : ''}
+        {resultText(r)}
       </Text>
-      {retaken ? null : <BandPicture result={asVerdictResult(r)} />}
+      {retaken || isCheck(r) ? null : <BandPicture result={asVerdictResult(r)} />}
       <Text variant="small" style={strike}>
         {r.reason}
       </Text>

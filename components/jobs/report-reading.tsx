@@ -1,10 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 import type { ReadingDto } from '@/lib/contracts/jobs';
-import { formatNumber } from '@/lib/units';
 import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
 import { Text } from '../ui/text';
-import { formatWhen, inputLines, limitsText, stepText } from './job-format';
+import { formatWhen, inputLines, limitsText, resultText, stepText } from './job-format';
 import { VerdictChip } from './verdict-chip';
 
 export type ReportReadingProps = { reading: ReadingDto; index: number };
@@ -25,9 +24,8 @@ export function ReportReading({ reading: r, index }: ReportReadingProps) {
         {r.citation ? ` · Source: ${r.citation}` : ' · Limits typed by the technician'}
       </Text>
       <Text variant="label">
-        Result {formatNumber(r.value)} {r.unit}
-        {r.expandedUncertainty !== null ? ` ± ${formatNumber(r.expandedUncertainty, 2)} ${r.unit} (k = 2)` : ''}:{' '}
-        {r.verdict.toUpperCase()}
+        Result {resultText(r)}
+        {r.expandedUncertainty !== null ? ' (k = 2)' : ''}: {r.verdict.toUpperCase()}
       </Text>
       <Text variant="small">{r.reason}</Text>
       <Text variant="small" color="textMuted">

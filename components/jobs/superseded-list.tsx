@@ -1,9 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import type { ReadingDto } from '@/lib/contracts/jobs';
-import { formatNumber } from '@/lib/units';
 import { Spacing } from '@/lib/theme';
 import { Text } from '../ui/text';
-import { formatWhen } from './job-format';
+import { formatWhen, resultText } from './job-format';
 
 export type SupersededListProps = { readings: ReadingDto[] };
 
@@ -19,7 +18,7 @@ export function SupersededList({ readings }: SupersededListProps) {
       {readings.map((r) => (
         <Text key={r.id} variant="small">
           <Text variant="small" style={styles.struck}>
-            {r.label}: {formatNumber(r.value)} {r.unit}, {r.verdict.toUpperCase()}
+            {r.label}: {resultText(r)}, {r.verdict.toUpperCase()}
           </Text>
           {` — taken ${formatWhen(r.takenAt)}, re-taken (replaced by reading #${r.supersededBy})`}
         </Text>

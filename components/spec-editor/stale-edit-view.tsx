@@ -89,10 +89,10 @@ export function StaleEditView({
                 </Text>
               </View>
               <Text variant="small" style={styles.cell} selectable>
-                {showValue(valueOf(now, f))}
+                {showValue(valueOf(now, f), f)}
               </Text>
               <Text variant="small" style={styles.cell} selectable>
-                {yours ? showValue(valueOf(mine, f)) : 'unchanged'}
+                {yours ? showValue(valueOf(mine, f), f) : 'unchanged'}
               </Text>
             </View>
           );

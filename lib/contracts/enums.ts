@@ -40,6 +40,18 @@ export const MEASUREMENT_MODE_LABEL: Readonly<Record<MeasurementMode, string>> =
   current: 'Current (amps)',
 };
 
+/** A diode or continuity test on a meter that only beeps: the probe conducts, or it does not. */
+export const DIODE_STATES = ['conducts', 'open'] as const;
+export type DiodeState = (typeof DIODE_STATES)[number];
+
+/** The beep-only checks a job can keep, and the measurement mode each belongs to. */
+export const CHECK_KINDS = ['diode', 'continuity'] as const;
+export type CheckKind = (typeof CHECK_KINDS)[number];
+export const CHECK_KIND_MODE: Readonly<Record<CheckKind, MeasurementMode>> = {
+  diode: 'diode_forward',
+  continuity: 'continuity',
+};
+
 export const SPEC_STATUSES = ['published', 'draft'] as const;
 export type SpecStatus = (typeof SPEC_STATUSES)[number];
 

@@ -1,5 +1,6 @@
 /** Job sheets and their readings: request schemas and answers, shared by client and server. */
 import { z } from 'zod';
+import { DIODE_STATES } from './enums';
 import { safeText } from './text';
 import { VerdictFields, exactlyOneSpec, type VerdictResponse } from './verdicts';
 
@@ -40,7 +41,29 @@ export const JobsQuery = z.object({
   status: z.enum(['open', 'closed']).optional(),
 });
 
+/**
+ * A check on a meter that only beeps, judged by the engine (lib/verdict/qualitative.ts):
+ * a diode's forward and reverse tests, or continuity (expected unless `expected` is false).
+ */
+export const ReadingCheck = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('diode'), forward: z.enum(DIODE_STATES), reverse: z.enum(DIODE_STATES) }).strict(),
+    z.object({ kind: z.literal('continuity'), continuity: z.boolean(), expected: z.boolean().optional() }).strict(),
+  ],
+  { error: "check.kind must be 'diode' or 'continuity'" },
+);
+export type ReadingCheck = z.infer<typeof ReadingCheck>;
+
+const CORRECTIONS = ['leadResistance', 'seriesResistance', 'temperatureC', 'meter'] as const;
+
+/**
+ * A meter value (`reading`, judged against a spec) or a beep-only `check` (against a diode or
+ * continuity spec by id, or described by `label`); never both.
+ */
 export const ReadingBody = VerdictFields.extend({
+  reading: VerdictFields.shape.reading.optional(),
+  check: ReadingCheck.optional(),
   /** What was measured, when the spec is typed by hand. */
   label: Text(200).optional(),
   /** The reading this one re-takes (it is struck through, not deleted). */
@@ -49,7 +72,18 @@ export const ReadingBody = VerdictFields.extend({
   takenAt: z.string().datetime({ offset: true }).optional(),
 })
   .strict()
-  .refine(exactlyOneSpec, { message: 'Give exactly one of specId or spec.', path: ['specId'] })
+  .refine((b) => (b.reading === undefined) !== (b.check === undefined), {
+    message: 'Give exactly one of reading (a meter value) or check (a diode or continuity result).',
+    path: ['reading'],
+  })
+  .refine((b) => (b.check === undefined ? exactlyOneSpec(b) : b.spec === undefined), {
+    message: 'Give exactly one of specId or spec (a check goes by specId, or by label alone).',
+    path: ['specId'],
+  })
+  .refine((b) => b.check === undefined || CORRECTIONS.every((k) => b[k] === undefined), {
+    message: 'A diode or continuity check takes no test-lead, resistor, temperature or meter-accuracy figures.',
+    path: ['check'],
+  })
   .refine((b) => b.specId !== undefined || (b.label ?? '').length > 0, {
     message: 'Say what was measured.',
     path: ['label'],

@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import { CAUTION_CATEGORIES } from '../specs/classify';
-import type { FieldError, MeasurementMode } from './enums';
+import { DIODE_STATES, type FieldError, type MeasurementMode } from './enums';
 import type { ReadingDto } from './jobs';
 import { safeText } from './text';
 
@@ -219,7 +219,7 @@ export const StepReading = z
   .strict();
 export type StepReading = z.infer<typeof StepReading>;
 
-const DiodeState = z.enum(['conducts', 'open']);
+const DiodeState = z.enum(DIODE_STATES);
 export const RunResultBody = z
   .object({
     stepId: z.union([StepKey, z.number().int().transform(String)]),

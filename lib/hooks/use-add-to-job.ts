@@ -7,9 +7,9 @@
 import { useState } from 'react';
 import type { JobSummaryDto, ReadingDto } from '../contracts/jobs';
 import type { AddOutcome } from '../offline/queue-runner';
-import { toReadingBody } from '../offline/reading-body';
+import { draftBody, type ReadingDraft } from '../offline/reading-body';
 import { useSession } from '../session/session-provider';
-import type { VerdictInput, VerdictResult } from '../verdict';
+import { checkText, type Verdict } from '../verdict';
 import { useJobQuery, useJobsQuery, useLastJob } from './use-jobs';
 import { useReadingQueue } from './use-reading-queue';
 
@@ -53,22 +53,23 @@ export function useAddToJob({ spec, jobId: linkedJob, retakeOf: linkedRetake }: 
   const chosen: JobSummaryDto | undefined = jobs.data?.find((j) => j.id === jobId);
 
   /** Sends one reading to job `target`; `label` says what was measured when there is no spec. */
-  const send = async (target: number, input: VerdictInput, result: VerdictResult, label: string) => {
+  const send = async (target: number, draft: ReadingDraft, verdict: Verdict, label: string) => {
     setSending(true);
     rememberJob(target);
     setJobId(target);
     setMode('idle');
-    const body = toReadingBody(input, spec ? { specId: spec.id } : { label }, { retakeOf });
+    const body = draftBody(draft, spec ? { specId: spec.id } : { label }, { retakeOf });
     const preview = {
       label: spec?.parameter ?? label,
       componentName: spec?.componentName ?? '',
-      value: input.reading.value,
-      unit: input.reading.unit,
-      verdict: result.verdict,
+      ...(draft.kind === 'measured'
+        ? { value: draft.input.reading.value, unit: draft.input.reading.unit }
+        : { value: 0, unit: '', text: checkText(draft.check) }),
+      verdict,
     };
     const outcome = await queue.add({ jobId: target, body, preview });
     if (outcome.status !== 'rejected') setRetakeOf(undefined);
-    setSent({ for: JSON.stringify(input), jobId: target, outcome });
+    setSent({ for: JSON.stringify(draft), jobId: target, outcome });
     setSending(false);
   };
 
@@ -82,9 +83,9 @@ export function useAddToJob({ spec, jobId: linkedJob, retakeOf: linkedRetake }: 
     setMode,
     sending,
     send,
-    /** What became of the reading sent for `input`; null once the input changed (a new reading). */
-    doneFor: (input: VerdictInput): { jobId: number; outcome: ShownOutcome } | null => {
-      if (sent?.for !== JSON.stringify(input)) return null;
+    /** What became of the reading sent for `draft`; null once it changed (a new reading). */
+    doneFor: (draft: ReadingDraft): { jobId: number; outcome: ShownOutcome } | null => {
+      if (sent?.for !== JSON.stringify(draft)) return null;
       if (sent.outcome.status !== 'queued') return sent;
       const fate = queue.fate(sent.outcome.key);
       return {

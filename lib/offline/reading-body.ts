@@ -6,18 +6,30 @@
  * reading carries the meter mode it was taken in, so the server refuses one taken in another mode.
  */
 import type { ReadingBody } from '../contracts/jobs';
-import type { VerdictInput } from '../verdict';
+import type { BeepCheck, VerdictInput } from '../verdict';
 
 export type ReadingTarget = { specId: number } | { label: string };
+
+/** What a calculator hands "Add to job": a meter value with its spec, or a beep-only check. */
+export type ReadingDraft = { kind: 'measured'; input: VerdictInput } | { kind: 'check'; check: BeepCheck };
+
+type Extra = { retakeOf?: number; takenAt?: string };
+
+export function draftBody(draft: ReadingDraft, target: ReadingTarget, extra: Extra = {}): ReadingBody {
+  if (draft.kind === 'measured') return toReadingBody(draft.input, target, extra);
+  const body: ReadingBody = {
+    ...('specId' in target ? { specId: target.specId } : { label: target.label.trim() }),
+    check: { ...draft.check },
+  };
+  if (extra.retakeOf !== undefined) body.retakeOf = extra.retakeOf;
+  if (extra.takenAt !== undefined) body.takenAt = extra.takenAt;
+  return body;
+}
 
 const defined = <T extends object>(o: T) =>
   Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined && v !== null)) as T;
 
-export function toReadingBody(
-  input: VerdictInput,
-  target: ReadingTarget,
-  extra: { retakeOf?: number; takenAt?: string } = {},
-): ReadingBody {
+export function toReadingBody(input: VerdictInput, target: ReadingTarget, extra: Extra = {}): ReadingBody {
   const body: ReadingBody =
     'specId' in target
       ? { specId: target.specId, reading: defined({ ...input.reading }) }

@@ -16,6 +16,8 @@ export type ReadingPreview = {
   componentName: string;
   value: number;
   unit: string;
+  /** A beep-only check's result in words (it has no value to show). */
+  text?: string;
   verdict: Verdict | null;
 };
 

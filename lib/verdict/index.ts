@@ -38,7 +38,7 @@ export {
 export type { MeasurementMode } from './modes';
 export { decideWithUncertainty, decideWithoutUncertainty, nearBands } from './decision';
 export type { BandRule, Decision, Exact, LimitsLike, NearBands, Side, Zone } from './decision';
-export { evaluateDiode, evaluateContinuity } from './qualitative';
-export type { ContinuityTest, DiodeState, DiodeTest } from './qualitative';
+export { checkText, checkValue, evaluateCheck, evaluateContinuity, evaluateDiode } from './qualitative';
+export type { BeepCheck, ContinuityTest, DiodeState, DiodeTest } from './qualitative';
 export { REST_NOTE, SOC_TABLES, batteryStateOfCharge } from './battery';
 export type { BatteryType, StateOfCharge } from './battery';

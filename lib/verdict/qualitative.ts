@@ -7,9 +7,10 @@
  * swapped, the diode fitted backwards, or the band misread). That is *marginal* with a
  * "re-test" reason rather than a fail, since condemning a good part is the costlier mistake.
  */
+import type { DiodeState } from '../contracts/enums';
 import { VerdictInputError, type QualitativeResult, type VerdictStep } from './types';
 
-export type DiodeState = 'conducts' | 'open';
+export type { DiodeState };
 export type DiodeTest = { forward: DiodeState; reverse: DiodeState };
 export type ContinuityTest = { continuity: boolean; expected?: boolean };
 
@@ -72,4 +73,22 @@ export function evaluateContinuity(test: ContinuityTest): QualitativeResult {
     ? 'No continuity: open circuit. A fuse that reads open is blown.'
     : 'Continuity where the circuit should be open: a short.';
   return { verdict: 'fail', reason, steps };
+}
+
+/** A beep-only check as a job keeps it (POST /api/jobs/:id/readings `check`). */
+export type BeepCheck = ({ kind: 'diode' } & DiodeTest) | ({ kind: 'continuity' } & ContinuityTest);
+
+export function evaluateCheck(check: BeepCheck): QualitativeResult {
+  return check.kind === 'diode' ? evaluateDiode(check) : evaluateContinuity(check);
+}
+
+/** 1 when the meter showed conduction (the diode's forward test, or continuity), 0 when open. */
+export const checkValue = (check: BeepCheck): number =>
+  (check.kind === 'diode' ? check.forward === 'conducts' : check.continuity) ? 1 : 0;
+
+/** What the meter showed, in words: 'Forward conducts, reverse open', 'Continuity', 'Open circuit'. */
+export function checkText(check: BeepCheck): string {
+  if (check.kind === 'diode') return `Forward ${check.forward}, reverse ${check.reverse}`;
+  const shown = check.continuity ? 'Continuity' : 'Open circuit';
+  return check.expected === false ? `${shown} (open expected)` : shown;
 }

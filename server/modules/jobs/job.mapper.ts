@@ -1,11 +1,15 @@
 import type { JobSummaryDto, ReadingDto } from '@/lib/contracts/jobs';
+import { checkText, type BeepCheck } from '@/lib/verdict';
 import type { Job } from './job.entity';
 import type { Reading } from './reading.entity';
 
 export type JobExtras = { ownerName: string; modelTitle: string | null };
 
 export function toReadingDto(r: Reading, currentSpecVersion: number | null): ReadingDto {
+  const check = r.inputs.check as BeepCheck | undefined;
   return {
+    // A beep-only check has no number to show: what the meter showed, in words.
+    ...(check ? { valueText: checkText(check) } : {}),
     id: r.id,
     jobId: r.jobId,
     label: r.label,

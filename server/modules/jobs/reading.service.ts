@@ -5,7 +5,11 @@
  */
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import type { ReadingBody, ReadingDto } from '@/lib/contracts/jobs';
+import { CHECK_KIND_MODE, MEASUREMENT_MODE_LABEL } from '@/lib/contracts/enums';
+import type { ReadingBody, ReadingCheck, ReadingDto } from '@/lib/contracts/jobs';
+import { defaultMode } from '@/lib/specs/classify';
+import { unitKind, type CanonicalUnit } from '@/lib/units';
+import { checkValue, evaluateCheck } from '@/lib/verdict';
 import { writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
 import type { SignedInUser } from '@/server/auth/roles';
@@ -19,11 +23,94 @@ import { JobRepository, ReadingRepository, specForReading } from './job.reposito
 
 export type AddedReading = { reading: ReadingDto; created: boolean };
 
+/** What a saved reading records of its judgement, whichever kind of reading it was. */
+type Judged = Pick<
+  Reading,
+  | 'specVersion'
+  | 'label'
+  | 'componentName'
+  | 'specLimits'
+  | 'value'
+  | 'unit'
+  | 'expandedUncertainty'
+  | 'conformanceProbability'
+  | 'verdict'
+  | 'reason'
+  | 'steps'
+  | 'zones'
+>;
+
 async function describeSpec(m: EntityManager, specId: number) {
   const spec = await specForReading(m, specId);
   if (!spec) throw AppError.notFound('spec', specId);
   const citation = spec.source ? citationText(spec.source, spec.sourcePage) : null;
-  return { label: spec.parameter, componentName: spec.component.name, citation };
+  return { spec, label: spec.parameter, componentName: spec.component.name, citation };
+}
+
+/** A meter value: the shared engine, against the spec by id or the limits sent. */
+async function judgeMeasured(m: EntityManager, body: ReadingBody): Promise<Judged> {
+  const { input, specVersion } = await toVerdictInput({ ...body, reading: body.reading! });
+  const result = judge(input);
+  const about =
+    body.specId !== undefined
+      ? await describeSpec(m, body.specId)
+      : { label: body.label!, componentName: '', citation: null };
+  return {
+    specVersion: specVersion ?? null,
+    label: about.label,
+    componentName: about.componentName,
+    specLimits: { ...input.spec, citation: about.citation },
+    value: result.value,
+    unit: result.unit,
+    expandedUncertainty: result.expandedUncertainty,
+    conformanceProbability: result.conformanceProbability,
+    verdict: result.verdict,
+    reason: result.reason,
+    steps: result.steps,
+    zones: result.zones,
+  };
+}
+
+/**
+ * A beep-only check: against a library spec read in that check's mode (a diode spec takes a
+ * diode check, a continuity spec a continuity check), or described by its label alone.
+ */
+async function judgeCheck(m: EntityManager, body: ReadingBody, check: ReadingCheck): Promise<Judged> {
+  const mode = CHECK_KIND_MODE[check.kind];
+  let about: { label: string; componentName: string; citation: string | null } = {
+    label: body.label!,
+    componentName: '',
+    citation: null,
+  };
+  let limits: Record<string, unknown> = { unit: '', mode };
+  let specVersion: number | null = null;
+  if (body.specId !== undefined) {
+    const described = await describeSpec(m, body.specId);
+    const { spec } = described;
+    const specMode = spec.mode ?? defaultMode(spec.parameter, unitKind(spec.unit as CanonicalUnit));
+    if (specMode !== mode) {
+      const message = `This spec is read on ${specMode ? MEASUREMENT_MODE_LABEL[specMode] : 'its own range'}, not ${MEASUREMENT_MODE_LABEL[mode]}: type the meter reading instead.`;
+      throw AppError.unprocessable(message, [{ path: 'check.kind', message }]);
+    }
+    about = described;
+    limits = { min: spec.min, nominal: spec.nominal, max: spec.max, unit: spec.unit, mode };
+    specVersion = spec.version;
+  }
+  const result = evaluateCheck(check);
+  return {
+    specVersion,
+    label: about.label,
+    componentName: about.componentName,
+    specLimits: { ...limits, citation: about.citation },
+    value: checkValue(check),
+    unit: '',
+    expandedUncertainty: null,
+    conformanceProbability: null,
+    verdict: result.verdict,
+    reason: result.reason,
+    steps: result.steps,
+    zones: {},
+  };
 }
 
 async function lockOpenJob(m: EntityManager, user: SignedInUser, jobId: number): Promise<Job> {
@@ -57,28 +144,12 @@ export async function addReading(
       const readings = m.withRepository(ReadingRepository);
       const existing = await readings.findByKey(jobId, idempotencyKey);
       if (existing) return replay(existing, request.hash);
-      const { input, specVersion } = await toVerdictInput(body);
-      const result = judge(input);
-      const about =
-        body.specId !== undefined
-          ? await describeSpec(m, body.specId)
-          : { label: body.label!, componentName: '', citation: null };
+      const judged = body.check ? await judgeCheck(m, body, body.check) : await judgeMeasured(m, body);
       const saved = await readings.save({
+        ...judged,
         jobId,
         specId: body.specId ?? null,
-        specVersion: specVersion ?? null,
-        label: about.label,
-        componentName: about.componentName,
-        specLimits: { ...input.spec, citation: about.citation },
         inputs: { ...body, label: undefined, retakeOf: undefined, takenAt: undefined },
-        value: result.value,
-        unit: result.unit,
-        expandedUncertainty: result.expandedUncertainty,
-        conformanceProbability: result.conformanceProbability,
-        verdict: result.verdict,
-        reason: result.reason,
-        steps: result.steps,
-        zones: result.zones,
         idempotencyKey,
         requestHash: request.hash,
         supersededBy: null,

@@ -32,14 +32,16 @@ function cell(value: unknown, text: boolean): string {
 export function readingsCsv(job: JobDetailDto): string {
   const rows = job.readings.map((r) => {
     const raw = (r.inputs.reading ?? {}) as { value?: number; unit?: string };
+    // A beep-only check has no number: raw_value holds what the meter showed, in words.
+    const check = r.inputs.check !== undefined;
     const values: [unknown, boolean][] = [
       [r.id, false],
       [r.takenAt, false],
       [r.componentName, true],
       [r.label, true],
-      [raw.value, false],
+      check ? [r.valueText, true] : [raw.value, false],
       [raw.unit, true],
-      [r.value, false],
+      [check ? null : r.value, false],
       [r.unit, true],
       [r.expandedUncertainty, false],
       [r.verdict, false],
