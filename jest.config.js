@@ -40,9 +40,6 @@ module.exports = {
       testEnvironment: 'node',
       moduleNameMapper,
       testMatch: ['<rootDir>/__tests__/e2e/**/*.test.ts'],
-      // The offline journey runs on its own (npm run test:offline): it fails today at the model sheet
-      // reloaded offline (issue 11 is open), and is kept out of npm test until it passes.
-      testPathIgnorePatterns: process.env.SPECBENCH_OFFLINE_E2E ? [] : ['<rootDir>/__tests__/e2e/offline.test.ts'],
       transform: tsJest('<rootDir>/server/tsconfig.json'),
       globalSetup: '<rootDir>/__tests__/helpers/global-setup.ts',
       globalTeardown: '<rootDir>/__tests__/helpers/global-teardown.ts',

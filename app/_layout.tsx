@@ -1,4 +1,4 @@
-import { useEffect, useState, type ReactNode } from 'react';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import Head from 'expo-router/head';
@@ -17,6 +17,7 @@ import {
   PERSIST_MAX_AGE_MS,
   PERSIST_VERSION,
   devicePersister,
+  saveWhenPageHides,
   shouldPersistQuery,
   startOnlineFromDevice,
 } from '@/lib/offline/query-persist';
@@ -42,6 +43,8 @@ function makeQueryClient() {
 function QueryProvider({ children }: { children: ReactNode }) {
   const [queryClient] = useState(makeQueryClient);
   const [persister] = useState(devicePersister);
+  const stopSaving = useRef<(() => void) | null>(null);
+  useEffect(() => () => stopSaving.current?.(), []);
   if (!persister) return <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>;
   return (
     <PersistQueryClientProvider
@@ -55,7 +58,10 @@ function QueryProvider({ children }: { children: ReactNode }) {
       // What the device kept shows at once, but it may be older than its timestamp says (a change made
       // just before the reload may not have been written yet): every restored query counts as stale,
       // so the screens on view refetch when there is a connection and keep the kept copy when there is not.
-      onSuccess={() => void queryClient.invalidateQueries()}
+      onSuccess={() => {
+        void queryClient.invalidateQueries();
+        stopSaving.current ??= saveWhenPageHides(queryClient, PERSIST_VERSION);
+      }}
     >
       {children}
     </PersistQueryClientProvider>

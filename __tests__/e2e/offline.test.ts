@@ -77,7 +77,11 @@ it('after one visit the app works offline, keeps the session, queues a reading a
     await page.goto(`${app.url}/specs/${spec.id}`);
     await expectVisible(calc, 'the spec card’s calculator');
     await page.goto(`${app.url}/models/${spec.modelId}`);
-    await expectVisible(page.getByTestId('model-screen'), 'the model sheet');
+    // Seen means its answer arrived (the screen alone shows while it loads).
+    await expectVisible(
+      page.getByTestId('model-screen').getByTestId(`component-${spec.componentId}`),
+      'the model sheet',
+    );
     await page.goto(`${app.url}/calculator`);
     await expectVisible(page.getByTestId('calculator-screen'), 'the calculator');
     await page.goto(`${app.url}/jobs/${job.id}`);

@@ -1,7 +1,13 @@
 /** The offline parts without a browser: how old the kept copy is, the persisted cache's bound, what ends a session. */
 import type { PersistedClient } from '@tanstack/react-query-persist-client';
 import { ApiError } from '@/lib/api/client';
-import { boundedSerialize, PERSIST_MAX_AGE_MS } from '@/lib/offline/query-persist';
+import {
+  PENDING_KEY,
+  PERSIST_MAX_AGE_MS,
+  boundedSerialize,
+  isPrivateQuery,
+  newerCopy,
+} from '@/lib/offline/query-persist';
 import { offlineLine, savedAgo } from '@/lib/offline/saved-age';
 import { isSessionRefused } from '@/lib/session/offline-session';
 
@@ -68,5 +74,61 @@ describe('isSessionRefused', () => {
   it('the server refusing the refresh (401, 403) ends the session', () => {
     expect(isSessionRefused(new ApiError(401, 'x', 'x'))).toBe(true);
     expect(isSessionRefused(new ApiError(403, 'x', 'x'))).toBe(true);
+  });
+});
+
+/** A localStorage stand-in. */
+function memoryStorage(initial: Record<string, string> = {}) {
+  const items = new Map(Object.entries(initial));
+  return {
+    getItem: (k: string) => items.get(k) ?? null,
+    setItem: (k: string, v: string) => void items.set(k, v),
+    removeItem: (k: string) => void items.delete(k),
+    has: (k: string) => items.has(k),
+  };
+}
+const copyAt = (timestamp: number) =>
+  JSON.stringify({ timestamp, buster: 'v1', clientState: { mutations: [], queries: [] } });
+
+describe('newerCopy: the copy written as the page went away, or the IndexedDB one', () => {
+  it('takes the page-hide copy when it is newer, and clears it', () => {
+    const storage = memoryStorage({ [PENDING_KEY]: copyAt(NOW) });
+    expect(newerCopy(copyAt(NOW - 500), storage)).toBe(copyAt(NOW));
+    expect(storage.has(PENDING_KEY)).toBe(false);
+  });
+  it('keeps the IndexedDB copy when it is newer (written after the page came back)', () => {
+    const storage = memoryStorage({ [PENDING_KEY]: copyAt(NOW - 500) });
+    expect(newerCopy(copyAt(NOW), storage)).toBe(copyAt(NOW));
+    expect(storage.has(PENDING_KEY)).toBe(false);
+  });
+  it('with no page-hide copy, or a broken one, the IndexedDB copy (or nothing) stands', () => {
+    expect(newerCopy(copyAt(NOW), memoryStorage())).toBe(copyAt(NOW));
+    expect(newerCopy(undefined, memoryStorage())).toBeNull();
+    expect(newerCopy(copyAt(NOW), memoryStorage({ [PENDING_KEY]: '{not json' }))).toBe(copyAt(NOW));
+    expect(newerCopy(null, memoryStorage({ [PENDING_KEY]: copyAt(NOW) }))).toBe(copyAt(NOW));
+  });
+});
+
+describe('isPrivateQuery: what signing out removes from the device', () => {
+  const q = (queryKey: unknown[], data?: unknown) => ({ queryKey, state: { data } });
+  it.each([
+    [['jobs', 'open', '']],
+    [['job', 4]],
+    [['runs', 4]],
+    [['corrections', 'summary']],
+    [['users', '']],
+    [['imports', 'list']],
+    [['last-job']],
+  ])('%j is private', (key) => expect(isPrivateQuery(q(key))).toBe(true));
+  it('the library stays: models, search, plans and published spec cards', () => {
+    expect(isPrivateQuery(q(['models']))).toBe(false);
+    expect(isPrivateQuery(q(['models', 3]))).toBe(false);
+    expect(isPrivateQuery(q(['search', 'coil']))).toBe(false);
+    expect(isPrivateQuery(q(['plans', null, null, '']))).toBe(false);
+    expect(isPrivateQuery(q(['spec', 7], { status: 'published' }))).toBe(false);
+  });
+  it('a draft an editor opened, and revision lists, go', () => {
+    expect(isPrivateQuery(q(['spec', 7], { status: 'draft' }))).toBe(true);
+    expect(isPrivateQuery(q(['spec', 7, 'revisions'], {}))).toBe(true);
   });
 });

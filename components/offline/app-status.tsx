@@ -1,6 +1,7 @@
 import { useEffect, useState, useSyncExternalStore } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { onlineManager, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useOnline } from '@/lib/hooks/use-online';
 import { useReadingQueue } from '@/lib/hooks/use-reading-queue';
 import { waitingMessage } from '@/lib/offline/reading-queue';
 import { offlineLine } from '@/lib/offline/saved-age';
@@ -10,9 +11,6 @@ import { useTheme } from '@/lib/theme/use-theme';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
 
-const subscribeOnline = (fn: () => void) => onlineManager.subscribe(fn);
-const isOnline = () => onlineManager.isOnline();
-
 /**
  * One line under the header for what the device is doing on its own: offline (and how old
  * the kept copy is), readings waiting to be sent, and a new build ready to load.
@@ -20,7 +18,7 @@ const isOnline = () => onlineManager.isOnline();
 export function AppStatus() {
   const t = useTheme();
   const qc = useQueryClient();
-  const online = useSyncExternalStore(subscribeOnline, isOnline, () => true);
+  const online = useOnline();
   const update = useSyncExternalStore(subscribeUpdate, updateWaiting, () => false);
   const waiting = useReadingQueue().pendingCount;
   const now = useMinuteClock();

@@ -7,7 +7,7 @@
 import { get, set, del } from 'idb-keyval';
 import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persister';
 import { removeOldestQuery, type PersistedClient, type Persister } from '@tanstack/react-query-persist-client';
-import { onlineManager, type Query } from '@tanstack/react-query';
+import { dehydrate, onlineManager, type Query, type QueryClient } from '@tanstack/react-query';
 
 export const PERSIST_VERSION = 'v1';
 export const PERSIST_KEY = `specbench.query-cache.${PERSIST_VERSION}`;
@@ -30,6 +30,26 @@ export function boundedSerialize(client: PersistedClient, maxChars = PERSIST_MAX
   return text;
 }
 
+/** Answers anyone may read: they stay on the device after signing out. */
+const PUBLIC_ROOTS = new Set(['models', 'search', 'plans', 'plan', 'columns', 'spec']);
+
+/**
+ * What signing out removes from the device: job sheets, proposals, users, imports and any
+ * draft an editor opened. A published spec card stays (its revisions go; they refetch).
+ */
+export function isPrivateQuery(query: { queryKey: readonly unknown[]; state: { data?: unknown } }): boolean {
+  const [root, , third] = query.queryKey as unknown[];
+  if (!PUBLIC_ROOTS.has(String(root))) return true;
+  if (root !== 'spec') return false;
+  return third !== undefined || (query.state.data as { status?: string } | undefined)?.status !== 'published';
+}
+
+/** Forgets every private answer, and the copy written as the last page went away. */
+export function forgetPrivateQueries(queryClient: QueryClient): void {
+  queryClient.removeQueries({ predicate: isPrivateQuery });
+  syncStorage()?.removeItem(PENDING_KEY);
+}
+
 /** Only settled, successful answers; never the device-only memory keys that are rebuilt anyway. */
 export const shouldPersistQuery = (query: Query) => query.state.status === 'success';
 
@@ -39,7 +59,7 @@ export function devicePersister(): Persister | null {
   return createAsyncStoragePersister({
     key: PERSIST_KEY,
     storage: {
-      getItem: (k) => get<string>(k).then((v) => v ?? null),
+      getItem: (k) => get<string>(k).then((v) => newerCopy(v)),
       setItem: (k, v: string) => set(k, v),
       removeItem: (k) => del(k),
     },
@@ -57,4 +77,73 @@ export function devicePersister(): Persister | null {
 export function startOnlineFromDevice(): void {
   const nav = (globalThis as { navigator?: { onLine?: boolean } }).navigator;
   if (typeof nav?.onLine === 'boolean') onlineManager.setOnline(nav.onLine);
+}
+
+/** Where the cache is written synchronously as the page goes away (see saveWhenPageHides). */
+export const PENDING_KEY = `${PERSIST_KEY}.pending`;
+
+type SyncStorage = {
+  getItem(k: string): string | null;
+  setItem(k: string, v: string): void;
+  removeItem(k: string): void;
+};
+function syncStorage(): SyncStorage | null {
+  try {
+    return (globalThis as { localStorage?: SyncStorage }).localStorage ?? null;
+  } catch {
+    return null; // storage disabled by the browser's settings
+  }
+}
+
+const timestampOf = (text: string | null | undefined): number => {
+  if (!text) return -1;
+  try {
+    return Number((JSON.parse(text) as PersistedClient).timestamp) || -1;
+  } catch {
+    return -1;
+  }
+};
+
+/** The newer of the IndexedDB copy and the one written as the last page went away (which is then cleared). */
+export function newerCopy(kept: string | null | undefined, storage: SyncStorage | null = syncStorage()): string | null {
+  const pending = storage?.getItem(PENDING_KEY) ?? null;
+  if (pending !== null) storage?.removeItem(PENDING_KEY);
+  return timestampOf(pending) > timestampOf(kept) ? pending : (kept ?? null);
+}
+
+/**
+ * Saves the cache at once when the page goes away (a reload, a link opened, the tab closed or
+ * sent to the background). The persister's IndexedDB writes wait out its throttle and are
+ * asynchronous, so an answer that arrived just before would be lost; this copy goes to
+ * localStorage, which writes synchronously, and the next start takes whichever copy is newer.
+ * Call it only once the kept copy has been restored, or the near-empty cache of a page still
+ * starting would win. Returns the clean-up.
+ */
+export function saveWhenPageHides(queryClient: QueryClient, buster: string): () => void {
+  const target = globalThis as unknown as {
+    addEventListener?: (type: string, fn: () => void) => void;
+    removeEventListener?: (type: string, fn: () => void) => void;
+    document?: { visibilityState?: string };
+  };
+  const storage = syncStorage();
+  if (!target.addEventListener || !storage) return () => undefined;
+  const save = () => {
+    if (target.document?.visibilityState === 'visible') return;
+    const client: PersistedClient = {
+      timestamp: Date.now(),
+      buster,
+      clientState: dehydrate(queryClient, { shouldDehydrateQuery: shouldPersistQuery }),
+    };
+    try {
+      storage.setItem(PENDING_KEY, boundedSerialize(client));
+    } catch {
+      // Over the browser's quota: the IndexedDB copy (at most a throttle behind) stands.
+    }
+  };
+  target.addEventListener('pagehide', save);
+  target.addEventListener('visibilitychange', save);
+  return () => {
+    target.removeEventListener?.('pagehide', save);
+    target.removeEventListener?.('visibilitychange', save);
+  };
 }

@@ -8,7 +8,8 @@
  * every 15 s; only the server refusing it ends the session.
  */
 import { createContext, useCallback, useContext, useEffect, useRef, useState, type ReactNode } from 'react';
-import { onlineManager } from '@tanstack/react-query';
+import { onlineManager, useQueryClient } from '@tanstack/react-query';
+import { forgetPrivateQueries } from '../offline/query-persist';
 import type { RoleValue, SessionDto, UserDto } from '../contracts/auth';
 import { refreshSession, signOut as apiSignOut } from '../api/auth';
 import { setAccessToken, setUnauthorizedHandler } from '../api/client';
@@ -93,9 +94,12 @@ export function SessionProvider({ children }: { children: ReactNode }) {
     });
   }, [connected, status, renew]);
 
+  const queryClient = useQueryClient();
+  // A shared workshop tablet: the next person must not find this one's job sheets kept offline.
   const signOut = async () => {
     await apiSignOut().catch(() => undefined);
     end();
+    forgetPrivateQueries(queryClient);
   };
   const can = (role: RoleValue) => !!user && ORDER.indexOf(user.role) >= ORDER.indexOf(role);
 
