@@ -8,6 +8,7 @@
  * ways a shorted one; a sound fuse shows continuity.
  */
 import request from 'supertest';
+import { uniqueMake } from '../fixtures/csv/rows';
 import { createApp } from '@/server/app';
 import { AppDataSource } from '@/server/db/data-source';
 import { useTestDatabase } from '../helpers/test-db';
@@ -51,7 +52,7 @@ async function continuitySpec(): Promise<number> {
     .post('/api/specs')
     .set(editor)
     .send({
-      make: `Brindle Works ${Date.now().toString(36)}`,
+      make: uniqueMake('Brindle'),
       model: 'Mower 160',
       yearFrom: 2020,
       variant: 'all markets',
