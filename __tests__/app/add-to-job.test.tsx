@@ -5,12 +5,18 @@ import { AddToJob } from '@/components/jobs/add-to-job';
 import { evaluateReading, type VerdictInput } from '@/lib/verdict';
 
 const mockAdd = jest.fn();
+let mockQueuedJobs: { id: number; status: 'open'; machineLabel: string; modelTitle: null }[] = [];
 jest.mock('expo-router', () => ({ useRouter: () => ({ push: jest.fn(), dismissTo: jest.fn() }) }));
 jest.mock('@/lib/session/session-provider', () => ({
   useSession: () => ({ status: 'signed-in', user: { id: 7, displayName: 'Dana' } }),
 }));
 jest.mock('@/lib/hooks/use-reading-queue', () => ({
-  useReadingQueue: () => ({ add: mockAdd, fate: () => ({ status: 'waiting' }) }),
+  useReadingQueue: () => ({
+    add: mockAdd,
+    fate: () => ({ status: 'waiting' }),
+    queuedJobs: mockQueuedJobs,
+    sentJobId: () => null,
+  }),
 }));
 jest.mock('@/lib/api/jobs', () => ({
   listJobs: jest.fn(async () => [{ id: 5, status: 'open', machineLabel: 'Blue quad', modelTitle: null }]),
@@ -29,7 +35,10 @@ function wrapper({ children }: { children: ReactNode }) {
   return <QueryClientProvider client={qc}>{children}</QueryClientProvider>;
 }
 
-beforeEach(() => mockAdd.mockReset().mockResolvedValue({ status: 'queued', key: 'k' }));
+beforeEach(() => {
+  mockQueuedJobs = [];
+  mockAdd.mockReset().mockResolvedValue({ status: 'queued', key: 'k' });
+});
 
 describe('AddToJob', () => {
   it('on a spec card, sends the reading by spec id to the job and re-take the screen passed', async () => {
@@ -79,5 +88,17 @@ describe('AddToJob', () => {
       check: { kind: 'diode', forward: 'conducts', reverse: 'open' },
     });
     expect(sent.preview).toMatchObject({ text: 'Forward conducts, reverse open', verdict: 'pass' });
+  });
+
+  it('a job started offline and not sent yet is offered first, without a number, and takes the reading', async () => {
+    mockQueuedJobs = [{ id: -1, status: 'open', machineLabel: 'Green trail bike', modelTitle: null }];
+    render(<AddToJob draft={DRAFT} verdict={VERDICT} />, { wrapper });
+    fireEvent.changeText(screen.getByLabelText('What did you measure?'), 'Stator, yellow to yellow');
+    fireEvent.press(screen.getByRole('button', { name: 'Add to job' }));
+    const local = await screen.findByRole('button', { name: 'Add to the new job (not sent yet): Green trail bike' });
+    expect(screen.getByText('New, not sent yet · Green trail bike')).toBeTruthy();
+    fireEvent.press(local);
+    await waitFor(() => expect(mockAdd).toHaveBeenCalled());
+    expect(mockAdd.mock.calls[0][0].jobId).toBe(-1);
   });
 });

@@ -158,3 +158,85 @@ it('after one visit the app works offline, keeps the session, queues a reading a
   });
   await context.close();
 });
+
+it('a job started with no connection takes a reading, and both land once when the connection returns', async () => {
+  const spec = await primarySpec();
+  const account = await e2eAccount('contributor', 'offline-new-job');
+  const user = (await AppDataSource.getRepository(User).findOneByOrFail({ emailKey: emailKey(account.email) }))!;
+  const vin = `OFFNEW-${Date.now().toString(36).toUpperCase()}`;
+  const context: BrowserContext = await app.browser.newContext({ viewport: PHONE });
+  const page = await context.newPage();
+  const name = page.getByTestId('header-account').filter({ hasText: account.displayName }).first();
+  const calc = page.getByTestId('spec-screen').getByTestId('calculator');
+  const jobsWithVin = async () =>
+    (await api<JobDetailDto[]>(user, `/api/jobs?q=${encodeURIComponent(vin)}`)).filter((j) => j.machineId === vin);
+
+  await step('one visit online: home (the library’s models), the spec card, My jobs', async () => {
+    await signInThroughApi(page, app.url, account.email);
+    await expectVisible(page.getByTestId('model-list'), 'the library’s models');
+    await page.goto(`${app.url}/specs/${spec.id}`);
+    await expectVisible(calc, 'the spec card’s calculator');
+    await page.goto(`${app.url}/jobs`);
+    await expectVisible(page.getByTestId('jobs-screen'), 'My jobs');
+    await page.goto(`${app.url}/specs/${spec.id}`);
+    await expectVisible(calc, 'the spec card’s calculator');
+    await installed(page);
+  });
+
+  await step('offline: a new job from Add to job, with the reading on it, both queued', async () => {
+    await context.setOffline(true);
+    await page.reload();
+    await expectVisible(calc, 'the spec card’s calculator offline', SLOW);
+    await calc.getByLabel('Meter reading', { exact: true }).fill(String((spec.min + spec.max) / 2));
+    await calc.getByTestId('add-to-job-button').scrollIntoViewIfNeeded();
+    await calc.getByTestId('add-to-job-button').click();
+    await calc.getByTestId('pick-new-job').click();
+    const form = calc.getByTestId('add-to-job-new');
+    await expectVisible(form, 'the new job form offline');
+    await form.getByTestId('job-machine-id').fill(vin);
+    await form.getByRole('button', { name: 'Create the job' }).click();
+    await expectText(calc.getByTestId('add-to-job-outcome'), 'Queued — will send when online');
+    await expectText(page.getByTestId('header-queue'), /^1 job and 1 reading waiting to be sent/);
+    await screenshot(page, 'offline-new-job-queued-phone');
+    await calc.getByTestId('add-to-job-open').click();
+    const sheet = page.getByTestId('job-sheet');
+    await expectText(sheet.getByTestId('queued-job-status'), /^Waiting to be sent/);
+    await expectVisible(sheet.getByTestId('queue-waiting'), 'the reading waiting on the new sheet');
+    await expectText(sheet.getByTestId('job-machine'), /Kestrel Moto 900 Trail/);
+    expect(new URL(page.url()).pathname).toMatch(/^\/jobs\/-\d+$/);
+    await screenshot(page, 'offline-new-job-sheet-phone');
+    expect(await jobsWithVin()).toHaveLength(0);
+  });
+
+  await step(
+    'back online: one job, one reading on it, the sheet moves to the job’s number, still signed in',
+    async () => {
+      await context.setOffline(false);
+      await page.waitForURL(/\/jobs\/\d+$/, { timeout: 30_000 });
+      const [stored, ...more] = await jobsWithVin();
+      expect(more).toHaveLength(0);
+      expect(new URL(page.url()).pathname).toBe(`/jobs/${stored.id}`);
+      expect(stored.modelId).toBe(spec.modelId);
+      await waitForReadings(user, stored.id, 1);
+      const sheet = page.getByTestId('job-sheet');
+      await expectVisible(sheet.getByTestId('job-summary'), 'the sent job’s sheet');
+      await expectHidden(page.getByTestId('header-queue'), 'the header’s queue notice');
+      await expectVisible(name, 'the signed-in name online');
+      await screenshot(page, 'online-new-job-sent-phone');
+      // A few more sync rounds send nothing twice.
+      await page.waitForTimeout(11_000);
+      expect(await jobsWithVin()).toHaveLength(1);
+      expect((await api<JobDetailDto>(user, `/api/jobs/${stored.id}`)).readings).toHaveLength(1);
+    },
+  );
+  await context.close();
+});
+
+async function waitForReadings(user: User, jobId: number, count: number) {
+  for (let i = 0; ; i++) {
+    const job = await api<JobDetailDto>(user, `/api/jobs/${jobId}`);
+    if (job.readings.length >= count) return expect(job.readings).toHaveLength(count);
+    if (i > 40) throw new Error(`job ${jobId} has ${job.readings.length} readings, expected ${count}`);
+    await new Promise((r) => setTimeout(r, 500));
+  }
+}

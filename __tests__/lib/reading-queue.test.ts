@@ -1,6 +1,6 @@
 import { ApiError } from '@/lib/api/client';
 import { IDEMPOTENCY_KEY, ReadingBody, type ReadingDto } from '@/lib/contracts/jobs';
-import { ReadingQueueRunner, type QueueStorage } from '@/lib/offline/queue-runner';
+import { ReadingQueueRunner } from '@/lib/offline/queue-runner';
 import { toReadingBody } from '@/lib/offline/reading-body';
 import {
   EMPTY_QUEUE,
@@ -16,6 +16,7 @@ import {
   type QueuedReading,
 } from '@/lib/offline/reading-queue';
 import type { VerdictInput } from '@/lib/verdict';
+import { memoryStorage } from '../helpers/memory-storage';
 
 const INPUT: VerdictInput = {
   spec: { min: 2.4, nominal: 2.8, max: 3.2, unit: 'Ω', refTempC: 20, material: 'copper' },
@@ -159,16 +160,7 @@ describe('toReadingBody', () => {
 });
 
 describe('ReadingQueueRunner', () => {
-  const memory = () => {
-    const data = new Map<string, string>();
-    const storage: QueueStorage = {
-      getItem: async (k) => data.get(k) ?? null,
-      setItem: async (k, v) => {
-        data.set(k, v);
-      },
-    };
-    return { data, storage };
-  };
+  const memory = memoryStorage;
   const stored = (r: ReadingDto['id']) => ({ id: r }) as ReadingDto;
   let n = 0;
   const options = { newKey: () => `test-key-${++n}`, now: () => new Date('2026-02-03T04:05:06.000Z') };

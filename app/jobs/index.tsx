@@ -1,9 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
-import { formFailure } from '@/components/ui/form-failure';
 import { JobList } from '@/components/jobs/job-list';
-import { NewJobForm } from '@/components/jobs/new-job-form';
+import { NewJobPanel } from '@/components/jobs/new-job-panel';
 import { SignInPrompt } from '@/components/jobs/sign-in-prompt';
 import { Button } from '@/components/ui/button';
 import { ChoiceRow } from '@/components/ui/choice-row';
@@ -13,8 +12,8 @@ import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { describeError } from '@/lib/api/describe-error';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
-import { useCreateJobMutation, useJobsQuery } from '@/lib/hooks/use-jobs';
-import { useModelsQuery } from '@/lib/hooks/use-library';
+import { useJobsQuery } from '@/lib/hooks/use-jobs';
+import { useReadingQueue } from '@/lib/hooks/use-reading-queue';
 import { useSession } from '@/lib/session/session-provider';
 import { Spacing } from '@/lib/theme';
 
@@ -73,8 +72,33 @@ export default function JobsScreen() {
 
 function JobsArea({ q, status, onOpen }: { q: string; status: StatusFilter; onOpen: (id: number) => void }) {
   const jobs = useJobsQuery({ q, status: status === 'all' ? undefined : status });
-  if (jobs.isPending) return <LoadingState label="Loading your jobs" />;
-  if (jobs.error) return <ErrorState message={describeError(jobs.error)} onRetry={jobs.refetch} />;
+  // Jobs started on this device and not sent yet: open, shown first, matched on what they say.
+  const words = q.trim().toLocaleLowerCase();
+  const queued = useReadingQueue().queuedJobs.filter(
+    (j) =>
+      status !== 'closed' &&
+      (!words ||
+        [j.modelTitle, j.machineLabel, j.machineId, j.customerRef, j.notes].some((f) =>
+          f?.toLocaleLowerCase().includes(words),
+        )),
+  );
+  const list = queued.length ? <JobList jobs={[...queued, ...(jobs.data ?? [])]} onOpen={onOpen} /> : null;
+  if (jobs.isPending && jobs.fetchStatus === 'paused')
+    return (
+      <>
+        {list}
+        <EmptyState message="Offline — this list is not saved on this device yet. It loads when the connection returns." />
+      </>
+    );
+  if (jobs.isPending) return list ?? <LoadingState label="Loading your jobs" />;
+  if (jobs.error)
+    return (
+      <>
+        {list}
+        <ErrorState message={describeError(jobs.error)} onRetry={jobs.refetch} />
+      </>
+    );
+  if (list) return list;
   if (jobs.data.length === 0) {
     return (
       <EmptyState
@@ -87,21 +111,6 @@ function JobsArea({ q, status, onOpen }: { q: string; status: StatusFilter; onOp
     );
   }
   return <JobList jobs={jobs.data} onOpen={onOpen} />;
-}
-
-function NewJobPanel({ onCancel, onCreated }: { onCancel: () => void; onCreated: (id: number) => void }) {
-  const models = useModelsQuery();
-  const create = useCreateJobMutation();
-  return (
-    <NewJobForm
-      models={models.data ?? null}
-      modelsMessage={models.error ? `${describeError(models.error)} You can still describe the machine.` : null}
-      pending={create.isPending}
-      failure={formFailure(create.error)}
-      onCancel={onCancel}
-      onSubmit={(body) => create.mutate(body, { onSuccess: (job) => onCreated(job.id) })}
-    />
-  );
 }
 
 const styles = StyleSheet.create({

@@ -1,6 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import type { ShownOutcome } from '@/lib/hooks/use-add-to-job';
+import { isLocalJobId } from '@/lib/offline/reading-queue';
 import { Spacing } from '@/lib/theme';
+import { jobRef } from './job-format';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
 
@@ -10,9 +12,9 @@ export type AddToJobOutcomeProps = { outcome: ShownOutcome; jobId: number; onOpe
 export function AddToJobOutcome({ outcome, jobId, onOpen }: AddToJobOutcomeProps) {
   const message =
     outcome.status === 'sent'
-      ? `Added to job #${jobId}`
+      ? `Added to ${jobRef(jobId)}`
       : outcome.status === 'delivered'
-        ? `Sent — added to job #${jobId}`
+        ? `Sent — added to ${jobRef(jobId)}`
         : outcome.status === 'queued'
           ? 'Queued — will send when online'
           : `Not added: ${outcome.message}`;
@@ -32,7 +34,7 @@ export function AddToJobOutcome({ outcome, jobId, onOpen }: AddToJobOutcomeProps
         {message}
       </Text>
       <Button
-        label={`Open job sheet #${jobId}`}
+        label={isLocalJobId(jobId) ? 'Open the new job sheet' : `Open job sheet #${jobId}`}
         variant="quiet"
         onPress={onOpen}
         style={styles.link}

@@ -16,7 +16,7 @@ import { Button } from '../ui/button';
 import { FormField } from '../ui/form-field';
 import { Text } from '../ui/text';
 import { AddToJobOutcome } from './add-to-job-outcome';
-import { formatWhen, machineName } from './job-format';
+import { formatWhen, jobRef, machineName } from './job-format';
 import { JobPicker } from './job-picker';
 import { NewJobPanel } from './new-job-panel';
 
@@ -78,7 +78,7 @@ function AddToJobPanel({ draft, verdict, target }: PanelProps) {
           {retaken
             ? `“${retaken.label}” (${formatNumber(retaken.value)} ${retaken.unit}, ${retaken.verdict}, ${formatWhen(retaken.takenAt)})`
             : `reading #${retakeOf}`}{' '}
-          on job #{jobId}: the old reading stays on the sheet, struck through.
+          on {jobRef(jobId ?? 0)}: the old reading stays on the sheet, struck through.
         </Text>
       ) : null}
       {target.spec ? null : (
@@ -93,9 +93,9 @@ function AddToJobPanel({ draft, verdict, target }: PanelProps) {
       )}
       {mode === 'picking' ? (
         <JobPicker
-          jobs={job.jobs.data}
-          loading={job.jobs.isPending && job.jobs.fetchStatus !== 'paused'}
-          offline={job.jobs.isPending && job.jobs.fetchStatus === 'paused'}
+          jobs={job.openJobs}
+          loading={!job.openJobs && job.jobs.isPending && job.jobs.fetchStatus !== 'paused'}
+          offline={!job.openJobs && job.jobs.fetchStatus === 'paused'}
           error={job.jobs.error ? describeError(job.jobs.error) : null}
           onRetry={job.jobs.refetch}
           onPick={(picked) => void send(picked.id)}
@@ -105,6 +105,8 @@ function AddToJobPanel({ draft, verdict, target }: PanelProps) {
       ) : null}
       {mode === 'creating' ? (
         <NewJobPanel
+          compact
+          testID="add-to-job-new"
           modelId={target.spec?.modelId ?? null}
           onCancel={() => setMode('picking')}
           onCreated={(id) => void send(id)}
@@ -113,7 +115,7 @@ function AddToJobPanel({ draft, verdict, target }: PanelProps) {
       {mode === 'idle' && !done ? (
         <View style={styles.actions}>
           <Button
-            label={job.sending ? 'Adding…' : jobId !== null ? `Add to job #${jobId}` : 'Add to job'}
+            label={job.sending ? 'Adding…' : jobId !== null ? `Add to ${jobRef(jobId)}` : 'Add to job'}
             disabled={job.sending}
             onPress={() => (jobId !== null ? void send(jobId) : setMode('picking'))}
             testID="add-to-job-button"

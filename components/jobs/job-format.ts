@@ -4,14 +4,27 @@
  */
 import { MEASUREMENT_MODE_LABEL, type MeasurementMode } from '@/lib/contracts/enums';
 import type { JobSummaryDto, ReadingDto } from '@/lib/contracts/jobs';
+import { isLocalJobId } from '@/lib/offline/reading-queue';
 import { formatNumber, formatRange, type CanonicalUnit } from '@/lib/units';
 import type { VerdictResult, VerdictStep } from '@/lib/verdict';
 
 export const OTHER_CHECKS = 'Other checks';
 
+/** "job #12"; a job started on this device and not yet sent has no number yet. */
+export function jobRef(id: number): string {
+  return isLocalJobId(id) ? 'the new job (not sent yet)' : `job #${id}`;
+}
+
+/** "#12" before a job's machine in lists; "New, not sent yet" for one queued on this device. */
+export function jobTag(id: number): string {
+  return isLocalJobId(id) ? 'New, not sent yet' : `#${id}`;
+}
+
+export const capitalised = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
 export function machineName(job: Pick<JobSummaryDto, 'id' | 'modelTitle' | 'machineLabel'>): string {
   if (job.modelTitle && job.machineLabel) return `${job.modelTitle} — ${job.machineLabel}`;
-  return job.modelTitle ?? (job.machineLabel || `Job #${job.id}`);
+  return job.modelTitle ?? (job.machineLabel || capitalised(jobRef(job.id)));
 }
 
 /** "7 pass · 1 marginal · 1 fail": in words, never colour alone. */

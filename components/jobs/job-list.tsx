@@ -4,7 +4,7 @@ import { Spacing } from '@/lib/theme';
 import { useTheme } from '@/lib/theme/use-theme';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import { countsText, formatWhen, machineName } from './job-format';
+import { countsText, formatWhen, jobRef, jobTag, machineName } from './job-format';
 
 export type JobListProps = { jobs: JobSummaryDto[]; onOpen: (id: number) => void };
 
@@ -18,7 +18,7 @@ export function JobList({ jobs, onOpen }: JobListProps) {
           key={job.id}
           testID={`job-${job.id}`}
           accessibilityRole="link"
-          accessibilityLabel={`Open job #${job.id}: ${machineName(job)}`}
+          accessibilityLabel={`Open ${jobRef(job.id)}: ${machineName(job)}`}
           onPress={() => onOpen(job.id)}
           style={({ pressed }) => [
             styles.row,
@@ -28,7 +28,7 @@ export function JobList({ jobs, onOpen }: JobListProps) {
         >
           <View style={styles.top}>
             <Text variant="label" style={styles.grow}>
-              #{job.id} · {machineName(job)}
+              {jobTag(job.id)} · {machineName(job)}
             </Text>
             <Text variant="small" color={job.status === 'open' ? 'primary' : 'textMuted'}>
               {job.status === 'open' ? 'Open' : 'Closed'}

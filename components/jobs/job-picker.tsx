@@ -5,7 +5,7 @@ import { useTheme } from '@/lib/theme/use-theme';
 import { Button } from '../ui/button';
 import { ErrorState, LoadingState } from '../ui/states';
 import { Text } from '../ui/text';
-import { machineName } from './job-format';
+import { jobRef, jobTag, machineName } from './job-format';
 
 export type JobPickerProps = {
   jobs: JobSummaryDto[] | undefined;
@@ -39,7 +39,7 @@ export function JobPicker({ jobs, loading, offline, error, onRetry, onPick, onNe
         <Pressable
           key={job.id}
           accessibilityRole="button"
-          accessibilityLabel={`Add to job #${job.id}: ${machineName(job)}`}
+          accessibilityLabel={`Add to ${jobRef(job.id)}: ${machineName(job)}`}
           onPress={() => onPick(job)}
           testID={`pick-job-${job.id}`}
           style={({ pressed }) => [
@@ -48,7 +48,7 @@ export function JobPicker({ jobs, loading, offline, error, onRetry, onPick, onNe
           ]}
         >
           <Text variant="label">
-            #{job.id} · {machineName(job)}
+            {jobTag(job.id)} · {machineName(job)}
           </Text>
           {job.machineId || job.customerRef ? (
             <Text variant="small" color="textMuted">

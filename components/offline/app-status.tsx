@@ -20,7 +20,8 @@ export function AppStatus() {
   const qc = useQueryClient();
   const online = useOnline();
   const update = useSyncExternalStore(subscribeUpdate, updateWaiting, () => false);
-  const waiting = useReadingQueue().pendingCount;
+  const queue = useReadingQueue();
+  const waiting = queue.pendingCount + queue.queuedJobs.length;
   const now = useMinuteClock();
   const cache = qc.getQueryCache();
   const saved = useSyncExternalStore(
@@ -38,7 +39,7 @@ export function AppStatus() {
       ) : null}
       {waiting > 0 ? (
         <Text variant="small" testID="header-queue">
-          {waitingMessage(waiting)}
+          {waitingMessage(queue.pendingCount, queue.queuedJobs.length)}
         </Text>
       ) : null}
       {update ? (

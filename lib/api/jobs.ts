@@ -14,8 +14,13 @@ export type JobsFilter = { q?: string; status?: 'open' | 'closed' };
 
 export const listJobs = (filter: JobsFilter = {}) => apiFetch<JobSummaryDto[]>(`/api/jobs${query(filter)}`);
 export const getJob = (id: number) => apiFetch<JobDetailDto>(`/api/jobs/${id}`);
-export const createJob = (body: CreateJobBody) =>
-  apiFetch<JobDetailDto>('/api/jobs', { method: 'POST', body: JSON.stringify(body) });
+/** 201 for a new job, 200 when the key was seen before (a job queued offline, resent). */
+export const createJob = (body: CreateJobBody, idempotencyKey: string) =>
+  apiFetch<JobDetailDto>('/api/jobs', {
+    method: 'POST',
+    body: JSON.stringify(body),
+    headers: { 'Idempotency-Key': idempotencyKey },
+  });
 export const updateJob = (id: number, body: UpdateJobBody) =>
   apiFetch<JobDetailDto>(`/api/jobs/${id}`, { method: 'PATCH', body: JSON.stringify(body) });
 

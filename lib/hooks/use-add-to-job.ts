@@ -8,6 +8,7 @@ import { useState } from 'react';
 import type { JobSummaryDto, ReadingDto } from '../contracts/jobs';
 import type { AddOutcome } from '../offline/queue-runner';
 import { draftBody, type ReadingDraft } from '../offline/reading-body';
+import { isLocalJobId } from '../offline/reading-queue';
 import { useSession } from '../session/session-provider';
 import { checkText, type Verdict } from '../verdict';
 import { useJobQuery, useJobsQuery, useLastJob } from './use-jobs';
@@ -23,14 +24,14 @@ export type AddToJobTarget = {
   retakeOf?: number;
 };
 
-const positive = (s: string | string[] | undefined) => {
+const integer = (s: string | string[] | undefined, ok: (n: number) => boolean) => {
   const n = Number(Array.isArray(s) ? s[0] : s);
-  return Number.isInteger(n) && n > 0 ? n : undefined;
+  return Number.isInteger(n) && ok(n) ? n : undefined;
 };
 
-/** ?job= and &retake= of a calculator's address (links from the job sheet). */
+/** ?job= and &retake= of a calculator's address (links from the job sheet; a job not sent yet has a local, negative id). */
 export function jobLink(params: { job?: string | string[]; retake?: string | string[] }): AddToJobTarget {
-  return { jobId: positive(params.job), retakeOf: positive(params.retake) };
+  return { jobId: integer(params.job, (n) => n !== 0), retakeOf: integer(params.retake, (n) => n > 0) };
 }
 
 export type AddToJobMode = 'idle' | 'picking' | 'creating';
@@ -42,15 +43,21 @@ export function useAddToJob({ spec, jobId: linkedJob, retakeOf: linkedRetake }: 
   const { user } = useSession();
   const queue = useReadingQueue();
   const [lastJob, rememberJob] = useLastJob(user?.id);
-  const [jobId, setJobId] = useState<number | null>(linkedJob ?? lastJob);
+  const [picked, setJobId] = useState<number | null>(linkedJob ?? lastJob);
+  // A job started offline is known by its local id until the server has it; then by the server's.
+  const follow = (id: number) => (isLocalJobId(id) ? (queue.sentJobId(id) ?? id) : id);
+  const jobId = picked === null ? null : follow(picked);
   const [retakeOf, setRetakeOf] = useState(linkedRetake);
   const [mode, setMode] = useState<AddToJobMode>('idle');
   const [sent, setSent] = useState<Sent | null>(null);
   const [sending, setSending] = useState(false);
   const jobs = useJobsQuery({ status: 'open' }, mode === 'picking' || jobId !== null);
+  // The open jobs to pick from: those started on this device and not sent yet first, then the kept list.
+  const openJobs: JobSummaryDto[] | undefined =
+    jobs.data || queue.queuedJobs.length ? [...queue.queuedJobs, ...(jobs.data ?? [])] : undefined;
   const retakeJob = useJobQuery(jobId, retakeOf !== undefined);
   const retaken: ReadingDto | undefined = retakeJob.data?.readings.find((r) => r.id === retakeOf);
-  const chosen: JobSummaryDto | undefined = jobs.data?.find((j) => j.id === jobId);
+  const chosen: JobSummaryDto | undefined = openJobs?.find((j) => j.id === jobId);
 
   /** Sends one reading to job `target`; `label` says what was measured when there is no spec. */
   const send = async (target: number, draft: ReadingDraft, verdict: Verdict, label: string) => {
@@ -79,6 +86,7 @@ export function useAddToJob({ spec, jobId: linkedJob, retakeOf: linkedRetake }: 
     retakeOf,
     retaken,
     jobs,
+    openJobs,
     mode,
     setMode,
     sending,
@@ -89,7 +97,7 @@ export function useAddToJob({ spec, jobId: linkedJob, retakeOf: linkedRetake }: 
       if (sent.outcome.status !== 'queued') return sent;
       const fate = queue.fate(sent.outcome.key);
       return {
-        jobId: sent.jobId,
+        jobId: follow(sent.jobId),
         outcome: fate.status === 'waiting' ? sent.outcome : fate,
       };
     },

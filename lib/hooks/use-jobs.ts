@@ -7,7 +7,7 @@ import {
   useQueryClient,
   type QueryClient,
 } from '@tanstack/react-query';
-import { createJob, downloadReadingsCsv, getJob, listJobs, updateJob, type JobsFilter } from '../api/jobs';
+import { downloadReadingsCsv, getJob, listJobs, updateJob, type JobsFilter } from '../api/jobs';
 import type { JobDetailDto, UpdateJobBody } from '../contracts/jobs';
 
 export const JOBS_KEY = ['jobs'] as const;
@@ -68,17 +68,15 @@ export function useLastJob(userId: number | undefined) {
   return [last.data ?? null, (jobId: number) => qc.setQueryData(queryKey, jobId)] as const;
 }
 
-function useStoreJob() {
-  const qc = useQueryClient();
-  return (job: JobDetailDto) => {
-    qc.setQueryData([...JOB_KEY, job.id], job);
-    return qc.invalidateQueries({ queryKey: JOBS_KEY });
-  };
+/** A job the server answered with: its sheet goes in the cache, the lists are stale. */
+export function storeJob(qc: QueryClient, job: JobDetailDto) {
+  qc.setQueryData([...JOB_KEY, job.id], job);
+  return qc.invalidateQueries({ queryKey: JOBS_KEY });
 }
 
-export function useCreateJobMutation() {
-  const store = useStoreJob();
-  return useMutation({ mutationFn: createJob, onSuccess: store });
+function useStoreJob() {
+  const qc = useQueryClient();
+  return (job: JobDetailDto) => storeJob(qc, job);
 }
 
 export function useUpdateJobMutation() {

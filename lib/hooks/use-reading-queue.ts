@@ -1,19 +1,21 @@
 /**
  * The device's reading queue (lib/offline) wired to device storage and the API.
- * One queue per app: the calculator adds to it, the job sheet shows what waits, and
+ * One queue per app: the calculator adds readings to it, "New job" adds jobs (so one can
+ * be started with no signal), the job sheet shows what waits, and
  * useReadingQueueSync (mounted once, in the root layout) sends what waits on start,
  * when the connection returns and every 10 s, while someone is signed in.
  */
-import { useEffect, useSyncExternalStore } from 'react';
+import { useEffect, useState, useSyncExternalStore } from 'react';
 import AsyncStorage from '@react-native-async-storage/async-storage';
 import { onlineManager, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '../api/client';
-import { addReading } from '../api/jobs';
+import { addReading, createJob } from '../api/jobs';
+import type { CreateJobBody } from '../contracts/jobs';
 import { describeError } from '../api/describe-error';
-import { ReadingQueueRunner, type AddOutcome, type NewReading } from '../offline/queue-runner';
-import { pendingFor, sendable } from '../offline/reading-queue';
+import { ReadingQueueRunner, type AddJobOutcome, type AddOutcome, type NewReading } from '../offline/queue-runner';
+import { jobsFor, pendingFor, queuedJobSummary, sentJobId, waitingFor } from '../offline/reading-queue';
 import { useSession } from '../session/session-provider';
-import { invalidateJob, prefetchOpenJobs } from './use-jobs';
+import { invalidateJob, prefetchOpenJobs, storeJob } from './use-jobs';
 
 const RETRY_EVERY_MS = 10_000;
 
@@ -25,6 +27,7 @@ const runner = new ReadingQueueRunner(
       err instanceof ApiError && err.status === 404
         ? 'That job is not among yours (it may have been removed).'
         : describeError(err),
+    sendJob: (item) => createJob(item.body, item.key),
   },
 );
 
@@ -32,10 +35,19 @@ export function useReadingQueue() {
   const state = useSyncExternalStore(runner.subscribe, runner.getSnapshot, runner.getSnapshot);
   const { user } = useSession();
   const userId = user?.id ?? -1;
+  const jobs = jobsFor(state, userId);
   return {
     pendingFor: (jobId: number) => pendingFor(state, userId, jobId),
     /** Everything this account has waiting on the device (the header's "N readings waiting to be sent"). */
-    pendingCount: sendable(state, userId).length,
+    pendingCount: waitingFor(state, userId).length,
+    /** Jobs started on this device that the server does not have yet, as the lists show jobs. */
+    queuedJobs: jobs.map((j) => queuedJobSummary(j, user?.displayName ?? '')),
+    /** A job still queued under this local id, if any. */
+    queuedJob: (localId: number) => jobs.find((j) => j.localId === localId) ?? null,
+    /** The server id a queued job got once sent (a screen still showing its local id follows it). */
+    sentJobId: (localId: number) => sentJobId(state, userId, localId),
+    rejectedJob: (localId: number) =>
+      state.rejectedJobs.find((j) => j.userId === userId && j.localId === localId) ?? null,
     /** What became of a queued reading: still waiting, refused (with the server's reason), or sent. */
     fate: (key: string): { status: 'waiting' } | { status: 'rejected'; message: string } | { status: 'delivered' } => {
       if (state.pending.some((p) => p.key === key)) return { status: 'waiting' };
@@ -48,6 +60,32 @@ export function useReadingQueue() {
   };
 }
 
+/**
+ * Starts a job through the queue: sent at once when there is a connection, kept on the
+ * device (with a local id to add readings to) when there is none. A refusal keeps the
+ * server's error for the form.
+ */
+export function useCreateJob() {
+  const qc = useQueryClient();
+  const { user } = useSession();
+  const [pending, setPending] = useState(false);
+  const [error, setError] = useState<unknown>(null);
+  const submit = async (body: CreateJobBody, modelTitle: string | null): Promise<AddJobOutcome | null> => {
+    if (!user) return null;
+    setPending(true);
+    setError(null);
+    try {
+      const outcome = await runner.addJob({ userId: user.id, body, modelTitle });
+      if (outcome.status === 'sent') await storeJob(qc, outcome.job);
+      if (outcome.status === 'rejected') setError(outcome.error);
+      return outcome;
+    } finally {
+      setPending(false);
+    }
+  };
+  return { submit, pending, error };
+}
+
 /** Mount once, inside the session and query providers. */
 export function useReadingQueueSync() {
   const qc = useQueryClient();
@@ -55,13 +93,18 @@ export function useReadingQueueSync() {
   // Only with a token the API accepts: offline, or while the session resumes, readings wait.
   const userId = status === 'signed-in' && connected ? user?.id : undefined;
 
-  useEffect(
-    () =>
-      runner.onSent((item) => {
-        void invalidateJob(qc, item.jobId);
-      }),
-    [qc],
-  );
+  useEffect(() => {
+    const offSent = runner.onSent((item) => {
+      void invalidateJob(qc, item.jobId);
+    });
+    const offJob = runner.onJobSent((_item, job) => {
+      void storeJob(qc, job);
+    });
+    return () => {
+      offSent();
+      offJob();
+    };
+  }, [qc]);
 
   useEffect(() => {
     void runner.load();

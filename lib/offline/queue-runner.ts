@@ -9,20 +9,30 @@
  * whole state back. A reading leaves the queue only after the server has answered
  * 2xx (stored) or a 4xx that resending cannot fix (then it is kept as "rejected").
  */
-import type { ReadingBody, ReadingDto } from '../contracts/jobs';
+import type { CreateJobBody, JobDetailDto, ReadingBody, ReadingDto } from '../contracts/jobs';
 import {
   EMPTY_QUEUE,
   STORAGE_KEY,
   classifyFailure,
   dismissRejected,
+  dismissRejectedJob,
   enqueue,
+  enqueueJob,
+  isLocalJobId,
+  jobsFor,
   newIdempotencyKey,
+  nextLocalJobId,
   parseQueue,
   recordAttempt,
+  recordJobAttempt,
+  rejectJob,
   rejectPending,
   removePending,
+  resolveJob,
   sendable,
+  sentJobId,
   type QueueState,
+  type QueuedJob,
   type QueuedReading,
   type ReadingPreview,
 } from './reading-queue';
@@ -35,6 +45,13 @@ export type SendReading = (item: QueuedReading) => Promise<ReadingDto>;
 export type AddOutcome =
   { status: 'sent'; reading: ReadingDto } | { status: 'queued'; key: string } | { status: 'rejected'; message: string };
 export type NewReading = { userId: number; jobId: number; body: ReadingBody; preview: ReadingPreview };
+export type SendJob = (item: QueuedJob) => Promise<JobDetailDto>;
+export type NewJob = { userId: number; body: CreateJobBody; modelTitle: string | null };
+/** A refused job keeps the server's error (its field messages go back on the form). */
+export type AddJobOutcome =
+  | { status: 'sent'; job: JobDetailDto }
+  | { status: 'queued'; localId: number }
+  | { status: 'rejected'; error: unknown };
 
 export class ReadingQueueRunner {
   private state: QueueState = EMPTY_QUEUE;
@@ -43,12 +60,19 @@ export class ReadingQueueRunner {
   private flushing: Promise<void> | null = null;
   private listeners = new Set<() => void>();
   private sentListeners = new Set<(item: QueuedReading, reading: ReadingDto) => void>();
+  private jobListeners = new Set<(item: QueuedJob, job: JobDetailDto) => void>();
   private loaded: Promise<void> | null = null;
 
   constructor(
     private readonly storage: QueueStorage,
     private readonly send: SendReading,
-    private readonly options: { now?: () => Date; newKey?: () => string; describe?: (err: unknown) => string } = {},
+    private readonly options: {
+      now?: () => Date;
+      newKey?: () => string;
+      describe?: (err: unknown) => string;
+      /** Sends a job started on this device (without it, queued jobs wait). */
+      sendJob?: SendJob;
+    } = {},
   ) {}
 
   subscribe = (fn: () => void) => {
@@ -73,28 +97,65 @@ export class ReadingQueueRunner {
     return this.loaded;
   };
 
-  /** Queue a reading (stamped with its time and key) and try to send it at once. */
+  /**
+   * Queue a reading (stamped with its time and key) and try to send it at once. A
+   * reading for a job still queued waits behind it; one for a job sent meanwhile (the
+   * screen still knew it by its local id) goes to the job's server id.
+   */
   add = async (reading: NewReading): Promise<AddOutcome> => {
     await this.load();
     const now = (this.options.now ?? (() => new Date()))();
-    const item: QueuedReading = {
-      ...reading,
-      key: (this.options.newKey ?? newIdempotencyKey)(),
-      body: { ...reading.body, takenAt: reading.body.takenAt ?? now.toISOString() },
-      queuedAt: now.toISOString(),
-      attempts: 0,
-      lastError: null,
-    };
-    await this.change((s) => enqueue(s, item));
+    const key = (this.options.newKey ?? newIdempotencyKey)();
+    const queued = await this.change((s) =>
+      enqueue(s, {
+        ...reading,
+        jobId: isLocalJobId(reading.jobId)
+          ? (sentJobId(s, reading.userId, reading.jobId) ?? reading.jobId)
+          : reading.jobId,
+        key,
+        body: { ...reading.body, takenAt: reading.body.takenAt ?? now.toISOString() },
+        queuedAt: now.toISOString(),
+        attempts: 0,
+        lastError: null,
+      }),
+    );
+    const item = queued.pending.find((p) => p.key === key)!;
+    if (isLocalJobId(item.jobId)) return { status: 'queued', key };
     return this.attempt(item);
   };
 
-  /** Send everything this account has waiting, oldest first; stops at the first network fault. */
+  /**
+   * Queue a job started on this device and try to send it at once. It gets a local id
+   * (negative) before anything is sent, so readings can be added to it offline.
+   */
+  addJob = async (job: NewJob): Promise<AddJobOutcome> => {
+    await this.load();
+    const now = (this.options.now ?? (() => new Date()))();
+    const key = (this.options.newKey ?? newIdempotencyKey)();
+    const queued = await this.change((s) =>
+      enqueueJob(s, {
+        ...job,
+        key,
+        localId: nextLocalJobId(s),
+        queuedAt: now.toISOString(),
+        attempts: 0,
+        lastError: null,
+      }),
+    );
+    return this.attemptJob(queued.jobs.find((j) => j.key === key)!);
+  };
+
+  /** Send everything this account has waiting, oldest first (jobs before readings); stops at the first network fault. */
   flush = (userId: number): Promise<void> => {
     this.flushing ??= (async () => {
       try {
         await this.load();
         await this.change((s) => s);
+        for (const job of jobsFor(this.state, userId)) {
+          if (this.inFlight.has(job.key) || !this.state.jobs.some((j) => j.key === job.key)) continue;
+          const outcome = await this.attemptJob(job);
+          if (outcome.status === 'queued') return;
+        }
         for (const item of sendable(this.state, userId)) {
           // Sent meanwhile (by add(), or by another tab): nothing to do.
           if (this.inFlight.has(item.key) || !this.state.pending.some((p) => p.key === item.key)) continue;
@@ -108,26 +169,77 @@ export class ReadingQueueRunner {
     return this.flushing;
   };
 
-  dismiss = (key: string) => this.change((s) => dismissRejected(s, key)).then(() => undefined);
+  dismiss = (key: string) => this.change((s) => dismissRejectedJob(dismissRejected(s, key), key)).then(() => undefined);
+
+  /** Called after the server has stored a job queued on this device. */
+  onJobSent(fn: (item: QueuedJob, job: JobDetailDto) => void) {
+    this.jobListeners.add(fn);
+    return () => {
+      this.jobListeners.delete(fn);
+    };
+  }
+
+  private async attemptJob(item: QueuedJob): Promise<AddJobOutcome> {
+    const sendJob = this.options.sendJob;
+    if (!sendJob) return { status: 'queued', localId: item.localId };
+    const result = await this.tryOnce(item.key, () => sendJob(item), {
+      sent: (job) => (s) => resolveJob(s, item.key, job.id),
+      retry: (message) => (s) => recordJobAttempt(s, item.key, message),
+      refused: (status, message) => (s) => rejectJob(s, item.key, status, message),
+    });
+    if (result.status === 'sent') this.jobListeners.forEach((fn) => fn(item, result.value));
+    return result.status === 'sent'
+      ? { status: 'sent', job: result.value }
+      : result.status === 'refused'
+        ? { status: 'rejected', error: result.error }
+        : { status: 'queued', localId: item.localId };
+  }
 
   private async attempt(item: QueuedReading): Promise<AddOutcome> {
-    if (this.inFlight.has(item.key)) return { status: 'queued', key: item.key };
-    this.inFlight.add(item.key);
+    const result = await this.tryOnce(item.key, () => this.send(item), {
+      sent: () => (s) => removePending(s, item.key),
+      retry: (message) => (s) => recordAttempt(s, item.key, message),
+      refused: (status, message) => (s) => rejectPending(s, item.key, status, message),
+    });
+    if (result.status === 'sent') this.sentListeners.forEach((fn) => fn(item, result.value));
+    return result.status === 'sent'
+      ? { status: 'sent', reading: result.value }
+      : result.status === 'refused'
+        ? { status: 'rejected', message: result.message }
+        : { status: 'queued', key: item.key };
+  }
+
+  /**
+   * One send of one queued item (a job or a reading), never two at once for a key, and
+   * the queue change for what came of it: sent, worth retrying, or refused for good.
+   */
+  private async tryOnce<T>(
+    key: string,
+    send: () => Promise<T>,
+    on: {
+      sent: (value: T) => (s: QueueState) => QueueState;
+      retry: (message: string) => (s: QueueState) => QueueState;
+      refused: (status: number, message: string) => (s: QueueState) => QueueState;
+    },
+  ): Promise<
+    { status: 'sent'; value: T } | { status: 'busy' | 'retry' } | { status: 'refused'; error: unknown; message: string }
+  > {
+    if (this.inFlight.has(key)) return { status: 'busy' };
+    this.inFlight.add(key);
     try {
-      const reading = await this.send(item);
-      await this.change((s) => removePending(s, item.key));
-      this.sentListeners.forEach((fn) => fn(item, reading));
-      return { status: 'sent', reading };
+      const value = await send();
+      await this.change(on.sent(value));
+      return { status: 'sent', value };
     } catch (err) {
       const message = this.options.describe?.(err) ?? (err instanceof Error ? err.message : String(err));
       if (classifyFailure(err) === 'retry') {
-        await this.change((s) => recordAttempt(s, item.key, message));
-        return { status: 'queued', key: item.key };
+        await this.change(on.retry(message));
+        return { status: 'retry' };
       }
-      await this.change((s) => rejectPending(s, item.key, (err as { status: number }).status, message));
-      return { status: 'rejected', message };
+      await this.change(on.refused((err as { status: number }).status, message));
+      return { status: 'refused', error: err, message };
     } finally {
-      this.inFlight.delete(item.key);
+      this.inFlight.delete(key);
     }
   }
 

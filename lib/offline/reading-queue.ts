@@ -5,9 +5,14 @@
  *
  * A reading is keyed once, when it is queued; every resend uses the same key, so a
  * reading the server stored but whose answer was lost lands exactly once.
+ *
+ * A job started with no connection is queued the same way. Until the server has it,
+ * it goes by a local id (a negative number, never a server id), and readings added to
+ * it wait behind it; once it is stored, its readings move to the server's id and the
+ * local id is remembered, so a screen still showing it can follow.
  */
 import { ApiError } from '../api/client';
-import { IDEMPOTENCY_KEY, type ReadingBody } from '../contracts/jobs';
+import { IDEMPOTENCY_KEY, type CreateJobBody, type JobSummaryDto, type ReadingBody } from '../contracts/jobs';
 import type { Verdict } from '../verdict';
 
 /** What the job sheet shows for a reading that has not reached the server yet. */
@@ -36,9 +41,36 @@ export type QueuedReading = {
 /** Refused by the server (4xx): out of the queue, kept here until the technician has seen it. */
 export type RejectedReading = QueuedReading & { status: number; message: string };
 
-export type QueueState = { pending: QueuedReading[]; rejected: RejectedReading[] };
+/** A job started on this device that the server has not stored yet. */
+export type QueuedJob = {
+  key: string;
+  userId: number;
+  /** Negative: what the device calls it (its sheet's address, its readings' job) until it is sent. */
+  localId: number;
+  body: CreateJobBody;
+  /** The library model's title when the job was started, for the sheet and the pickers. */
+  modelTitle: string | null;
+  queuedAt: string;
+  attempts: number;
+  lastError: string | null;
+};
 
-export const EMPTY_QUEUE: QueueState = { pending: [], rejected: [] };
+export type RejectedJob = QueuedJob & { status: number; message: string };
+
+/** A queued job the server stored: its local id now means this server id. */
+export type SentJob = { localId: number; jobId: number; userId: number };
+
+export type QueueState = {
+  pending: QueuedReading[];
+  rejected: RejectedReading[];
+  jobs: QueuedJob[];
+  rejectedJobs: RejectedJob[];
+  sentJobs: SentJob[];
+};
+
+export const EMPTY_QUEUE: QueueState = { pending: [], rejected: [], jobs: [], rejectedJobs: [], sentJobs: [] };
+/** How many sent jobs' local ids are remembered (a screen opened on one follows it to its server id). */
+export const SENT_JOBS_KEPT = 50;
 export const STORAGE_KEY = 'specbench.reading-queue.v1';
 
 type RandomSource =
@@ -70,6 +102,89 @@ export function classifyFailure(err: unknown): FailureAction {
   return err.status >= 400 ? 'drop' : 'retry';
 }
 
+/** A job's local id: negative, and never one this device has used for another job it still remembers. */
+export function nextLocalJobId(state: QueueState): number {
+  const used = [...state.jobs, ...state.rejectedJobs, ...state.sentJobs].map((j) => j.localId);
+  return Math.min(0, ...used) - 1;
+}
+
+export const isLocalJobId = (id: number) => Number.isInteger(id) && id < 0;
+
+export function enqueueJob(state: QueueState, item: QueuedJob): QueueState {
+  if (state.jobs.some((j) => j.key === item.key)) return state;
+  return { ...state, jobs: [...state.jobs, item] };
+}
+
+/** The server stored the queued job: its readings move to its id; the local id is remembered. */
+export function resolveJob(state: QueueState, key: string, jobId: number): QueueState {
+  const job = state.jobs.find((j) => j.key === key);
+  if (!job) return state;
+  const move = <T extends { jobId: number; userId: number }>(r: T): T =>
+    r.jobId === job.localId && r.userId === job.userId ? { ...r, jobId } : r;
+  return {
+    ...state,
+    jobs: state.jobs.filter((j) => j.key !== key),
+    pending: state.pending.map(move),
+    rejected: state.rejected.map(move),
+    sentJobs: [...state.sentJobs, { localId: job.localId, jobId, userId: job.userId }].slice(-SENT_JOBS_KEPT),
+  };
+}
+
+/** The server refused the job (4xx): it and the readings waiting on it are kept as refused, with the reason. */
+export function rejectJob(state: QueueState, key: string, status: number, message: string): QueueState {
+  const job = state.jobs.find((j) => j.key === key);
+  if (!job) return state;
+  const mine = (r: QueuedReading) => r.jobId === job.localId && r.userId === job.userId;
+  const why = `Its job was not saved: ${message}`;
+  return {
+    ...state,
+    jobs: state.jobs.filter((j) => j.key !== key),
+    rejectedJobs: [...state.rejectedJobs, { ...job, status, message }],
+    pending: state.pending.filter((r) => !mine(r)),
+    rejected: [...state.rejected, ...state.pending.filter(mine).map((r) => ({ ...r, status, message: why }))],
+  };
+}
+
+export function recordJobAttempt(state: QueueState, key: string, error: string): QueueState {
+  return {
+    ...state,
+    jobs: state.jobs.map((j) => (j.key === key ? { ...j, attempts: j.attempts + 1, lastError: error } : j)),
+  };
+}
+
+export function dismissRejectedJob(state: QueueState, key: string): QueueState {
+  return { ...state, rejectedJobs: state.rejectedJobs.filter((j) => j.key !== key) };
+}
+
+/** The jobs one account has waiting, oldest first. */
+export function jobsFor(state: QueueState, userId: number): QueuedJob[] {
+  return state.jobs.filter((j) => j.userId === userId);
+}
+
+/** The server id a sent job's local id now stands for, if this device remembers it. */
+export function sentJobId(state: QueueState, userId: number, localId: number): number | null {
+  return state.sentJobs.find((j) => j.userId === userId && j.localId === localId)?.jobId ?? null;
+}
+
+/** A queued job as the pickers and lists show jobs: open, no readings stored yet. */
+export function queuedJobSummary(job: QueuedJob, ownerName: string): JobSummaryDto {
+  return {
+    id: job.localId,
+    ownerId: job.userId,
+    ownerName,
+    modelId: job.body.modelId ?? null,
+    modelTitle: job.modelTitle,
+    machineLabel: job.body.machineLabel ?? '',
+    machineId: job.body.machineId ?? '',
+    customerRef: job.body.customerRef ?? '',
+    notes: job.body.notes || null,
+    status: 'open',
+    counts: { pass: 0, marginal: 0, fail: 0 },
+    createdAt: job.queuedAt,
+    updatedAt: job.queuedAt,
+  };
+}
+
 export function enqueue(state: QueueState, item: QueuedReading): QueueState {
   if (state.pending.some((p) => p.key === item.key)) return state;
   return { ...state, pending: [...state.pending, item] };
@@ -90,6 +205,7 @@ export function rejectPending(state: QueueState, key: string, status: number, me
   const item = state.pending.find((p) => p.key === key);
   if (!item) return state;
   return {
+    ...state,
     pending: state.pending.filter((p) => p.key !== key),
     rejected: [...state.rejected, { ...item, status, message }],
   };
@@ -104,9 +220,14 @@ export function pendingFor(state: QueueState, userId: number, jobId: number): Qu
   return state.pending.filter((p) => p.userId === userId && p.jobId === jobId);
 }
 
-/** The readings one account may send now, oldest first. */
-export function sendable(state: QueueState, userId: number): QueuedReading[] {
+/** Everything one account has waiting (readings, also those behind a queued job), oldest first. */
+export function waitingFor(state: QueueState, userId: number): QueuedReading[] {
   return state.pending.filter((p) => p.userId === userId);
+}
+
+/** The readings one account may send now, oldest first: not those whose job is still queued. */
+export function sendable(state: QueueState, userId: number): QueuedReading[] {
+  return waitingFor(state, userId).filter((p) => !isLocalJobId(p.jobId));
 }
 
 /** Stored text → state; anything unreadable is treated as an empty queue rather than crashing the app. */
@@ -114,25 +235,34 @@ export function parseQueue(text: string | null): QueueState {
   if (!text) return EMPTY_QUEUE;
   try {
     const raw = JSON.parse(text) as Partial<QueueState>;
-    const ok = (x: unknown): x is QueuedReading =>
-      !!x &&
-      typeof x === 'object' &&
-      typeof (x as QueuedReading).key === 'string' &&
-      typeof (x as QueuedReading).jobId === 'number' &&
-      typeof (x as QueuedReading).body === 'object';
+    const keyed = (x: unknown): x is { key: string } =>
+      !!x && typeof x === 'object' && typeof (x as { key?: unknown }).key === 'string';
+    const reading = (x: unknown): x is QueuedReading =>
+      keyed(x) && typeof (x as QueuedReading).jobId === 'number' && typeof (x as QueuedReading).body === 'object';
+    const job = (x: unknown): x is QueuedJob =>
+      keyed(x) && isLocalJobId((x as QueuedJob).localId) && typeof (x as QueuedJob).body === 'object';
+    const sent = (x: unknown): x is SentJob =>
+      !!x && typeof x === 'object' && isLocalJobId((x as SentJob).localId) && typeof (x as SentJob).jobId === 'number';
+    const list = <T>(v: unknown, ok: (x: unknown) => x is T): T[] => (Array.isArray(v) ? v.filter(ok) : []);
     return {
-      pending: Array.isArray(raw.pending) ? raw.pending.filter(ok) : [],
-      rejected: Array.isArray(raw.rejected) ? (raw.rejected.filter(ok) as RejectedReading[]) : [],
+      pending: list(raw.pending, reading),
+      rejected: list(raw.rejected, reading) as RejectedReading[],
+      jobs: list(raw.jobs, job),
+      rejectedJobs: list(raw.rejectedJobs, job) as RejectedJob[],
+      sentJobs: list(raw.sentJobs, sent),
     };
   } catch {
     return EMPTY_QUEUE;
   }
 }
 
-/** "2 readings waiting to be sent — they will go when the connection returns". */
-export function waitingMessage(count: number): string {
-  if (count === 0) return '';
-  return count === 1
-    ? '1 reading waiting to be sent — it will go when the connection returns'
-    : `${count} readings waiting to be sent — they will go when the connection returns`;
+/** "1 job and 2 readings waiting to be sent — they will go when the connection returns". */
+export function waitingMessage(readings: number, jobs = 0): string {
+  if (readings + jobs === 0) return '';
+  const parts = [
+    jobs ? (jobs === 1 ? '1 job' : `${jobs} jobs`) : '',
+    readings ? (readings === 1 ? '1 reading' : `${readings} readings`) : '',
+  ].filter(Boolean);
+  const it = readings + jobs === 1 ? 'it' : 'they';
+  return `${parts.join(' and ')} waiting to be sent — ${it} will go when the connection returns`;
 }

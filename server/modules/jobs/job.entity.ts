@@ -14,6 +14,7 @@ import type { VehicleModel } from '../library/vehicle-model.entity';
 /** One customer's machine on one job: the readings taken belong to it. */
 @Entity({ name: 'jobs' })
 @Index('ix_jobs_owner_created', ['ownerId', 'createdAt'])
+@Index('uq_jobs_owner_key', ['ownerId', 'idempotencyKey'], { unique: true })
 export class Job {
   @PrimaryGeneratedColumn({ type: 'int' })
   id: number;
@@ -50,6 +51,14 @@ export class Job {
 
   @Column({ type: 'enum', enum: ['open', 'closed'], default: 'open' })
   status: 'open' | 'closed';
+
+  /** The Idempotency-Key it was created with (a job started offline and resent), if any. */
+  @Column({ name: 'idempotency_key', type: 'varchar', length: 80, nullable: true })
+  idempotencyKey: string | null;
+
+  /** requestHash() of the create body sent with that key. */
+  @Column({ name: 'request_hash', type: 'char', length: 64, nullable: true })
+  requestHash: string | null;
 
   @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
   createdAt: Date;

@@ -32,22 +32,57 @@ async function summaries(jobs: Job[]): Promise<Map<number, { summary: JobSummary
   );
 }
 
-export async function createJob(user: SignedInUser, body: CreateJobBody): Promise<JobDetailDto> {
+/** A job already stored under this key answers again, but only for the same request body. */
+async function replayJob(user: SignedInUser, existing: Job, hash: string): Promise<CreatedJob> {
+  if (existing.requestHash !== null && existing.requestHash !== hash)
+    throw new AppError(
+      422,
+      'idempotency_key_reused',
+      'This Idempotency-Key was already used for a different job. Send a new key with a new job.',
+    );
+  return { job: await getJob(user, existing.id), created: false };
+}
+
+export type CreatedJob = { job: JobDetailDto; created: boolean };
+
+/**
+ * `request.key`: the Idempotency-Key a job started offline is resent with; `hash`:
+ * requestHash() of the body as sent. A resend answers with the job stored the first time.
+ */
+export async function createJob(
+  user: SignedInUser,
+  body: CreateJobBody,
+  request: { key?: string; hash?: string } = {},
+): Promise<CreatedJob> {
+  const key = request.key ?? null;
+  if (key !== null) {
+    const existing = await JobRepository.findOneBy({ ownerId: user.id, idempotencyKey: key });
+    if (existing) return replayJob(user, existing, request.hash ?? '');
+  }
   if (body.modelId !== undefined && !(await ModelRepository.existsById(body.modelId))) {
     throw AppError.unprocessable(`No model with id ${body.modelId} in the library.`, [
       { path: 'modelId', message: 'Unknown model' },
     ]);
   }
-  const job = await JobRepository.save({
-    ownerId: user.id,
-    modelId: body.modelId ?? null,
-    machineLabel: body.machineLabel ?? '',
-    machineId: body.machineId ?? '',
-    customerRef: body.customerRef ?? '',
-    notes: body.notes || null,
-    status: 'open',
-  });
-  return getJob(user, job.id);
+  try {
+    const job = await JobRepository.save({
+      ownerId: user.id,
+      modelId: body.modelId ?? null,
+      machineLabel: body.machineLabel ?? '',
+      machineId: body.machineId ?? '',
+      customerRef: body.customerRef ?? '',
+      notes: body.notes || null,
+      status: 'open',
+      idempotencyKey: key,
+      requestHash: key === null ? null : (request.hash ?? null),
+    });
+    return { job: await getJob(user, job.id), created: true };
+  } catch (err) {
+    // Two copies of the same job raced: the other one won; answer with it.
+    if (key === null || (err as { driverError?: { code?: string } }).driverError?.code !== 'ER_DUP_ENTRY') throw err;
+    const existing = await JobRepository.findOneByOrFail({ ownerId: user.id, idempotencyKey: key });
+    return replayJob(user, existing, request.hash ?? '');
+  }
 }
 
 export async function listJobs(
