@@ -85,9 +85,9 @@ it('runs the demo no-spark plan on a job at 390×844 to the pickup coil finding,
       await expectText(run.getByTestId('probe-pin-1'), /Pin 1: Supply \(\+\) \(black\/yellow wire\)/);
       await screenshot(page, 'plan-run-connector-phone');
       await measure(page, 'Supply voltage at the coil', '12.4');
-      await measure(page, 'Coil primary winding', '2.4', { 'Test leads shorted (subtracted)': '0.2' });
+      await measure(page, 'Coil primary winding', '2.4', { 'Test leads, probes shorted': '0.2' });
       await measure(page, 'Coil secondary winding through the resistor cap', '22.5', {
-        'In-line resistor cap (subtracted)': '5',
+        'Series resistor (cap or suppressor)': '5',
       });
     },
   );

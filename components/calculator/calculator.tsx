@@ -1,7 +1,8 @@
+import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { calculate, correctionsFor, countHint, LEAD_UNIT, type CalculatorForm } from '@/lib/calculator/form';
 import { unitsOfKind, type CanonicalUnit, type QuantityKind } from '@/lib/units';
-import { modeForKind, modeInstruction, type SpecLimits } from '@/lib/verdict';
+import { modeForKind, modeInstruction, type SpecLimits, type VerdictInput, type VerdictResult } from '@/lib/verdict';
 import { Spacing } from '@/lib/theme';
 import type { AddToJobTarget } from '@/lib/hooks/use-add-to-job';
 import { AddToJob } from '../jobs/add-to-job';
@@ -14,8 +15,18 @@ import { useCalculatorForm } from './use-calculator-form';
 import { VerdictPanel } from './verdict-panel';
 import { VerdictSummary } from './verdict-summary';
 
-/** `job`: where "Add to job" sends the reading (the spec, a job and re-take from the screen's address). */
-export type CalculatorProps = { spec: SpecLimits; kind: QuantityKind; testID?: string; job?: AddToJobTarget };
+export type CalculatorProps = {
+  spec: SpecLimits;
+  kind: QuantityKind;
+  testID?: string;
+  /** Where "Add to job" sends the reading (the spec, a job and re-take from the screen's address). */
+  job?: AddToJobTarget;
+  /** Instead of "Add to job": what the screen does with the reading (a test plan's step judges it). */
+  action?: (reading: { input: VerdictInput | null; result: VerdictResult | null }) => ReactNode;
+  /** The corrections shown from the start (a step that says to subtract the leads or the cap). */
+  correctionsOpen?: boolean;
+  heading?: string;
+};
 
 const RESISTANCE_UNITS = unitsOfKind('resistance');
 
@@ -24,7 +35,15 @@ const RESISTANCE_UNITS = unitsOfKind('resistance');
  * the first instruction; the verdict sits right under the reading (and stays in view while the
  * optional corrections, collapsed until asked for, are typed).
  */
-export function Calculator({ spec, kind, testID = 'calculator', job }: CalculatorProps) {
+export function Calculator({
+  spec,
+  kind,
+  testID = 'calculator',
+  job,
+  action,
+  correctionsOpen,
+  heading = 'Check a reading',
+}: CalculatorProps) {
   const { form, set, fromMemory, clearLead, clearMeter } = useCalculatorForm(kind, spec.unit);
   const units = unitsOfKind(kind);
   const allowed = correctionsFor(kind, spec.material);
@@ -58,7 +77,7 @@ export function Calculator({ spec, kind, testID = 'calculator', job }: Calculato
 
   return (
     <Card testID={testID}>
-      <Text variant="heading">Check a reading</Text>
+      <Text variant="heading">{heading}</Text>
       <Text variant="label" color="primary" testID="mode-instruction">
         {modeInstruction(mode, spec.engineRpm)}
       </Text>
@@ -73,7 +92,7 @@ export function Calculator({ spec, kind, testID = 'calculator', job }: Calculato
         <Text color="textMuted">Type the meter reading to see the verdict.</Text>
       ) : null}
       <MemoryChips chips={chips} />
-      <OptionalFields what={optional}>
+      <OptionalFields what={optional} startOpen={correctionsOpen}>
         {allowed.leads &&
           field(
             'lead',
@@ -106,7 +125,11 @@ export function Calculator({ spec, kind, testID = 'calculator', job }: Calculato
         {field('meterCountValue', 'One count is worth', 'meterUnit', countHint(form.meterUnit))}
       </OptionalFields>
       {result ? <VerdictPanel result={result} /> : null}
-      <AddToJob draft={input && { kind: 'measured', input }} verdict={result?.verdict ?? null} {...job} />
+      {action ? (
+        action({ input, result })
+      ) : (
+        <AddToJob draft={input && { kind: 'measured', input }} verdict={result?.verdict ?? null} {...job} />
+      )}
     </Card>
   );
 }

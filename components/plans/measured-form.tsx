@@ -1,116 +1,103 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { RunStepDto, StepReading } from '@/lib/contracts/plans';
+import type { RunStepDto, StepReading, TypedLimits } from '@/lib/contracts/plans';
 import { parseDecimal } from '@/lib/calculator/form';
-import { isCanonicalUnit, unitKind, unitsOfKind, type CanonicalUnit } from '@/lib/units';
+import { stepLimits, planLimits, toStepReading, typedSpec } from '@/lib/plans/step-reading';
+import { QUANTITY_KINDS } from '@/lib/contracts/enums';
+import { isCanonicalUnit, unitKind, unitsOfKind, type CanonicalUnit, type QuantityKind } from '@/lib/units';
 import { Spacing } from '@/lib/theme';
+import { Calculator } from '../calculator/calculator';
 import { QuantityField } from '../calculator/quantity-field';
+import { UnitPicker } from '../calculator/unit-picker';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
 
 export type MeasuredFormProps = { step: RunStepDto; pending: boolean; onSubmit: (reading: StepReading) => void };
 
-type Typed = { reading: string; lead: string; series: string; min: string; max: string };
-
-/** The meter reading for a measured step, pre-set to the spec's unit; typed limits when the model has no spec. */
+/**
+ * A measured step: the app's own calculator (the verdict as you type, leads, resistor cap,
+ * temperature and meter accuracy, the remembered test leads), set to the library spec on
+ * this machine or the plan's limits; when there are neither, the manual's limits typed
+ * first. "Judge this step" sends what the calculator holds; the server judges it again.
+ */
 export function MeasuredForm({ step, pending, onSubmit }: MeasuredFormProps) {
-  const fallback =
-    step.check.kind === 'limits' ? step.check.limits : step.check.kind === 'spec' ? step.check.limits : undefined;
-  const specUnit = step.spec?.unit ?? fallback?.unit ?? 'V';
-  const initial: CanonicalUnit = isCanonicalUnit(specUnit) ? specUnit : 'V';
-  const [unit, setUnit] = useState<CanonicalUnit>(initial);
-  const [f, setF] = useState<Typed>({ reading: '', lead: '', series: '', min: '', max: '' });
-  const [error, setError] = useState<string | null>(null);
-  const kind = unitKind(initial);
-  const needsLimits = !step.spec && !fallback;
-  const set = (patch: Partial<Typed>) => setF({ ...f, ...patch });
-
-  const submit = () => {
-    const value = parseDecimal(f.reading);
-    if (value === undefined) return setError('Type the meter reading.');
-    const reading: StepReading = { value, unit };
-    const lead = parseDecimal(f.lead);
-    const series = parseDecimal(f.series);
-    if (lead !== undefined) reading.leadResistance = { value: lead, unit: 'Ω' };
-    if (series !== undefined) reading.seriesResistance = { value: series, unit: 'kΩ' };
-    if (needsLimits) {
-      const min = parseDecimal(f.min);
-      const max = parseDecimal(f.max);
-      if (min === undefined && max === undefined) return setError('Type at least one limit from the manual.');
-      reading.limits = { min, max, unit };
-    }
-    setError(null);
-    onSubmit(reading);
-  };
+  const known = stepLimits(step);
+  const [typed, setTyped] = useState({ min: '', max: '' });
+  const [unit, setUnit] = useState<CanonicalUnit>(guessUnit(step));
+  const byHand: TypedLimits | undefined = known
+    ? undefined
+    : { min: parseDecimal(typed.min), max: parseDecimal(typed.max), unit };
+  const typedOk =
+    byHand !== undefined &&
+    (byHand.min !== undefined || byHand.max !== undefined) &&
+    !Number.isNaN(byHand.min) &&
+    !Number.isNaN(byHand.max);
+  const limits = known ?? (typedOk ? { spec: typedSpec(byHand) } : null);
+  const kind: QuantityKind = known?.kind ?? unitKind(unit);
 
   return (
     <View style={styles.form} testID="measured-form">
       <Text variant="label" testID="step-limits">
-        {step.spec
+        {known?.from === 'library' && step.spec
           ? `Limits: ${step.spec.display}`
-          : fallback
-            ? `Limits (plan): ${fallback.min ?? '–'} … ${fallback.max ?? '–'} ${fallback.unit}`
+          : known?.from === 'plan'
+            ? `Limits (plan): ${planLimits(step)?.min ?? '–'} … ${planLimits(step)?.max ?? '–'} ${planLimits(step)?.unit}`
             : 'No spec for this machine: type the limits from the manual.'}
       </Text>
-      {needsLimits ? (
+      {known ? null : (
         <>
+          <UnitPicker label="Spec unit" units={ALL_UNITS} value={unit} onChange={setUnit} />
           <QuantityField
             label="Minimum"
-            value={f.min}
-            onChangeText={(v) => set({ min: v })}
+            value={typed.min}
+            onChangeText={(v) => setTyped({ ...typed, min: v })}
+            error={Number.isNaN(byHand?.min) ? NOT_A_NUMBER : undefined}
             unit={unit}
             testID="limit-min"
           />
           <QuantityField
             label="Maximum"
-            value={f.max}
-            onChangeText={(v) => set({ max: v })}
+            value={typed.max}
+            onChangeText={(v) => setTyped({ ...typed, max: v })}
+            error={Number.isNaN(byHand?.max) ? NOT_A_NUMBER : undefined}
             unit={unit}
             testID="limit-max"
           />
         </>
-      ) : null}
-      <QuantityField
-        label="Meter reading"
-        value={f.reading}
-        onChangeText={(v) => set({ reading: v })}
-        unit={unit}
-        units={unitsOfKind(kind)}
-        onChangeUnit={setUnit}
-        testID="step-reading"
-      />
-      {kind === 'resistance' ? (
-        <>
-          <QuantityField
-            label="Test leads shorted (subtracted)"
-            value={f.lead}
-            onChangeText={(v) => set({ lead: v })}
-            unit="Ω"
-            testID="step-lead"
-          />
-          <QuantityField
-            label="In-line resistor cap (subtracted)"
-            value={f.series}
-            onChangeText={(v) => set({ series: v })}
-            unit="kΩ"
-            hint="Leave empty when nothing is in series."
-            testID="step-series"
-          />
-        </>
-      ) : null}
-      {error ? (
-        <Text color="fail" accessibilityRole="alert">
-          {error}
-        </Text>
-      ) : null}
-      <Button
-        label={pending ? 'Judging…' : 'Judge this reading'}
-        onPress={submit}
-        disabled={pending}
-        testID="step-submit"
-      />
+      )}
+      {limits ? (
+        <Calculator
+          key={`${step.id}-${limits.spec.unit}`}
+          spec={limits.spec}
+          kind={kind}
+          heading="Reading for this step"
+          testID="step-calculator"
+          correctionsOpen={kind === 'resistance'}
+          action={({ input, result }) => (
+            <Button
+              label={
+                pending ? 'Judging…' : result ? `Judge this step (${result.verdict.toUpperCase()})` : 'Judge this step'
+              }
+              onPress={() => input && onSubmit(toStepReading(input, byHand))}
+              disabled={pending || !input || !result}
+              testID="step-submit"
+            />
+          )}
+        />
+      ) : (
+        <Text color="textMuted">Type at least one limit from the manual, then the reading.</Text>
+      )}
     </View>
   );
+}
+
+const NOT_A_NUMBER = 'Type a number, e.g. 0.4 or 12.5';
+const ALL_UNITS = QUANTITY_KINDS.flatMap((k) => unitsOfKind(k));
+
+/** The unit a step with no limits most likely reads in: the plan's, else volts. */
+function guessUnit(step: RunStepDto): CanonicalUnit {
+  const u = step.spec?.unit ?? planLimits(step)?.unit;
+  return u && isCanonicalUnit(u) ? u : 'V';
 }
 
 const styles = StyleSheet.create({ form: { gap: Spacing.md } });

@@ -5,7 +5,8 @@
  */
 import { z } from 'zod';
 import { CAUTION_CATEGORIES } from '../specs/classify';
-import { DIODE_STATES, type FieldError, type MeasurementMode } from './enums';
+import type { QuantityKind } from '../units';
+import { DIODE_STATES, type FieldError, type Material, type MeasurementMode } from './enums';
 import type { ReadingDto } from './jobs';
 import { safeText } from './text';
 
@@ -238,14 +239,19 @@ export const RunResultBody = z
 export type RunResultBody = z.infer<typeof RunResultBody>;
 
 export type SpecForStepDto = {
-  /** How the meter is set (null: decided from the parameter and unit), and the engine speed of the check. */
+  /** How the meter is set (decided from the parameter and unit when the spec does not say), and the engine speed of the check. */
   mode: MeasurementMode | null;
   engineRpm: number | null;
   id: number;
+  quantityKind: QuantityKind;
   min: number | null;
   nominal: number | null;
   max: number | null;
   unit: string;
+  /** What the run's calculator needs to judge as the server does: temperature correction and the near-limit band. */
+  refTempC: number | null;
+  material: Material;
+  nearLimit: number | null;
   display: string;
   testPoints: string | null;
   conditions: string | null;

@@ -6,7 +6,8 @@
 import type { EntityManager } from 'typeorm';
 import type { ConnectorDto, PlanStep, RunStepDto, SpecForStepDto } from '@/lib/contracts/plans';
 import { findComponent, findSpec } from '@/lib/plans/applicability';
-import { formatRange, type CanonicalUnit } from '@/lib/units';
+import { defaultMode } from '@/lib/specs/classify';
+import { formatRange, unitKind, type CanonicalUnit } from '@/lib/units';
 import type { Component } from '../library/component.entity';
 import type { Spec } from '../specs/spec.entity';
 import { connectorsOf, modelParts } from './plan.repository';
@@ -31,15 +32,20 @@ export function specOfStep(step: PlanStep, parts: JobModelParts): { spec: Spec; 
   return component && spec ? { spec, component } : null;
 }
 
+/** The spec as the run's calculator takes it: the same limits, mode and band the server judges with. */
 function specDto(s: Spec): SpecForStepDto {
   return {
     id: s.id,
-    mode: s.mode ?? null,
+    mode: s.mode ?? defaultMode(s.parameter, unitKind(s.unit as CanonicalUnit)),
     engineRpm: s.engineRpm ?? null,
+    quantityKind: s.quantityKind,
     min: s.min,
     nominal: s.nominal,
     max: s.max,
     unit: s.unit,
+    refTempC: s.refTempC,
+    material: s.material,
+    nearLimit: s.nearLimit,
     display: formatRange(s.min, s.nominal, s.max, s.unit as CanonicalUnit),
     testPoints: s.testPoints,
     conditions: s.conditions,
