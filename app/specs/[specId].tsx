@@ -10,6 +10,7 @@ import { RevisionHistory } from '@/components/history/revision-history';
 import { EditSpecButton } from '@/components/spec-editor/edit-spec-button';
 import { SafetyNotes } from '@/components/library/safety-notes';
 import { cautionCategories, defaultMode, isRestVoltage } from '@/lib/specs/classify';
+import { limitsOf } from '@/lib/specs/limits';
 import { SpecValues } from '@/components/library/spec-values';
 import { FormAlert } from '@/components/ui/form-alert';
 import { LinkRow } from '@/components/ui/link-row';
@@ -56,22 +57,7 @@ export default function SpecCardScreen() {
   const check = (
     <>
       <SafetyNotes categories={cautionCategories(s.component.name, s.parameter)} />
-      <Calculator
-        kind={s.quantityKind}
-        spec={{
-          min: s.min,
-          nominal: s.nominal,
-          max: s.max,
-          unit: s.unit,
-          refTempC: s.refTempC,
-          material: s.material,
-          // A spec without a stated mode is read in the one its parameter's words imply.
-          mode,
-          nearLimit: s.nearLimit,
-          engineRpm: s.engineRpm,
-        }}
-        job={target}
-      />
+      <Calculator kind={s.quantityKind} spec={limitsOf({ ...s, mode })} job={target} />
       {beepOnly ? (
         <QualitativeCheck
           kind={beepOnly}

@@ -6,6 +6,7 @@
  */
 import type { RunStepDto, StepReading, TypedLimits } from '../contracts/plans';
 import { isCanonicalUnit, unitKind, type QuantityKind } from '../units';
+import { limitsOf } from '../specs/limits';
 import type { SpecLimits, VerdictInput } from '../verdict';
 
 export type StepLimits = { spec: SpecLimits; kind: QuantityKind; from: 'library' | 'plan' };
@@ -23,17 +24,7 @@ export function stepLimits(step: RunStepDto): StepLimits | null {
     return {
       from: 'library',
       kind: s.quantityKind,
-      spec: {
-        min: s.min,
-        nominal: s.nominal,
-        max: s.max,
-        unit: s.unit,
-        refTempC: s.refTempC,
-        material: s.material,
-        nearLimit: s.nearLimit,
-        mode: s.mode,
-        engineRpm: s.engineRpm,
-      },
+      spec: limitsOf({ ...s, unit: s.unit }),
     };
   }
   const typed = planLimits(step);

@@ -7,6 +7,7 @@
  */
 import type { VerdictBody, VerdictResponse } from '@/lib/contracts/verdicts';
 import { defaultMode } from '@/lib/specs/classify';
+import { limitsOf } from '@/lib/specs/limits';
 import { CANONICAL_UNITS, parseUnit, unitKind, type CanonicalUnit } from '@/lib/units';
 import { evaluateReading, VerdictInputError, type SpecLimits, type VerdictInput } from '@/lib/verdict';
 import { AppDataSource } from '@/server/db/data-source';
@@ -31,17 +32,7 @@ async function specLimits(body: VerdictBody): Promise<{ limits: SpecLimits; vers
   if (!spec) throw AppError.notFound('spec', body.specId);
   const unit = spec.unit as CanonicalUnit;
   return {
-    limits: {
-      min: spec.min,
-      nominal: spec.nominal,
-      max: spec.max,
-      unit,
-      refTempC: spec.refTempC,
-      material: spec.material,
-      mode: spec.mode ?? defaultMode(spec.parameter, unitKind(unit)),
-      nearLimit: spec.nearLimit,
-      engineRpm: spec.engineRpm,
-    },
+    limits: limitsOf({ ...spec, unit, mode: spec.mode ?? defaultMode(spec.parameter, unitKind(unit)) }),
     version: spec.version,
   };
 }
