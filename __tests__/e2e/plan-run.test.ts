@@ -7,7 +7,9 @@
 import type { Page } from 'playwright-core';
 import { DESKTOP, PHONE, screenshot, useWebApp } from '../helpers/browser';
 import { useTestDatabase } from '../helpers/test-db';
-import { expectText, expectVisible, step } from '../helpers/expect-visible';
+import { expectHidden, expectText, expectVisible, step } from '../helpers/expect-visible';
+import { bearerFor } from '../helpers/auth';
+import type { RunDto } from '@/lib/contracts/plans';
 import { modelIdOf } from '../helpers/plans';
 import { e2eAccount, signInThroughApi } from '../helpers/e2e-accounts';
 import { AppDataSource } from '@/server/db/data-source';
@@ -110,5 +112,75 @@ it('runs the demo no-spark plan on a job at 390×844 to the pickup coil finding,
     await screenshot(page, 'plan-report-phone');
   });
 
+  await context.close();
+});
+
+it('with no signal the run goes on: steps judged on the device, sent once each when the connection returns', async () => {
+  const { email } = await e2eAccount('contributor', 'plan-offline');
+  const jobId = await jobFor(email);
+  const user = await AppDataSource.getRepository(User).findOneByOrFail({ emailKey: emailKey(email) });
+  const auth = { ...(await bearerFor(user)), 'Content-Type': 'application/json' };
+  const [{ id: planId }] = await AppDataSource.query(
+    `SELECT id FROM plans WHERE title = 'No spark on one or all cylinders' AND status = 'published' LIMIT 1`,
+  );
+  const started = await fetch(`${app.url}/api/jobs/${jobId}/runs`, {
+    method: 'POST',
+    headers: auth,
+    body: JSON.stringify({ planId }),
+  });
+  expect(started.status).toBe(201);
+  const runId = ((await started.json()) as RunDto).id;
+  const serverRun = async () =>
+    (await (await fetch(`${app.url}/api/jobs/${jobId}/runs/${runId}`, { headers: auth })).json()) as RunDto;
+  const context = await app.browser.newContext({ viewport: PHONE });
+  const page = await context.newPage();
+  const run = page.getByTestId('plan-run');
+
+  await step('online: the run opened once (the app and the run are kept on the device)', async () => {
+    await signInThroughApi(page, app.url, email);
+    await page.goto(`${app.url}/jobs/${jobId}/runs/${runId}`);
+    await expectText(run.getByTestId('run-step'), /Battery rest voltage/, 'the first step');
+    for (let i = 0; !(await page.evaluate('!!navigator.serviceWorker && !!navigator.serviceWorker.controller')); i++) {
+      if (i > 60) throw new Error('the service worker never took control of the page');
+      await page.waitForTimeout(500);
+    }
+    await page.waitForTimeout(1500); // the persister writes at most once a second
+  });
+
+  await step('offline, reloaded: two steps answered and judged on the device, the run at step 3', async () => {
+    await context.setOffline(true);
+    await page.reload();
+    await expectText(run.getByTestId('run-step'), /Battery rest voltage/, 'the first step offline', 30_000);
+    await measure(page, 'Battery rest voltage', '13.1');
+    await expectText(run.getByTestId('run-step'), /Main and ignition fuses/);
+    await run.getByTestId('outcome-pass').click();
+    await expectText(run.getByTestId('run-step'), /Step 3 of 11[\s\S]*Supply voltage at the coil/);
+    await expectText(run.getByTestId('run-waiting'), /^2 step results judged on this device, waiting to be sent/);
+    await expectText(page.getByTestId('header-queue'), /2 readings waiting to be sent/);
+    await screenshot(page, 'plan-run-offline-phone');
+    expect((await serverRun()).results).toHaveLength(0);
+  });
+
+  await step('back online: both results land once, in order; the server run is at step 3', async () => {
+    await context.setOffline(false);
+    // The sync sends on "online" and every 10 s; the session resumes first.
+    let r = await serverRun();
+    for (let i = 0; r.results.length < 2 && i < 60; i++) {
+      await page.waitForTimeout(500);
+      r = await serverRun();
+    }
+    expect(r.results.map((x) => [x.stepId, x.outcome])).toEqual([
+      ['battery', 'pass'],
+      ['fuses', 'pass'],
+    ]);
+    expect(r.currentStep?.id).toBe('coil-supply');
+    const readings = await AppDataSource.query('SELECT COUNT(*) AS n FROM readings WHERE job_id = ?', [jobId]);
+    expect(Number(readings[0].n)).toBe(2);
+    await expectHidden(run.getByTestId('run-waiting'), 'the waiting notice', 30_000);
+    await expectText(run.getByTestId('run-step'), /Step 3 of 11[\s\S]*Supply voltage at the coil/);
+    await page.waitForTimeout(11_000); // another sync round sends nothing twice
+    expect((await serverRun()).results).toHaveLength(2);
+    await screenshot(page, 'plan-run-back-online-phone');
+  });
   await context.close();
 });

@@ -323,6 +323,8 @@ export type RunDto = {
   status: 'active' | 'concluded';
   stepCount: number;
   currentStep: RunStepDto | null;
+  /** Every step as resolved for the job's model, so the device can go on with no signal (lib/plans/local-run.ts). */
+  steps: RunStepDto[];
   finding: (Finding & { stepId: string }) | null;
   results: RunResultDto[];
   startedAt: string;

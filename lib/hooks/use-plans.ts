@@ -1,7 +1,6 @@
 /** Test plans and runs: TanStack Query hooks and their keys. A step's answer refreshes the run and its job sheet. */
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import {
-  answerStep,
   exportPlans,
   getPlan,
   getRun,
@@ -12,7 +11,7 @@ import {
   stepBack,
   updatePlan,
 } from '../api/plans';
-import type { PlansQuery, RunDto, RunResultBody, UpdatePlanBody } from '../contracts/plans';
+import type { PlansQuery, RunDto, UpdatePlanBody } from '../contracts/plans';
 import { invalidateJob } from './use-jobs';
 
 export const PLANS_KEY = ['plans'] as const;
@@ -55,8 +54,8 @@ export function useStartRunMutation(jobId: number) {
   });
 }
 
-/** One step's answer; the key is made once per attempt by the caller, so a retried send lands once. */
-export function useAnswerStepMutation(jobId: number, runId: number) {
+/** Going back one step (online only; answers go through the device's queue, lib/hooks/use-run-answer.ts). */
+export function useStepBackMutation(jobId: number, runId: number) {
   const qc = useQueryClient();
   const settle = (run: RunDto) => {
     qc.setQueryData([...RUNS_KEY, jobId, runId], run);
@@ -65,12 +64,7 @@ export function useAnswerStepMutation(jobId: number, runId: number) {
       invalidateJob(qc, jobId),
     ]);
   };
-  const answer = useMutation({
-    mutationFn: ({ body, key }: { body: RunResultBody; key: string }) => answerStep(jobId, runId, body, key),
-    onSuccess: (a) => settle(a.run),
-  });
-  const back = useMutation({ mutationFn: () => stepBack(jobId, runId), onSuccess: settle });
-  return { answer, back };
+  return useMutation({ mutationFn: () => stepBack(jobId, runId), onSuccess: settle });
 }
 
 export function useUpdatePlanMutation(id: number) {

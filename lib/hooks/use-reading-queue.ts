@@ -10,12 +10,21 @@ import AsyncStorage from '@react-native-async-storage/async-storage';
 import { onlineManager, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '../api/client';
 import { addReading, createJob } from '../api/jobs';
+import { answerStep } from '../api/plans';
 import type { CreateJobBody } from '../contracts/jobs';
 import { describeError } from '../api/describe-error';
-import { ReadingQueueRunner, type AddJobOutcome, type AddOutcome, type NewReading } from '../offline/queue-runner';
-import { jobsFor, pendingFor, queuedJobSummary, sentJobId, waitingFor } from '../offline/reading-queue';
+import {
+  ReadingQueueRunner,
+  type AddJobOutcome,
+  type AddOutcome,
+  type AddResultOutcome,
+  type NewReading,
+  type NewResult,
+} from '../offline/queue-runner';
+import { jobsFor, pendingFor, queuedJobSummary, resultsFor, sentJobId, waitingFor } from '../offline/reading-queue';
 import { useSession } from '../session/session-provider';
 import { invalidateJob, prefetchOpenJobs, storeJob } from './use-jobs';
+import { RUNS_KEY } from './use-plans';
 
 const RETRY_EVERY_MS = 10_000;
 
@@ -28,6 +37,7 @@ const runner = new ReadingQueueRunner(
         ? 'That job is not among yours (it may have been removed).'
         : describeError(err),
     sendJob: (item) => createJob(item.body, item.key),
+    sendResult: (item) => answerStep(item.jobId, item.runId, item.body, item.key),
   },
 );
 
@@ -39,7 +49,7 @@ export function useReadingQueue() {
   return {
     pendingFor: (jobId: number) => pendingFor(state, userId, jobId),
     /** Everything this account has waiting on the device (the header's "N readings waiting to be sent"). */
-    pendingCount: waitingFor(state, userId).length,
+    pendingCount: waitingFor(state, userId).length + state.results.filter((r) => r.userId === userId).length,
     /** Jobs started on this device that the server does not have yet, as the lists show jobs. */
     queuedJobs: jobs.map((j) => queuedJobSummary(j, user?.displayName ?? '')),
     /** A job still queued under this local id, if any. */
@@ -56,6 +66,12 @@ export function useReadingQueue() {
     },
     rejectedFor: (jobId: number) => state.rejected.filter((r) => r.userId === userId && r.jobId === jobId),
     add: (reading: Omit<NewReading, 'userId'>): Promise<AddOutcome> => runner.add({ ...reading, userId }),
+    /** A test plan run's results still on this device, in order, and those the server refused. */
+    resultsFor: (runId: number) => resultsFor(state, userId, runId),
+    rejectedResultsFor: (runId: number) =>
+      state.rejectedResults.filter((r) => r.userId === userId && r.runId === runId),
+    addResult: (result: Omit<NewResult, 'userId'>): Promise<AddResultOutcome> =>
+      runner.addResult({ ...result, userId }),
     dismiss: runner.dismiss,
   };
 }
@@ -100,9 +116,15 @@ export function useReadingQueueSync() {
     const offJob = runner.onJobSent((_item, job) => {
       void storeJob(qc, job);
     });
+    const offResult = runner.onResultSent((item, answer) => {
+      qc.setQueryData([...RUNS_KEY, item.jobId, item.runId], answer.run);
+      void qc.invalidateQueries({ queryKey: [...RUNS_KEY, item.jobId], exact: true });
+      void invalidateJob(qc, item.jobId);
+    });
     return () => {
       offSent();
       offJob();
+      offResult();
     };
   }, [qc]);
 

@@ -10,6 +10,7 @@
  * 2xx (stored) or a 4xx that resending cannot fix (then it is kept as "rejected").
  */
 import type { CreateJobBody, JobDetailDto, ReadingBody, ReadingDto } from '../contracts/jobs';
+import type { RunAnswerDto } from '../contracts/plans';
 import {
   EMPTY_QUEUE,
   STORAGE_KEY,
@@ -18,6 +19,11 @@ import {
   dismissRejectedJob,
   enqueue,
   enqueueJob,
+  enqueueResult,
+  dismissRejectedResult,
+  rejectResult,
+  recordResultAttempt,
+  removeResult,
   isLocalJobId,
   jobsFor,
   newIdempotencyKey,
@@ -34,6 +40,7 @@ import {
   type QueueState,
   type QueuedJob,
   type QueuedReading,
+  type QueuedResult,
   type ReadingPreview,
 } from './reading-queue';
 
@@ -46,6 +53,12 @@ export type AddOutcome =
   { status: 'sent'; reading: ReadingDto } | { status: 'queued'; key: string } | { status: 'rejected'; message: string };
 export type NewReading = { userId: number; jobId: number; body: ReadingBody; preview: ReadingPreview };
 export type SendJob = (item: QueuedJob) => Promise<JobDetailDto>;
+export type SendResult = (item: QueuedResult) => Promise<RunAnswerDto>;
+export type NewResult = Omit<QueuedResult, 'key' | 'queuedAt' | 'attempts' | 'lastError'>;
+export type AddResultOutcome =
+  | { status: 'sent'; answer: RunAnswerDto }
+  | { status: 'queued'; key: string }
+  | { status: 'rejected'; error: unknown; message: string };
 export type NewJob = { userId: number; body: CreateJobBody; modelTitle: string | null };
 /** A refused job keeps the server's error (its field messages go back on the form). */
 export type AddJobOutcome =
@@ -61,6 +74,7 @@ export class ReadingQueueRunner {
   private listeners = new Set<() => void>();
   private sentListeners = new Set<(item: QueuedReading, reading: ReadingDto) => void>();
   private jobListeners = new Set<(item: QueuedJob, job: JobDetailDto) => void>();
+  private resultListeners = new Set<(item: QueuedResult, answer: RunAnswerDto) => void>();
   private loaded: Promise<void> | null = null;
 
   constructor(
@@ -72,6 +86,8 @@ export class ReadingQueueRunner {
       describe?: (err: unknown) => string;
       /** Sends a job started on this device (without it, queued jobs wait). */
       sendJob?: SendJob;
+      /** Sends a test plan step's result (without it, queued results wait). */
+      sendResult?: SendResult;
     } = {},
   ) {}
 
@@ -160,7 +176,18 @@ export class ReadingQueueRunner {
           // Sent meanwhile (by add(), or by another tab): nothing to do.
           if (this.inFlight.has(item.key) || !this.state.pending.some((p) => p.key === item.key)) continue;
           const outcome = await this.attempt(item);
-          if (outcome.status === 'queued') break;
+          if (outcome.status === 'queued') return;
+        }
+        // Step results, each run in the order its results were taken: a run waits behind its first unsent one.
+        const held = new Set<number>();
+        for (const item of this.state.results.filter((r) => r.userId === userId)) {
+          if (held.has(item.runId)) continue;
+          if (this.inFlight.has(item.key) || !this.state.results.some((r) => r.key === item.key)) {
+            held.add(item.runId);
+            continue;
+          }
+          const outcome = await this.attemptResult(item);
+          if (outcome.status === 'queued') return;
         }
       } finally {
         this.flushing = null;
@@ -169,7 +196,50 @@ export class ReadingQueueRunner {
     return this.flushing;
   };
 
-  dismiss = (key: string) => this.change((s) => dismissRejectedJob(dismissRejected(s, key), key)).then(() => undefined);
+  /**
+   * Queue a step's result (judged on the device) and send it at once, unless an earlier
+   * result of the same run is still waiting: results go in the order they were taken.
+   */
+  addResult = async (result: NewResult): Promise<AddResultOutcome> => {
+    await this.load();
+    const now = (this.options.now ?? (() => new Date()))();
+    const key = (this.options.newKey ?? newIdempotencyKey)();
+    const queued = await this.change((s) =>
+      enqueueResult(s, { ...result, key, queuedAt: now.toISOString(), attempts: 0, lastError: null }),
+    );
+    const first = queued.results.find((r) => r.runId === result.runId && r.userId === result.userId)!;
+    if (first.key !== key) return { status: 'queued', key };
+    return this.attemptResult(first);
+  };
+
+  /** Called after the server has stored a step's result queued on this device. */
+  onResultSent(fn: (item: QueuedResult, answer: RunAnswerDto) => void) {
+    this.resultListeners.add(fn);
+    return () => {
+      this.resultListeners.delete(fn);
+    };
+  }
+
+  private async attemptResult(item: QueuedResult): Promise<AddResultOutcome> {
+    const sendResult = this.options.sendResult;
+    if (!sendResult) return { status: 'queued', key: item.key };
+    const result = await this.tryOnce(item.key, () => sendResult(item), {
+      sent: () => (s) => removeResult(s, item.key),
+      retry: (message) => (s) => recordResultAttempt(s, item.key, message),
+      refused: (status, message) => (s) => rejectResult(s, item.key, status, message),
+    });
+    if (result.status === 'sent') this.resultListeners.forEach((fn) => fn(item, result.value));
+    return result.status === 'sent'
+      ? { status: 'sent', answer: result.value }
+      : result.status === 'refused'
+        ? { status: 'rejected', error: result.error, message: result.message }
+        : { status: 'queued', key: item.key };
+  }
+
+  dismiss = (key: string) =>
+    this.change((s) => dismissRejectedResult(dismissRejectedJob(dismissRejected(s, key), key), key)).then(
+      () => undefined,
+    );
 
   /** Called after the server has stored a job queued on this device. */
   onJobSent(fn: (item: QueuedJob, job: JobDetailDto) => void) {

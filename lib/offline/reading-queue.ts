@@ -13,6 +13,8 @@
  */
 import { ApiError } from '../api/client';
 import { IDEMPOTENCY_KEY, type CreateJobBody, type JobSummaryDto, type ReadingBody } from '../contracts/jobs';
+import type { RunResultBody } from '../contracts/plans';
+import type { StepJudgement } from '../plans/judge-step';
 import type { Verdict } from '../verdict';
 
 /** What the job sheet shows for a reading that has not reached the server yet. */
@@ -60,15 +62,45 @@ export type RejectedJob = QueuedJob & { status: number; message: string };
 /** A queued job the server stored: its local id now means this server id. */
 export type SentJob = { localId: number; jobId: number; userId: number };
 
+/**
+ * A test plan step answered with no signal: judged on the device (lib/plans/judge-step.ts)
+ * so the run goes on, sent in order, each with its key; the server judges it again.
+ */
+export type QueuedResult = {
+  key: string;
+  userId: number;
+  jobId: number;
+  runId: number;
+  body: RunResultBody;
+  /** The step's title and how the device judged it, for the run screen until the server answers. */
+  title: string;
+  judged: StepJudgement;
+  queuedAt: string;
+  attempts: number;
+  lastError: string | null;
+};
+
+export type RejectedResult = QueuedResult & { status: number; message: string };
+
 export type QueueState = {
   pending: QueuedReading[];
   rejected: RejectedReading[];
   jobs: QueuedJob[];
   rejectedJobs: RejectedJob[];
   sentJobs: SentJob[];
+  results: QueuedResult[];
+  rejectedResults: RejectedResult[];
 };
 
-export const EMPTY_QUEUE: QueueState = { pending: [], rejected: [], jobs: [], rejectedJobs: [], sentJobs: [] };
+export const EMPTY_QUEUE: QueueState = {
+  pending: [],
+  rejected: [],
+  jobs: [],
+  rejectedJobs: [],
+  sentJobs: [],
+  results: [],
+  rejectedResults: [],
+};
 /** How many sent jobs' local ids are remembered (a screen opened on one follows it to its server id). */
 export const SENT_JOBS_KEPT = 50;
 export const STORAGE_KEY = 'specbench.reading-queue.v1';
@@ -185,6 +217,52 @@ export function queuedJobSummary(job: QueuedJob, ownerName: string): JobSummaryD
   };
 }
 
+export function enqueueResult(state: QueueState, item: QueuedResult): QueueState {
+  if (state.results.some((r) => r.key === item.key)) return state;
+  return { ...state, results: [...state.results, item] };
+}
+
+export function removeResult(state: QueueState, key: string): QueueState {
+  return { ...state, results: state.results.filter((r) => r.key !== key) };
+}
+
+export function recordResultAttempt(state: QueueState, key: string, error: string): QueueState {
+  return {
+    ...state,
+    results: state.results.map((r) => (r.key === key ? { ...r, attempts: r.attempts + 1, lastError: error } : r)),
+  };
+}
+
+/**
+ * The server refused a step's result: it, and every later result of the same run (they
+ * followed from it), are kept as refused; the run screen shows the server's run again.
+ */
+export function rejectResult(state: QueueState, key: string, status: number, message: string): QueueState {
+  const index = state.results.findIndex((r) => r.key === key);
+  if (index < 0) return state;
+  const item = state.results[index];
+  const later = state.results.filter((r, i) => i > index && r.runId === item.runId && r.userId === item.userId);
+  const out = new Set([item.key, ...later.map((r) => r.key)]);
+  return {
+    ...state,
+    results: state.results.filter((r) => !out.has(r.key)),
+    rejectedResults: [
+      ...state.rejectedResults,
+      { ...item, status, message },
+      ...later.map((r) => ({ ...r, status, message: `Not sent: an earlier step was refused (${message})` })),
+    ],
+  };
+}
+
+export function dismissRejectedResult(state: QueueState, key: string): QueueState {
+  return { ...state, rejectedResults: state.rejectedResults.filter((r) => r.key !== key) };
+}
+
+/** The results one account has waiting for one run, in the order they were taken. */
+export function resultsFor(state: QueueState, userId: number, runId: number): QueuedResult[] {
+  return state.results.filter((r) => r.userId === userId && r.runId === runId);
+}
+
 export function enqueue(state: QueueState, item: QueuedReading): QueueState {
   if (state.pending.some((p) => p.key === item.key)) return state;
   return { ...state, pending: [...state.pending, item] };
@@ -241,6 +319,11 @@ export function parseQueue(text: string | null): QueueState {
       keyed(x) && typeof (x as QueuedReading).jobId === 'number' && typeof (x as QueuedReading).body === 'object';
     const job = (x: unknown): x is QueuedJob =>
       keyed(x) && isLocalJobId((x as QueuedJob).localId) && typeof (x as QueuedJob).body === 'object';
+    const result = (x: unknown): x is QueuedResult =>
+      keyed(x) &&
+      typeof (x as QueuedResult).runId === 'number' &&
+      typeof (x as QueuedResult).body === 'object' &&
+      typeof (x as QueuedResult).judged === 'object';
     const sent = (x: unknown): x is SentJob =>
       !!x && typeof x === 'object' && isLocalJobId((x as SentJob).localId) && typeof (x as SentJob).jobId === 'number';
     const list = <T>(v: unknown, ok: (x: unknown) => x is T): T[] => (Array.isArray(v) ? v.filter(ok) : []);
@@ -250,6 +333,8 @@ export function parseQueue(text: string | null): QueueState {
       jobs: list(raw.jobs, job),
       rejectedJobs: list(raw.rejectedJobs, job) as RejectedJob[],
       sentJobs: list(raw.sentJobs, sent),
+      results: list(raw.results, result),
+      rejectedResults: list(raw.rejectedResults, result) as RejectedResult[],
     };
   } catch {
     return EMPTY_QUEUE;

@@ -6,8 +6,7 @@
  */
 import type { VerdictBody } from '@/lib/contracts/verdicts';
 import type { PlanStep, RunResultBody } from '@/lib/contracts/plans';
-import { allowedOutcomes } from '@/lib/plans/validate';
-import { evaluateContinuity, evaluateDiode, type QualitativeResult } from '@/lib/verdict';
+import { StepResultError, qualitativeResult, unjudgedResult } from '@/lib/plans/judge-step';
 import { citationText } from '@/lib/format/citation';
 import { AppError } from '@/server/errors/app-error';
 import { judge, toVerdictInput } from '../verdicts/verdict.service';
@@ -70,37 +69,23 @@ async function judgeMeasured(step: PlanStep, body: RunResultBody, parts: JobMode
   };
 }
 
-function qualitative(step: PlanStep, body: RunResultBody): QualitativeResult {
-  const check = step.check as Extract<PlanStep['check'], { kind: 'qualitative' }>;
-  if (check.test === 'diode' && body.diode) return evaluateDiode(body.diode);
-  const outcome = body.outcome;
-  if (outcome !== 'pass' && outcome !== 'fail' && !(outcome === 'marginal' && check.test === 'diode'))
-    throw refuse(`Step "${step.id}" takes a pass or fail result.`, 'outcome');
-  if (check.test === 'continuity') {
-    const expected = !check.open;
-    return evaluateContinuity({ continuity: outcome === 'pass' ? expected : !expected, expected });
+/** The shared rules (lib/plans/judge-step.ts), their refusals as 422 naming the field. */
+function shared<T>(fn: () => T): T {
+  try {
+    return fn();
+  } catch (err) {
+    if (err instanceof StepResultError) throw refuse(err.message, err.path);
+    throw err;
   }
-  const seen = outcome === 'pass' ? 'Seen' : outcome === 'marginal' ? 'Doubtful' : 'Not seen';
-  return { verdict: outcome, reason: `${seen}: ${check.expected}.`, steps: [] };
 }
 
 export async function judgeStep(step: PlanStep, body: RunResultBody, parts: JobModelParts): Promise<Judged> {
-  if (body.skipReason !== undefined)
-    return { outcome: 'skip', verdict: null, reason: `Skipped: ${body.skipReason}`, reading: null };
+  const plain = shared(() => unjudgedResult(step, body));
+  if (plain) return { ...plain, reading: null };
   const check = step.check;
   if (check.kind === 'spec' || check.kind === 'limits') return judgeMeasured(step, body, parts);
-  if (check.kind === 'observation') {
-    const choice = check.choices.find((c) => c.id === body.outcome);
-    if (!choice)
-      throw refuse(
-        `Step "${step.id}" takes one of: ${allowedOutcomes(check)
-          .filter((o) => o !== 'skip')
-          .join(', ')}.`,
-        'outcome',
-      );
-    return { outcome: choice.id, verdict: null, reason: choice.label, reading: null };
-  }
-  const r = qualitative(step, body);
+  if (check.kind !== 'qualitative') throw new Error(`unexpected check kind ${check.kind}`);
+  const r = shared(() => qualitativeResult(step, body));
   return {
     outcome: r.verdict,
     verdict: r.verdict,

@@ -50,6 +50,7 @@ function toRunDto(run: PlanRun, results: PlanRunResult[], parts: JobModelParts):
     status: run.status,
     stepCount: run.steps.length,
     currentStep: toRunStep(run.steps, run.currentStep, parts),
+    steps: run.steps.map((s) => toRunStep(run.steps, s.id, parts)!),
     finding: run.finding,
     results: results.filter((r) => !r.undone).map((r) => toResultDto(r, run)),
     startedAt: run.startedAt.toISOString(),

@@ -8,6 +8,7 @@
 import type { VerdictBody, VerdictResponse } from '@/lib/contracts/verdicts';
 import { defaultMode } from '@/lib/specs/classify';
 import { limitsOf } from '@/lib/specs/limits';
+import { verdictInputOf } from '@/lib/verdict/input';
 import { CANONICAL_UNITS, parseUnit, unitKind, type CanonicalUnit } from '@/lib/units';
 import { evaluateReading, VerdictInputError, type SpecLimits, type VerdictInput } from '@/lib/verdict';
 import { AppDataSource } from '@/server/db/data-source';
@@ -40,24 +41,7 @@ async function specLimits(body: VerdictBody): Promise<{ limits: SpecLimits; vers
 /** The body with canonical units, ready for the engine. */
 export async function toVerdictInput(body: VerdictBody): Promise<{ input: VerdictInput; specVersion?: number }> {
   const { limits, version } = await specLimits(body);
-  const input: VerdictInput = {
-    spec: limits,
-    reading: { value: body.reading.value, unit: unitAt(body.reading.unit, 'reading.unit') },
-  };
-  if (body.reading.mode) input.reading.mode = body.reading.mode;
-  if (body.leadResistance)
-    input.leadResistance = {
-      value: body.leadResistance.value,
-      unit: unitAt(body.leadResistance.unit, 'leadResistance.unit'),
-    };
-  if (body.seriesResistance)
-    input.seriesResistance = {
-      ...body.seriesResistance,
-      unit: unitAt(body.seriesResistance.unit, 'seriesResistance.unit'),
-    };
-  if (body.temperatureC !== undefined) input.temperatureC = body.temperatureC;
-  if (body.meter) input.meter = { ...body.meter, unit: unitAt(body.meter.unit, 'meter.unit') };
-  return { input, specVersion: version };
+  return { input: verdictInputOf(limits, body, unitAt), specVersion: version };
 }
 
 /** Runs the engine; its input errors become 422 problem details naming the field. */

@@ -13,8 +13,8 @@ import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { describeError } from '@/lib/api/describe-error';
 import type { RunResultBody } from '@/lib/contracts/plans';
-import { useAnswerStepMutation, useRunQuery } from '@/lib/hooks/use-plans';
-import { newIdempotencyKey } from '@/lib/offline/reading-queue';
+import { useRunQuery, useStepBackMutation } from '@/lib/hooks/use-plans';
+import { useRunAnswer } from '@/lib/hooks/use-run-answer';
 import { useSession } from '@/lib/session/session-provider';
 import { Spacing } from '@/lib/theme';
 
@@ -25,7 +25,8 @@ export default function PlanRunScreen() {
   const router = useRouter();
   const session = useSession();
   const run = useRunQuery(job, id, session.status === 'signed-in');
-  const { answer, back } = useAnswerStepMutation(job, id);
+  const back = useStepBackMutation(job, id);
+  const answer = useRunAnswer(job, id, run.data);
 
   const gate = jobGate({
     sessionStatus: session.status,
@@ -34,15 +35,15 @@ export default function PlanRunScreen() {
     loadingLabel: 'Loading the test plan',
     testID: 'plan-run',
   });
-  if (gate || !run.data) return gate;
+  if (gate || !answer.run) return gate;
 
-  const r = run.data;
+  const r = answer.run;
   const step = r.currentStep;
-  const last = answer.data?.judged ?? null;
-  const pending = answer.isPending || back.isPending;
-  const failure = answer.error ?? back.error;
-  const send = (body: Omit<RunResultBody, 'stepId'>) =>
-    step && answer.mutate({ body: { ...body, stepId: step.id } as RunResultBody, key: newIdempotencyKey() });
+  const lastShown = r.results.at(-1);
+  const last = answer.last && lastShown?.stepId === answer.last.result.stepId ? answer.last : null;
+  const pending = answer.sending || back.isPending;
+  const failure = answer.failure ?? (back.error ? describeError(back.error) : null);
+  const send = (body: Omit<RunResultBody, 'stepId'>) => void answer.submit(body);
   const findingStep = r.finding
     ? (r.results.find((x) => x.stepId === r.finding!.stepId)?.title ?? r.finding.stepId)
     : '';
@@ -52,18 +53,33 @@ export default function PlanRunScreen() {
       <Text variant="small" color="textMuted">
         {r.symptom}
       </Text>
-      {last && r.results.at(-1)?.id === last.id ? (
+      {last ? (
         <Card testID="last-result">
           <View style={styles.row}>
-            <Text variant="label">{last.title}</Text>
-            {last.verdict ? <VerdictChip verdict={last.verdict} /> : null}
+            <Text variant="label">{last.result.title}</Text>
+            {last.result.verdict ? <VerdictChip verdict={last.result.verdict} /> : null}
           </View>
-          <Text variant="small">{last.reason}</Text>
+          <Text variant="small">{last.result.reason}</Text>
         </Card>
       ) : null}
+      {r.waiting > 0 ? (
+        <Text variant="label" testID="run-waiting" accessibilityRole="alert">
+          {r.waiting === 1 ? '1 step result' : `${r.waiting} step results`} judged on this device, waiting to be sent —
+          the server judges {r.waiting === 1 ? 'it' : 'them'} again when the connection returns.
+        </Text>
+      ) : null}
+      {answer.refused.map((x) => (
+        <Card key={x.key} testID="run-refused">
+          <Text variant="label" color="fail">
+            Not saved: {x.title}
+          </Text>
+          <Text variant="small">{x.message}</Text>
+          <Button label="Dismiss" variant="quiet" onPress={() => answer.dismiss(x.key)} />
+        </Card>
+      ))}
       {failure ? (
         <Text color="fail" accessibilityRole="alert">
-          {describeError(failure)}
+          {failure}
         </Text>
       ) : null}
       {step ? (
@@ -77,9 +93,9 @@ export default function PlanRunScreen() {
       <View style={styles.row}>
         {r.results.length > 0 ? (
           <Button
-            label="Back one step"
+            label={r.waiting > 0 ? 'Back one step (once sent)' : 'Back one step'}
             variant="secondary"
-            disabled={pending}
+            disabled={pending || r.waiting > 0}
             onPress={() => back.mutate()}
             testID="run-back"
           />
