@@ -5,6 +5,7 @@
 import type { CreateJobBody, JobDetailDto, JobSummaryDto, UpdateJobBody } from '@/lib/contracts/jobs';
 import { modelTitle } from '@/lib/format/model-title';
 import { AppError } from '@/server/errors/app-error';
+import { assertSameRequest } from './request-hash';
 import type { SignedInUser } from '@/server/auth/roles';
 import { ModelRepository } from '../library/library.repository';
 import type { Job } from './job.entity';
@@ -34,12 +35,7 @@ async function summaries(jobs: Job[]): Promise<Map<number, { summary: JobSummary
 
 /** A job already stored under this key answers again, but only for the same request body. */
 async function replayJob(user: SignedInUser, existing: Job, hash: string): Promise<CreatedJob> {
-  if (existing.requestHash !== null && existing.requestHash !== hash)
-    throw new AppError(
-      422,
-      'idempotency_key_reused',
-      'This Idempotency-Key was already used for a different job. Send a new key with a new job.',
-    );
+  assertSameRequest(existing.requestHash, hash, 'job');
   return { job: await getJob(user, existing.id), created: false };
 }
 

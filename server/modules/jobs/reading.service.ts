@@ -12,6 +12,7 @@ import { unitKind, type CanonicalUnit } from '@/lib/units';
 import { checkValue, evaluateCheck } from '@/lib/verdict';
 import { writeTransaction } from '@/server/db/deadlock-retry';
 import { AppError } from '@/server/errors/app-error';
+import { assertSameRequest } from './request-hash';
 import type { SignedInUser } from '@/server/auth/roles';
 import { judge, toVerdictInput } from '../verdicts/verdict.service';
 import type { Job } from './job.entity';
@@ -121,12 +122,7 @@ async function lockOpenJob(m: EntityManager, user: SignedInUser, jobId: number):
 
 /** The reading stored under this key answers again, but only for the same request body. */
 function replay(existing: Reading, hash: string): AddedReading {
-  if (existing.requestHash !== null && existing.requestHash !== hash)
-    throw new AppError(
-      422,
-      'idempotency_key_reused',
-      'This Idempotency-Key was already used for a different reading on this job. Send a new key with a new reading.',
-    );
+  assertSameRequest(existing.requestHash, hash, 'reading on this job');
   return { reading: toReadingDto(existing, existing.specVersion), created: false };
 }
 

@@ -6,6 +6,7 @@
  * turn a reading queued offline before an upgrade into a "different" request.
  */
 import { createHash } from 'node:crypto';
+import { AppError } from '@/server/errors/app-error';
 
 export function canonicalJson(value: unknown): string {
   if (Array.isArray(value)) return `[${value.map(canonicalJson).join(',')}]`;
@@ -19,3 +20,17 @@ export function canonicalJson(value: unknown): string {
 }
 
 export const requestHash = (body: unknown) => createHash('sha256').update(canonicalJson(body)).digest('hex');
+
+/**
+ * A stored request answers again under its key only for the same body: another body under
+ * a known key is 422 idempotency_key_reused. `what` names it: "reading on this job".
+ * A row stored before hashes were kept (null) answers as before.
+ */
+export function assertSameRequest(stored: string | null | undefined, hash: string, what: string): void {
+  if (stored != null && stored !== hash)
+    throw new AppError(
+      422,
+      'idempotency_key_reused',
+      `This Idempotency-Key was already used for a different ${what}. Send a new key with a new one.`,
+    );
+}

@@ -35,6 +35,10 @@ export class PlanRunResult {
   @Column({ name: 'idempotency_key', type: 'varchar', length: 80 })
   idempotencyKey: string;
 
+  /** requestHash() of the body sent with that key (null for results stored before it was kept). */
+  @Column({ name: 'request_hash', type: 'char', length: 64, nullable: true })
+  requestHash: string | null;
+
   @Column({ type: 'boolean', default: false })
   undone: boolean;
 

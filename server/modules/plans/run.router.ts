@@ -3,6 +3,7 @@ import { IDEMPOTENCY_KEY } from '@/lib/contracts/jobs';
 import { JobParams, RunParams, RunResultBody, StartRunBody } from '@/lib/contracts/plans';
 import { AppError } from '@/server/errors/app-error';
 import { route } from '@/server/http/handler';
+import { requestHash } from '../jobs/request-hash';
 import { answerStep, getRun, listRuns, startRun, stepBack } from './run.service';
 
 const start = route({ params: JobParams, body: StartRunBody, status: 201 }, ({ user, params, body }) =>
@@ -14,7 +15,10 @@ const answer = route({ params: RunParams, body: RunResultBody }, async ({ user, 
   const key = req.get('Idempotency-Key');
   if (key !== undefined && !IDEMPOTENCY_KEY.test(key))
     throw AppError.badRequest('Idempotency-Key must be 8–80 letters, digits, or . _ : -');
-  const { created, ...answered } = await answerStep(user, params.jobId, params.runId, body, key);
+  const { created, ...answered } = await answerStep(user, params.jobId, params.runId, body, {
+    key,
+    hash: requestHash(req.body),
+  });
   res.status(created ? 201 : 200);
   return answered;
 });

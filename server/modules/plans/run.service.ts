@@ -23,6 +23,7 @@ import type { PlanRunResult } from './plan-run-result.entity';
 import { PlanRepository, PlanRunRepository, PlanRunResultRepository } from './plan.repository';
 import { judgeStep } from './run-judge';
 import { jobModelParts, toRunStep, type JobModelParts } from './run-step';
+import { assertSameRequest } from '../jobs/request-hash';
 
 function toResultDto(r: PlanRunResult, run: PlanRun): RunResultDto {
   return {
@@ -161,14 +162,17 @@ export async function answerStep(
   jobId: number,
   runId: number,
   body: RunResultBody,
-  key?: string,
+  request: { key?: string; hash: string },
 ): Promise<RunAnswerDto & { created: boolean }> {
-  const idempotencyKey = key ?? randomUUID();
+  const idempotencyKey = request.key ?? randomUUID();
   return AppDataSource.transaction(async (m) => {
     const { run, parts } = await lockRun(m, user, jobId, runId);
     const results = m.withRepository(PlanRunResultRepository);
     const seen = await results.findOneBy({ runId, idempotencyKey });
-    if (seen) return { ...(await answerOf(m, run, seen, parts)), created: false };
+    if (seen) {
+      assertSameRequest(seen.requestHash, request.hash, 'result on this run');
+      return { ...(await answerOf(m, run, seen, parts)), created: false };
+    }
     if (run.status === 'concluded')
       throw AppError.conflict('This run has reached its finding. Go back a step to change it.');
     if (body.stepId !== run.currentStep)
@@ -190,6 +194,7 @@ export async function answerStep(
         readingId,
         skipReason: body.skipReason ?? null,
         idempotencyKey,
+        requestHash: request.hash,
         undone: false,
       }),
     );
