@@ -132,4 +132,16 @@ describe('GET /api/search limits', () => {
     const res = await request(appA).get('/api/search').query({ q: 'coil' }).expect(200);
     expect(res.headers['ratelimit-policy']).toMatch(/q=600/);
   });
+
+  it('the index age (for /metrics) is null before a build, near 0 while the follower keeps up, and grows when it does not', async () => {
+    const fresh = new SearchEngine({ pollMs: 50 });
+    expect(fresh.ageSeconds()).toBeNull();
+    await fresh.settle();
+    const now = Date.now();
+    expect(fresh.ageSeconds(now)).toBeLessThan(2);
+    // Ten seconds on with no poll in between (the follower stopped): the index is ten seconds old.
+    fresh.stop();
+    expect(fresh.ageSeconds(now + 10_000)).toBeGreaterThanOrEqual(10);
+    expect(fresh.ageSeconds(now + 10_000)).toBeLessThan(12);
+  });
 });

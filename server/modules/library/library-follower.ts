@@ -18,6 +18,7 @@ export class LibraryFollower {
   private timer: ReturnType<typeof setInterval> | null = null;
   private polling: Promise<void> | null = null;
   private again = false;
+  private upToDate: number | null = null;
   private readonly listeners = new Set<ChangeListener>();
   private unsubscribe: (() => void) | null = null;
 
@@ -30,6 +31,11 @@ export class LibraryFollower {
 
   get running() {
     return this.timer !== null;
+  }
+
+  /** When the last poll found nothing more to take in (ms since the epoch), or null before the first. */
+  get caughtUpAt(): number | null {
+    return this.upToDate;
   }
 
   /** Starts polling (once); the first poll only learns where the log ends. */
@@ -76,17 +82,25 @@ export class LibraryFollower {
     if (!AppDataSource.isInitialized) return;
     if (this.cursor === null) {
       this.cursor = await lastChangeId();
+      this.upToDate = Date.now();
       return;
     }
     for (;;) {
       const resets = this.resets;
+      const started = Date.now();
       const changes = await changesAfter(this.cursor, PAGE);
-      if (changes.length === 0) return;
+      if (changes.length === 0) {
+        this.upToDate = started;
+        return;
+      }
       const ids = [...new Set(changes.map((c) => c.specId))];
       for (const listener of this.listeners) await listener(ids);
       if (resets !== this.resets) continue;
       this.cursor = changes[changes.length - 1].id;
-      if (changes.length < PAGE) return;
+      if (changes.length < PAGE) {
+        this.upToDate = started;
+        return;
+      }
     }
   }
 }

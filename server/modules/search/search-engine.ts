@@ -97,6 +97,16 @@ export class SearchEngine {
     await this.follower.poll();
   }
 
+  /**
+   * Seconds since this index last held every library change (built, or the follower found
+   * nothing newer); null before the first build. /metrics reports it as the index age.
+   */
+  ageSeconds(now = Date.now()): number | null {
+    if (!this.index || !this.builtAt) return null;
+    const upToDate = Math.max(this.builtAt.getTime(), this.follower.caughtUpAt ?? 0);
+    return Math.max(0, (now - upToDate) / 1000);
+  }
+
   stats(): SearchStats {
     return {
       specs: this.index?.size ?? 0,

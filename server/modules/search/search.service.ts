@@ -4,6 +4,7 @@
  */
 import type { SearchQuery, SearchResultDto, SearchGroupDto } from '@/lib/contracts/library';
 import { formatRange } from '@/lib/units';
+import { setIndexAgeSource } from '@/server/http/metrics';
 import { SearchEngine } from './search-engine';
 import type { IndexedSpec } from './search.queries';
 import type { SearchMatch } from './search-index';
@@ -12,6 +13,7 @@ export { markLibraryChanged } from '../library/library-changes';
 
 /** The process's engine; tests make more to act as other server processes. */
 export const searchEngine = new SearchEngine();
+setIndexAgeSource(() => searchEngine.ageSeconds());
 
 function group(matches: SearchMatch<IndexedSpec>[]): SearchGroupDto[] {
   const groups = new Map<number, SearchGroupDto>();
