@@ -1,17 +1,12 @@
 import type { PlanStep } from '@/lib/contracts/plans';
 import { isEmptyDiff, planDiff, type ComparablePlan } from '@/lib/plans/diff';
+import { step as planStep } from '../helpers/plan-step';
 
-const step = (id: string, over: Partial<PlanStep> = {}): PlanStep => ({
-  id,
-  title: `Step ${id}`,
-  instructions: 'Measure it.',
-  preconditions: [],
-  cautions: [],
-  testPoint: { text: 'Across the terminals' },
-  check: { kind: 'limits', limits: { min: 1, max: 2, unit: 'Ω' } },
-  next: { pass: { finding: { part: 'none', advice: 'Nothing to replace.' } }, fail: { step: 'b' } },
-  ...over,
-});
+const NEXT: PlanStep['next'] = {
+  pass: { finding: { part: 'none', advice: 'Nothing to replace.' } },
+  fail: { step: 'b' },
+};
+const step = (id: string, over: Partial<PlanStep> = {}) => planStep(id, NEXT, over);
 
 const plan = (steps: PlanStep[], over: Partial<ComparablePlan> = {}): ComparablePlan => ({
   title: 'Weak spark',
