@@ -1,7 +1,8 @@
 /** Rows and bodies for the plan API tests: demo models by name, a small valid plan, a job on a model. */
 import request from 'supertest';
 import type { Express } from 'express';
-import type { PlanBody, PlanStep } from '@/lib/contracts/plans';
+import type { PlanBody } from '@/lib/contracts/plans';
+import { step } from './plan-step';
 import { AppDataSource } from '@/server/db/data-source';
 import { authHeader } from './auth';
 
@@ -13,17 +14,7 @@ export async function modelIdOf(name: string, yearFrom: number): Promise<number>
   return row.id;
 }
 
-export const step = (id: string, next: PlanStep['next'], over: Partial<PlanStep> = {}): PlanStep => ({
-  id,
-  title: `Step ${id}`,
-  instructions: 'Measure it.',
-  preconditions: [],
-  cautions: [],
-  testPoint: { text: 'Across the terminals' },
-  check: { kind: 'limits', limits: { min: 1, max: 2, unit: 'Ω' } },
-  next,
-  ...over,
-});
+export { step } from './plan-step';
 
 const finding = (part: string) => ({ finding: { part, advice: `Replace the ${part}.` } });
 

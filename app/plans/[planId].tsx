@@ -1,6 +1,7 @@
 import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { PlanSteps } from '@/components/plans/plan-steps';
 import { StartOnJob } from '@/components/plans/start-on-job';
+import { Button } from '@/components/ui/button';
 import { MainAndSide } from '@/components/ui/main-and-side';
 import { Screen } from '@/components/ui/screen';
 import { ErrorState, LoadingState } from '@/components/ui/states';
@@ -53,10 +54,18 @@ export default function PlanScreen() {
               planId={p.id}
             />
           ) : (
-            <Text color="textMuted">Sign in to run this plan on a job.</Text>
+            <Text color="textMuted">Sign in to run this plan on a job or to propose a change to it.</Text>
           )
         }
       />
+      {session.status === 'signed-in' ? (
+        <Button
+          label="Propose a change to this plan"
+          variant="secondary"
+          onPress={() => router.push(`/corrections/new-plan?planId=${p.id}`)}
+          testID="propose-plan-change"
+        />
+      ) : null}
     </Screen>
   );
 }

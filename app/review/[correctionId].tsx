@@ -2,6 +2,7 @@ import { Stack, useLocalSearchParams, useRouter } from 'expo-router';
 import { CorrectionCard } from '@/components/corrections/correction-card';
 import { DecisionForm } from '@/components/corrections/decision-form';
 import { FieldComparison } from '@/components/corrections/field-comparison';
+import { PlanChangeView } from '@/components/corrections/plan-change-view';
 import { Caution } from '@/components/ui/caution';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
@@ -28,6 +29,7 @@ export default function ReviewCorrectionScreen() {
       </Screen>
     );
   const r = review.data;
+  const what = r.kind === 'plan_change' ? 'plan' : 'spec';
   const done = () => {
     void review.refetch();
     if (router.canGoBack()) router.back();
@@ -42,15 +44,21 @@ export default function ReviewCorrectionScreen() {
       <CorrectionCard c={r} showProposer />
       {r.stale ? (
         <Caution
-          title="the spec changed after this proposal"
+          title={`the ${what} changed after this proposal`}
           testID="stale-warning"
           lines={[
-            `It was proposed against version ${r.baseVersion}; the spec is now at version ${r.currentVersion}.`,
-            'Compare the three columns before accepting: accepting applies the proposed values over the current ones.',
+            `It was proposed against version ${r.baseVersion}; the ${what} is now at version ${r.currentVersion}.`,
+            r.kind === 'plan_change'
+              ? 'Read what accepting would change in the current version before accepting: the proposed fields replace the current ones.'
+              : 'Compare the three columns before accepting: accepting applies the proposed values over the current ones.',
           ]}
         />
       ) : null}
-      <FieldComparison review={r} />
+      {r.kind === 'plan_change' ? (
+        <PlanChangeView plan={r.plan} baseVersion={r.baseVersion} currentVersion={r.currentVersion} />
+      ) : (
+        <FieldComparison review={r} />
+      )}
       {decide.error ? (
         <Text color="fail" accessibilityRole="alert">
           {describeError(decide.error)}

@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { citationText } from '@/lib/format/citation';
 import { StyleSheet, View } from 'react-native';
-import type { CorrectionDto } from '@/lib/contracts/corrections';
+import type { CorrectionDto, SpecCorrectionDto } from '@/lib/contracts/corrections';
 import { formatRange, parseUnit } from '@/lib/units';
 import { Spacing } from '@/lib/theme';
 import { Card } from '../ui/card';
@@ -14,9 +14,14 @@ const STATUS = {
   withdrawn: 'Withdrawn',
 } as const;
 const COLOR = { pending: 'marginal', accepted: 'pass', rejected: 'fail', withdrawn: 'textMuted' } as const;
-const KIND = { change: 'Change', new_spec: 'Missing spec', new_component: 'Missing component' } as const;
+const KIND = {
+  change: 'Change',
+  new_spec: 'Missing spec',
+  new_component: 'Missing component',
+  plan_change: 'Test plan change',
+} as const;
 
-export function proposedRange(c: CorrectionDto): string {
+function proposedRange(c: SpecCorrectionDto): string {
   const unit = parseUnit(c.proposed.unit)?.unit;
   return unit
     ? formatRange(c.proposed.min, c.proposed.nominal, c.proposed.max, unit)
@@ -43,14 +48,20 @@ export function CorrectionCard({ c, showProposer = false, children }: Correction
         </Text>
       </View>
       <Text variant="small" color="textMuted">
-        {c.modelTitle}
+        {c.modelTitle ?? 'Every model with these parts'}
       </Text>
-      <Text variant="heading">
-        {c.componentName} — {c.parameter}
-      </Text>
-      <Text>
-        Proposed: <Text variant="label">{proposedRange(c)}</Text>
-      </Text>
+      {c.kind === 'plan_change' ? (
+        <Text variant="heading">Test plan: {c.plan.title}</Text>
+      ) : (
+        <>
+          <Text variant="heading">
+            {c.componentName} — {c.parameter}
+          </Text>
+          <Text>
+            Proposed: <Text variant="label">{proposedRange(c)}</Text>
+          </Text>
+        </>
+      )}
       <Text variant="small" color="textMuted">
         Source: {citationText(c.citation, c.citation.page)}
       </Text>

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { useController, useForm, useFormState } from 'react-hook-form';
-import { ProposeBody } from '@/lib/contracts/corrections';
+import { ProposeBody, type SpecProposeBody } from '@/lib/contracts/corrections';
 import type { CanonicalUnit } from '@/lib/units';
 import { Spacing } from '@/lib/theme';
 import { useServerErrors } from '../ui/form-failure';
@@ -9,6 +9,7 @@ import { bodyResolver } from '../ui/form-resolver';
 import { SubmitButton } from '../ui/submit-button';
 import { Text } from '../ui/text';
 import { UnitPicker } from '../calculator/unit-picker';
+import { CitationFields } from './citation-fields';
 import {
   proposalField,
   proposalServerErrors,
@@ -26,7 +27,7 @@ export type ProposalFormProps = {
   submitting: boolean;
   serverErrors?: { path: string; message: string }[];
   submitLabel: string;
-  onSubmit: (body: ProposeBody) => void;
+  onSubmit: (body: SpecProposeBody) => void;
 };
 
 const DECIMAL = { inputMode: 'decimal', keyboardType: 'decimal-pad' } as const;
@@ -70,14 +71,7 @@ export function ProposalForm({
       {field('refTempC', 'Reference temperature °C (optional)', DECIMAL)}
       {field('testPoints', 'Test points', { multiline: true })}
       {field('conditions', 'Conditions', { multiline: true })}
-      <Text variant="heading">Source (required)</Text>
-      {field('title', 'Source title')}
-      <View style={styles.row}>
-        <View style={styles.cell}>{field('edition', 'Edition')}</View>
-        <View style={styles.cell}>{field('page', 'Page')}</View>
-      </View>
-      {field('url', 'Link (optional)', { inputMode: 'url', autoCapitalize: 'none' })}
-      {field('rationale', 'Why should it change?', { multiline: true, numberOfLines: 3 })}
+      <CitationFields control={control} />
       {errors.root?.message ? (
         <Text color="fail" accessibilityRole="alert">
           {errors.root.message}
@@ -87,7 +81,7 @@ export function ProposalForm({
         label={submitLabel}
         pendingLabel="Sending…"
         pending={submitting}
-        onPress={handleSubmit((body) => onSubmit(body))}
+        onPress={handleSubmit((body) => onSubmit(body as SpecProposeBody))}
         testID="proposal-submit"
       />
     </View>

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { ApiError } from '@/lib/api/client';
 import { describeError } from '@/lib/api/describe-error';
@@ -16,6 +16,8 @@ export type PlanJsonFormProps = {
   pending: boolean;
   error: unknown;
   done?: string | null;
+  /** More fields between the JSON and the button (a proposal's source and rationale). */
+  extra?: ReactNode;
   onSubmit: (value: unknown, reason: string) => void;
 };
 
@@ -32,6 +34,7 @@ export function PlanJsonForm({
   pending,
   error,
   done,
+  extra,
   onSubmit,
 }: PlanJsonFormProps) {
   const [text, setText] = useState(initial);
@@ -60,6 +63,7 @@ export function PlanJsonForm({
         autoCorrect={false}
         testID="plan-json"
       />
+      {extra}
       {withReason ? (
         <TextField label="Reason for the change" value={reason} onChangeText={setReason} testID="plan-reason" />
       ) : null}

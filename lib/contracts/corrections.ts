@@ -6,7 +6,15 @@
 import { z } from 'zod';
 import { specValueIssues, valueSchema, withCreateDefault } from './curation';
 import { REVIEWED_FIELDS, fieldsWith, hasFlag, type SpecValues } from './spec-fields';
-import { CORRECTION_STATUSES, type CorrectionKind, type CorrectionStatus, type Material } from './enums';
+import {
+  CORRECTION_STATUSES,
+  type CorrectionKind,
+  type CorrectionStatus,
+  type FieldError,
+  type Material,
+} from './enums';
+import { PlanCitation, UpdatePlanBody } from './plans';
+import type { PlanDiff } from '../plans/diff';
 
 import { safeText } from './text';
 
@@ -37,8 +45,26 @@ export const ProposedValues = z
   .strict();
 export type ProposedValues = z.infer<typeof ProposedValues>;
 
-/** A proposal as stored: the values, the parameter they are for, and the new component's name (kind 'new_component'). */
-export type StoredProposal = ProposedValues & { parameter: string; component?: string };
+/** A spec proposal as stored: the values, the parameter they are for, and the new component's name (kind 'new_component'). */
+export type SpecProposal = ProposedValues & { parameter: string; component?: string };
+
+/**
+ * The plan fields a proposal may change: the editors' PATCH /api/plans/:id body without its
+ * version and reason (the proposal records its base version and gives its rationale) and
+ * without the citation: the proposal's own citation becomes the plan's when it is accepted,
+ * as an accepted spec correction cites its source.
+ */
+export const ProposedPlan = UpdatePlanBody.omit({ version: true, reason: true, citation: true }).refine(
+  (p) => Object.keys(p).length > 0,
+  'propose at least one change to the plan',
+);
+export type ProposedPlan = z.infer<typeof ProposedPlan>;
+/** A plan proposal as stored (kind 'plan_change'): the plan fields it changes, the model by id. */
+export type PlanProposal = { plan: ProposedPlan };
+
+/** What the `proposed` column holds; `isPlanProposal` tells the two apart. */
+export type StoredProposal = SpecProposal | PlanProposal;
+export const isPlanProposal = (p: StoredProposal): p is PlanProposal => 'plan' in p;
 
 export const CitationInput = z
   .object({
@@ -53,11 +79,27 @@ export const CitationInput = z
   })
   .strict();
 
-const common = {
-  values: ProposedValues,
-  citation: CitationInput,
-  rationale: para('rationale', 2000).refine((s) => s.length >= 10, 'say why, in at least 10 characters'),
-};
+export type CitationInput = z.infer<typeof CitationInput>;
+
+/** A proposal's citation as a plan cites its source (empty edition, page and link left out). */
+export const toPlanCitation = (c: CitationInput): PlanCitation => ({
+  title: c.title,
+  ...(c.edition ? { edition: c.edition } : {}),
+  ...(c.page ? { page: c.page } : {}),
+  ...(c.url ? { url: c.url } : {}),
+});
+
+/** Why the change is right: every proposal gives one. */
+export const Rationale = para('rationale', 2000).refine((s) => s.length >= 10, 'say why, in at least 10 characters');
+const rationale = Rationale;
+const common = { values: ProposedValues, citation: CitationInput, rationale };
+
+/** A plan's citation is shorter than a spec's (edition 60, page 40 characters): its problems at the proposal's paths. */
+export const planCitationIssues = (citation: CitationInput): FieldError[] =>
+  (PlanCitation.safeParse(toPlanCitation(citation)).error?.issues ?? []).map((i) => ({
+    path: ['citation', ...i.path.map(String)].join('.'),
+    message: i.message,
+  }));
 
 /** Adds the value rules, with the parameter the values are for. */
 const checkValues = (parameter: string | undefined, values: ProposedValues, ctx: z.RefinementCtx) => {
@@ -93,18 +135,42 @@ export const ProposeBody = z
         ...common,
       })
       .strict(),
+    z
+      .object({
+        kind: z.literal('plan_change'),
+        planId: z.number().int().positive(),
+        /** The plan version the proposal is based on; accepting it over a later one needs confirmStale. */
+        version: z.number().int().positive(),
+        plan: ProposedPlan,
+        citation: CitationInput,
+        rationale,
+      })
+      .strict(),
   ])
-  .superRefine((b, ctx) => checkValues('parameter' in b ? b.parameter : undefined, b.values, ctx));
+  .superRefine((b, ctx) => {
+    if (b.kind === 'plan_change')
+      for (const i of planCitationIssues(b.citation))
+        ctx.addIssue({ code: 'custom', path: i.path.split('.'), message: i.message });
+    else checkValues('parameter' in b ? b.parameter : undefined, b.values, ctx);
+  });
 export type ProposeBody = z.infer<typeof ProposeBody>;
+export type SpecProposeBody = Exclude<ProposeBody, { kind: 'plan_change' }>;
+export type PlanProposeBody = Extract<ProposeBody, { kind: 'plan_change' }>;
 
+/** The proposer's edit while pending: `values` for a spec proposal, `plan` for a plan proposal. */
 export const EditProposalBody = z
   .object({
     values: ProposedValues.optional(),
+    plan: ProposedPlan.optional(),
     citation: CitationInput.optional(),
-    rationale: common.rationale.optional(),
+    rationale: rationale.optional(),
   })
   .strict()
-  .refine((b) => b.values || b.citation || b.rationale, 'change at least one of values, citation or rationale');
+  .refine(
+    (b) => b.values || b.plan || b.citation || b.rationale,
+    'change at least one of values, plan, citation or rationale',
+  )
+  .refine((b) => !(b.values && b.plan), { message: 'send values or plan, not both', path: ['plan'] });
 export type EditProposalBody = z.infer<typeof EditProposalBody>;
 
 export const AcceptBody = z
@@ -120,17 +186,13 @@ export const CorrectionsQuery = z.object({
   modelId: z.coerce.number().int().positive().optional(),
 });
 
-export type CorrectionDto = {
+type CorrectionCommon = {
   id: number;
-  kind: CorrectionKind;
   status: CorrectionStatus;
   specId: number | null;
   componentId: number | null;
-  modelId: number;
-  modelTitle: string;
   componentName: string;
   parameter: string;
-  proposed: ProposedValues;
   citation: { title: string; edition: string; page: string; url: string | null };
   rationale: string;
   baseVersion: number | null;
@@ -141,7 +203,37 @@ export type CorrectionDto = {
   createdAt: string;
   updatedAt: string;
 };
-/** For review: the values when proposed, now, and as proposed, field by field. */
+/** A proposal about a spec: the proposed values, on a model. */
+export type SpecCorrectionDto = CorrectionCommon & {
+  kind: Exclude<CorrectionKind, 'plan_change'>;
+  modelId: number;
+  modelTitle: string;
+  proposed: ProposedValues;
+  plan: null;
+};
+/** A proposal about a test plan: a generic plan has no model. */
+export type PlanCorrectionDto = CorrectionCommon & {
+  kind: 'plan_change';
+  modelId: number | null;
+  modelTitle: string | null;
+  proposed: null;
+  plan: PlanChangeDto;
+};
+export type CorrectionDto = SpecCorrectionDto | PlanCorrectionDto;
+
+/**
+ * The plan a proposal is about and what it changes: `changes` from the version it was based
+ * on; `changesNow` what accepting would do to the current version, when that is a later one.
+ */
+export type PlanChangeDto = {
+  id: number;
+  title: string;
+  proposed: ProposedPlan;
+  changes: PlanDiff | null;
+  changesNow: PlanDiff | null;
+};
+
+/** For review: the values when proposed, now, and as proposed, field by field (none for a plan). */
 export type CorrectionReviewDto = CorrectionDto & {
   stale: boolean;
   currentVersion: number | null;

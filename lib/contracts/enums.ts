@@ -62,7 +62,8 @@ export type RevisionOrigin = (typeof REVISION_ORIGINS)[number];
 export const IMPORT_STATUSES = ['previewed', 'committed', 'failed'] as const;
 export type ImportStatus = (typeof IMPORT_STATUSES)[number];
 
-export const CORRECTION_KINDS = ['change', 'new_spec', 'new_component'] as const;
+/** What a proposal is about: a spec (changed, missing, on a missing component) or a test plan. */
+export const CORRECTION_KINDS = ['change', 'new_spec', 'new_component', 'plan_change'] as const;
 export type CorrectionKind = (typeof CORRECTION_KINDS)[number];
 
 export const CORRECTION_STATUSES = ['pending', 'accepted', 'rejected', 'withdrawn'] as const;

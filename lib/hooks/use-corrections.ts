@@ -13,6 +13,7 @@ import {
 import type { EditProposalBody } from '../contracts/corrections';
 import { useSession } from '../session/session-provider';
 import { SPEC_KEY } from './use-library';
+import { PLAN_KEY, PLANS_KEY } from './use-plans';
 
 export const CORRECTIONS_KEY = ['corrections'] as const;
 
@@ -46,10 +47,11 @@ export function useCorrectionQuery(id: number) {
   });
 }
 
+/** A decision may change a spec or a test plan: both caches are refreshed with the proposals. */
 function useInvalidate() {
   const qc = useQueryClient();
   return () =>
-    Promise.all([qc.invalidateQueries({ queryKey: CORRECTIONS_KEY }), qc.invalidateQueries({ queryKey: SPEC_KEY })]);
+    Promise.all([CORRECTIONS_KEY, SPEC_KEY, PLAN_KEY, PLANS_KEY].map((queryKey) => qc.invalidateQueries({ queryKey })));
 }
 
 export function useProposeMutation() {

@@ -5,12 +5,9 @@ import { Screen } from '@/components/ui/screen';
 import { ErrorState, LoadingState } from '@/components/ui/states';
 import { Text } from '@/components/ui/text';
 import { describeError } from '@/lib/api/describe-error';
-import type { PlanDto, UpdatePlanBody } from '@/lib/contracts/plans';
+import type { UpdatePlanBody } from '@/lib/contracts/plans';
+import { planJsonText } from '@/lib/plans/plan-json';
 import { usePlanQuery, useUpdatePlanMutation } from '@/lib/hooks/use-plans';
-
-/** The fields an editor changes, in the plan file's order (the id, version and dates are not the editor's). */
-const editable = ({ title, symptom, system, modelId, status, citation, steps }: PlanDto) =>
-  JSON.stringify({ title, symptom, system, modelId, status, citation, steps }, null, 2);
 
 /** Editors: one plan as JSON; saving needs a reason and writes a new version (409 if someone saved first). */
 export default function PlanEditorScreen() {
@@ -33,7 +30,7 @@ export default function PlanEditorScreen() {
             <PlanJsonForm
               key={plan.data.version}
               label="The plan (JSON)"
-              initial={editable(plan.data)}
+              initial={planJsonText(plan.data)}
               submitLabel="Save a new version"
               withReason
               pending={update.isPending}

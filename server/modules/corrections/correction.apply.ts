@@ -17,10 +17,11 @@ import { ensureSource } from '../specs/spec-library';
 import { checkValues, lockSpec, writeSpecChange } from '../specs/spec-write';
 import { insertNewSpec } from '../specs/spec-edit.service';
 import { User } from '../users/user.entity';
-import type { Correction } from './correction.entity';
+import { specProposalOf, type Correction } from './correction.entity';
 import { toReview } from './correction.view';
 
-async function credit(m: EntityManager, c: Correction, editor: SignedInUser) {
+/** The proposer as the author of the accepted change (the editor named beside it), and the revision's reason. */
+export async function credit(m: EntityManager, c: Correction, editor: SignedInUser) {
   const proposer = await m.getRepository(User).findOneByOrFail({ id: c.proposerId });
   return {
     actor: { id: proposer.id, name: `${proposer.displayName} (accepted by ${editor.displayName})`.slice(0, 120) },
@@ -31,7 +32,7 @@ async function credit(m: EntityManager, c: Correction, editor: SignedInUser) {
 
 /** The reviewed fields of the list, as the proposal sets them (empty text is null; no material: the spec's, or from the parameter). */
 function proposedValues(c: Correction, spec: Spec | null) {
-  const p = c.proposed;
+  const p = specProposalOf(c);
   const out: Record<string, unknown> = {};
   for (const f of fieldsWith('reviewed')) {
     const v = p[f.key as keyof typeof p];
@@ -76,8 +77,8 @@ async function applyChange(
 async function applyNew(m: EntityManager, c: Correction, editor: SignedInUser): Promise<number> {
   const model = await m
     .getRepository(VehicleModel)
-    .findOneOrFail({ where: { id: c.modelId }, relations: { make: true } });
-  const p = c.proposed;
+    .findOneOrFail({ where: { id: c.modelId! }, relations: { make: true } });
+  const p = specProposalOf(c);
   const component = c.componentId
     ? (await m.getRepository(Component).findOneByOrFail({ id: c.componentId })).name
     : p.component!;

@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 
-import type { StoredProposal } from '@/lib/contracts/corrections';
+import { isPlanProposal, type SpecProposal, type StoredProposal } from '@/lib/contracts/corrections';
 import {
   CORRECTION_KINDS,
   CORRECTION_STATUSES,
@@ -27,16 +27,21 @@ export class Correction {
   @Column({ name: 'component_id', type: 'int', nullable: true })
   componentId: number | null;
 
-  /** The model a new component belongs to (kind 'new_component'), and the model of every proposal. */
+  /** The model a new component belongs to (kind 'new_component'), and the model of every proposal; null for a generic plan's. */
   @Index()
-  @Column({ name: 'model_id', type: 'int' })
-  modelId: number;
+  @Column({ name: 'model_id', type: 'int', nullable: true })
+  modelId: number | null;
+
+  /** The test plan to change (kind 'plan_change'). */
+  @Index()
+  @Column({ name: 'plan_id', type: 'int', nullable: true })
+  planId: number | null;
 
   @Index()
   @Column({ name: 'proposer_id', type: 'int' })
   proposerId: number;
 
-  /** Proposed values: parameter, component, min, nominal, max, unit, refTempC, material, testPoints, conditions. */
+  /** Proposed values (parameter, component, min, nominal, max, unit…), or `{ plan }`: the plan fields proposed. */
   @Column({ type: 'json' })
   proposed: StoredProposal;
 
@@ -50,7 +55,7 @@ export class Correction {
   @Column({ type: 'enum', enum: CORRECTION_STATUSES, default: 'pending' })
   status: CorrectionStatus;
 
-  /** The spec version the proposal was made against (kind 'change'). */
+  /** The spec (kind 'change') or plan (kind 'plan_change') version the proposal was made against. */
   @Column({ name: 'base_version', type: 'int', nullable: true })
   baseVersion: number | null;
 
@@ -71,4 +76,10 @@ export class Correction {
 
   @UpdateDateColumn({ name: 'updated_at', type: 'datetime', precision: 3 })
   updatedAt: Date;
+}
+
+/** The proposed spec values of a spec proposal (kinds change, new_spec, new_component). */
+export function specProposalOf(c: Pick<Correction, 'id' | 'proposed'>): SpecProposal {
+  if (isPlanProposal(c.proposed)) throw new Error(`Correction #${c.id} is about a test plan, not a spec.`);
+  return c.proposed;
 }

@@ -13,8 +13,9 @@ export async function listCorrections(
 ): Promise<CorrectionDto[]> {
   const qb = AppDataSource.getRepository(Correction)
     .createQueryBuilder('c')
-    .innerJoin('vehicle_models', 'vm', 'vm.id = c.model_id')
-    .innerJoin('makes', 'mk', 'mk.id = vm.make_id')
+    // A generic plan's proposal has no model: it is listed unless a make or model is asked for.
+    .leftJoin('vehicle_models', 'vm', 'vm.id = c.model_id')
+    .leftJoin('makes', 'mk', 'mk.id = vm.make_id')
     .limit(200);
   if (q.mine === 'true' || !roleAtLeast(user.role, 'editor')) qb.andWhere('c.proposerId = :me', { me: user.id });
   if (q.status) qb.andWhere('c.status = :status', { status: q.status });

@@ -5,7 +5,13 @@
  * and two editors deciding at once cannot both win.
  */
 import type { EntityManager } from 'typeorm';
-import type { AcceptBody, CorrectionReviewDto, EditProposalBody, ProposeBody } from '@/lib/contracts/corrections';
+import type {
+  AcceptBody,
+  CorrectionReviewDto,
+  EditProposalBody,
+  ProposeBody,
+  SpecProposeBody,
+} from '@/lib/contracts/corrections';
 import type { z } from 'zod';
 import { specValueIssues } from '@/lib/contracts/curation';
 import { AppDataSource } from '@/server/db/data-source';
@@ -17,7 +23,8 @@ import { VehicleModel } from '../library/vehicle-model.entity';
 import { Spec } from '../specs/spec.entity';
 import { checkVisible } from '../specs/spec.service';
 import { foldKey } from '../library/keys';
-import { Correction } from './correction.entity';
+import { Correction, specProposalOf } from './correction.entity';
+import { applyPlanChange, editPlanProposal, planTarget, planTitle } from './correction.plan';
 import { toReview } from './correction.view';
 import { notifyEditors, notifyProposer } from './correction.notify';
 import { applyCorrection } from './correction.apply';
@@ -25,7 +32,7 @@ import { markLibraryChanged } from '../search/search.service';
 
 const isEditor = (u: SignedInUser) => roleAtLeast(u.role, 'editor');
 
-async function target(m: EntityManager, b: ProposeBody, user: SignedInUser) {
+async function target(m: EntityManager, b: SpecProposeBody, user: SignedInUser) {
   if (b.kind === 'change') {
     const spec = await m.getRepository(Spec).findOne({ where: { id: b.specId }, relations: { component: true } });
     if (!spec) throw AppError.notFound('spec', b.specId);
@@ -62,7 +69,7 @@ async function target(m: EntityManager, b: ProposeBody, user: SignedInUser) {
   };
 }
 
-function checkAgainst(parameter: string, values: ProposeBody['values']) {
+function checkAgainst(parameter: string, values: SpecProposeBody['values']) {
   const issues = specValueIssues({ parameter, ...values });
   if (issues.length)
     throw AppError.unprocessable(
@@ -71,31 +78,46 @@ function checkAgainst(parameter: string, values: ProposeBody['values']) {
     );
 }
 
+/** What a spec proposal is about, and its values checked by the editors' rules. */
+async function specProposal(m: EntityManager, b: SpecProposeBody, user: SignedInUser) {
+  const t = await target(m, b, user);
+  checkAgainst(t.parameter, b.values);
+  const proposed = {
+    ...b.values,
+    parameter: t.parameter,
+    ...(b.kind === 'new_component' ? { component: b.component } : {}),
+  };
+  return { target: { ...t, planId: null }, proposed };
+}
+
 export async function propose(user: SignedInUser, b: ProposeBody): Promise<CorrectionReviewDto> {
   const saved = await writeTransaction(async (m) => {
-    const t = await target(m, b, user);
-    checkAgainst(t.parameter, b.values);
-    const proposed = {
-      ...b.values,
-      parameter: t.parameter,
-      ...(b.kind === 'new_component' ? { component: b.component } : {}),
-    };
+    const { target: t, proposed } =
+      b.kind === 'plan_change' ? await planTarget(m, b, user) : await specProposal(m, b, user);
     const c = await m.getRepository(Correction).save({
       kind: b.kind,
-      specId: t.specId,
-      componentId: t.componentId,
+      specId: 'specId' in t ? t.specId : null,
+      componentId: 'componentId' in t ? t.componentId : null,
       modelId: t.modelId,
+      planId: t.planId,
       proposerId: user.id,
       proposed,
       citation: { ...b.citation, url: b.citation.url ?? null },
       rationale: b.rationale,
       status: 'pending',
-      baseVersion: b.kind === 'change' ? b.version : null,
+      baseVersion: b.kind === 'change' || b.kind === 'plan_change' ? b.version : null,
     });
     await notifyEditors(m, c, user.displayName, t.what);
     return c;
   });
   return toReview(saved);
+}
+
+/** The proposal's subject in the proposer's e-mail: "Pickup coil — resistance", or the plan's title. */
+async function whatItChanges(m: EntityManager, c: Correction): Promise<string> {
+  if (c.kind === 'plan_change') return planTitle(m, c);
+  const p = specProposalOf(c);
+  return `${p.component ?? ''}${p.component ? ' — ' : ''}${p.parameter}`;
 }
 
 export async function findVisible(user: SignedInUser, id: number): Promise<Correction> {
@@ -125,13 +147,15 @@ async function lockPending(m: EntityManager, id: number, ownerId?: number): Prom
 export async function editProposal(user: SignedInUser, id: number, b: EditProposalBody): Promise<CorrectionReviewDto> {
   const saved = await writeTransaction(async (m) => {
     const c = await lockPending(m, id, user.id);
-    if (b.values) {
-      checkAgainst(c.proposed.parameter, b.values);
-      c.proposed = {
-        ...b.values,
-        parameter: c.proposed.parameter,
-        ...(c.proposed.component ? { component: c.proposed.component } : {}),
-      };
+    if (c.kind === 'plan_change') await editPlanProposal(m, c, user, b);
+    else if (b.plan)
+      throw AppError.unprocessable('This proposal is about a spec: send values, not plan fields.', [
+        { path: 'plan', message: 'Not for a spec' },
+      ]);
+    else if (b.values) {
+      const p = specProposalOf(c);
+      checkAgainst(p.parameter, b.values);
+      c.proposed = { ...b.values, parameter: p.parameter, ...(p.component ? { component: p.component } : {}) };
     }
     if (b.citation) c.citation = { ...b.citation, url: b.citation.url ?? null };
     if (b.rationale) c.rationale = b.rationale;
@@ -157,7 +181,9 @@ export async function decide(
 ): Promise<CorrectionReviewDto> {
   const saved = await writeTransaction(async (m) => {
     const c = await lockPending(m, id);
-    if (decision.accept) c.specId = await applyCorrection(m, c, editor, decision.body.confirmStale === true);
+    const confirmStale = decision.accept && decision.body.confirmStale === true;
+    if (decision.accept && c.kind === 'plan_change') await applyPlanChange(m, c, editor, confirmStale);
+    else if (decision.accept) c.specId = await applyCorrection(m, c, editor, confirmStale);
     Object.assign(c, {
       status: decision.accept ? 'accepted' : 'rejected',
       reviewerId: editor.id,
@@ -166,13 +192,9 @@ export async function decide(
       decidedAt: new Date(),
     });
     await m.getRepository(Correction).save(c);
-    await notifyProposer(
-      m,
-      c,
-      `${c.proposed.component ?? ''}${c.proposed.component ? ' — ' : ''}${c.proposed.parameter}`,
-    );
+    await notifyProposer(m, c, await whatItChanges(m, c));
     return c;
   });
-  if (decision.accept) markLibraryChanged();
+  if (decision.accept && saved.kind !== 'plan_change') markLibraryChanged();
   return toReview(saved);
 }

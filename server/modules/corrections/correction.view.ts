@@ -13,7 +13,8 @@ import { Source } from '../library/source.entity';
 import { User } from '../users/user.entity';
 import { seesDrafts } from '../specs/spec.service';
 import type { SignedInUser } from '@/server/auth/roles';
-import type { Correction } from './correction.entity';
+import { specProposalOf, type Correction } from './correction.entity';
+import { planChangeSummary, planReview, planTitles } from './correction.plan-view';
 
 /** The fields a review compares, then the citation as one 'source' line. */
 export const COMPARED = [...REVIEWED_FIELDS, 'source'] as const;
@@ -35,7 +36,7 @@ export async function toDtos(rows: Correction[]): Promise<CorrectionDto[]> {
   if (rows.length === 0) return [];
   const repo = <T extends object>(e: new () => T) => AppDataSource.getRepository(e);
   const models = await repo(VehicleModel).find({
-    where: { id: In([...new Set(rows.map((r) => r.modelId))]) },
+    where: { id: In([...new Set(rows.map((r) => r.modelId).filter((x): x is number => x !== null))].concat(0)) },
     relations: { make: true },
   });
   const specs = await repo(Spec).find({
@@ -65,23 +66,17 @@ export async function toDtos(rows: Correction[]): Promise<CorrectionDto[]> {
     `SELECT proposer_id AS proposerId, status, COUNT(*) AS n FROM corrections WHERE proposer_id IN (?) AND status IN ('accepted','rejected') GROUP BY proposer_id, status`,
     [proposerIds],
   );
+  const planTitleOf = await planTitles(rows);
   const count = (id: number, status: string) =>
     Number(records.find((r) => Number(r.proposerId) === id && r.status === status)?.n ?? 0);
-  return rows.map((r) => {
+  return rows.map((r): CorrectionDto => {
     const spec = specs.find((s) => s.id === r.specId);
     const model = models.find((m) => m.id === r.modelId);
-    return {
+    const common = {
       id: r.id,
-      kind: r.kind,
       status: r.status,
       specId: r.specId,
       componentId: r.componentId,
-      modelId: r.modelId,
-      modelTitle: model ? modelTitle(model) : '',
-      componentName:
-        spec?.component.name ?? comps.find((c) => c.id === r.componentId)?.name ?? r.proposed.component ?? '',
-      parameter: spec?.parameter ?? r.proposed.parameter ?? '',
-      proposed: r.proposed,
       citation: r.citation,
       rationale: r.rationale,
       baseVersion: r.baseVersion,
@@ -96,6 +91,28 @@ export async function toDtos(rows: Correction[]): Promise<CorrectionDto[]> {
       decidedAt: r.decidedAt?.toISOString() ?? null,
       createdAt: r.createdAt.toISOString(),
       updatedAt: r.updatedAt.toISOString(),
+    };
+    if (r.kind === 'plan_change')
+      return {
+        ...common,
+        kind: r.kind,
+        modelId: r.modelId,
+        modelTitle: model ? modelTitle(model) : null,
+        componentName: '',
+        parameter: '',
+        proposed: null,
+        plan: planChangeSummary(r, planTitleOf.get(r.planId!)),
+      };
+    const p = specProposalOf(r);
+    return {
+      ...common,
+      kind: r.kind,
+      modelId: r.modelId!,
+      modelTitle: model ? modelTitle(model) : '',
+      componentName: spec?.component.name ?? comps.find((c) => c.id === r.componentId)?.name ?? p.component ?? '',
+      parameter: spec?.parameter ?? p.parameter ?? '',
+      proposed: p,
+      plan: null,
     };
   });
 }
@@ -120,12 +137,16 @@ async function valuesAt(specId: number, version: number | null): Promise<Values 
 /** The proposal with the three-way view; a spec turned draft since shows no current values below editor. */
 export async function toReview(r: Correction, viewer?: SignedInUser): Promise<CorrectionReviewDto> {
   const [dto] = await toDtos([r]);
+  if (dto.kind === 'plan_change') {
+    const { plan, stale, currentVersion } = await planReview(r, viewer);
+    return { ...dto, plan, stale, currentVersion, fields: [] };
+  }
   const found =
     r.specId && r.kind === 'change' ? await AppDataSource.getRepository(Spec).findOneBy({ id: r.specId }) : null;
   const spec = found && (found.status === 'published' || !viewer || seesDrafts(viewer)) ? found : null;
   const current = spec ? await valuesOfSpec(spec) : null;
   const before = spec ? await valuesAt(spec.id, r.baseVersion) : null;
-  const p = r.proposed;
+  const p = dto.proposed;
   const proposed = reviewValues(
     { ...p, material: p.material ?? current?.material ?? null },
     citationText(r.citation, r.citation.page),

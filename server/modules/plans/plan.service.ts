@@ -154,6 +154,28 @@ export async function createPlan(body: PlanBody, actor: Actor): Promise<PlanDto>
   return toPlanDto(await AppDataSource.transaction((m) => createPlanIn(m, body, actor, 'Created')));
 }
 
+/**
+ * The plan with `changes` over `before`, checked by the editors' rules (422 at the changed
+ * field's path under `prefix`), and the model it resolves to. Writes nothing: an edit and a
+ * contributor's proposal (corrections) share it.
+ */
+export async function checkPlanChange(
+  m: EntityManager,
+  before: PlanBody,
+  changes: Partial<PlanBody>,
+  prefix = '',
+): Promise<{ next: PlanBody; modelId: number | null }> {
+  // A new modelId without a model key replaces the old key; a new key wins over both.
+  const next: PlanBody = {
+    ...before,
+    ...changes,
+    model: changes.model ?? (changes.modelId !== undefined ? undefined : before.model),
+  };
+  const modelId = await resolveModelId(next, m, prefix);
+  await checkPlan(next, modelId, m, prefix);
+  return { next, modelId };
+}
+
 export async function updatePlanIn(
   m: EntityManager,
   id: number,
@@ -168,14 +190,7 @@ export async function updatePlanIn(
     throw AppError.conflict(`This plan was changed since version ${body.version}.`, { current: toPlanDto(current) });
   const before = toPlanBody(current);
   const { version: _v, reason, ...changes } = body;
-  // A new modelId without a model key replaces the old key; a new key wins over both.
-  const next: PlanBody = {
-    ...before,
-    ...changes,
-    model: changes.model ?? (changes.modelId !== undefined ? undefined : before.model),
-  };
-  const modelId = await resolveModelId(next, m, prefix);
-  await checkPlan(next, modelId, m, prefix);
+  const { next, modelId } = await checkPlanChange(m, before, changes, prefix);
   const { model: _key, ...fields } = next;
   await plans.update(id, { ...fields, modelId, version: current.version + 1 });
   const saved = (await plans.findWithModel(id))!;
