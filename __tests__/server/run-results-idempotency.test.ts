@@ -95,4 +95,25 @@ describe('POST /api/jobs/:jobId/runs/:runId/results with an Idempotency-Key', ()
     expect(answers.map((r) => r.status).sort()).toEqual([200, 200, 201]);
     expect(await resultsWith(key)).toBe(1);
   });
+
+  it('a key already spent on this job (a reading, or another run) is refused with 422, not a server error', async () => {
+    const { jobId, runId } = await started();
+    const key = newKey();
+    const reading = await request(app)
+      .post(`/api/jobs/${jobId}/readings`)
+      .set(await tech())
+      .set('Idempotency-Key', key)
+      .send({ label: 'battery at rest', spec: { min: 12.4, unit: 'V' }, reading: { value: 12.8, unit: 'V' } });
+    expect(reading.status).toBe(201);
+    expectProblem(await post(jobId, runId, key, battery(12.8)), 422, 'idempotency_key_reused');
+    expect(await resultsWith(key)).toBe(0);
+
+    const other = newKey();
+    expect((await post(jobId, runId, other, battery(12.8))).status).toBe(201);
+    const second = await request(app)
+      .post(`/api/jobs/${jobId}/runs`)
+      .set(await tech())
+      .send({ planId: (await request(app).get('/api/plans?q=no%20spark')).body[0].id });
+    expectProblem(await post(jobId, second.body.id, other, battery(12.8)), 422, 'idempotency_key_reused');
+  });
 });

@@ -173,6 +173,14 @@ export async function answerStep(
       assertSameRequest(seen.requestHash, request.hash, 'result on this run');
       return { ...(await answerOf(m, run, seen, parts)), created: false };
     }
+    // The step's reading is kept under the same key: a key already spent on this job (a reading,
+    // or another run's result) is another request, refused before anything is written.
+    if (await m.withRepository(ReadingRepository).findByKey(jobId, idempotencyKey))
+      throw new AppError(
+        422,
+        'idempotency_key_reused',
+        'This Idempotency-Key was already used for another request on this job. Send a new key with a new result.',
+      );
     if (run.status === 'concluded')
       throw AppError.conflict('This run has reached its finding. Go back a step to change it.');
     if (body.stepId !== run.currentStep)
