@@ -203,4 +203,14 @@ describe('queued jobs: the runner', () => {
     expect(up).not.toHaveBeenCalled();
     expect(runner.getSnapshot().jobs).toHaveLength(1);
   });
+
+  it('a reading for a job that was refused is refused at once, not kept waiting for ever', async () => {
+    const { storage } = memory();
+    const refused = new ApiError(422, 'unprocessable', 'No model with id 9 in the library.');
+    const runner = new ReadingQueueRunner(storage, jest.fn(), options(jest.fn().mockRejectedValue(refused)));
+    expect((await runner.addJob(newJob())).status).toBe('rejected');
+    const outcome = await runner.add({ userId: 1, jobId: -1, body, preview });
+    expect(outcome).toEqual({ status: 'rejected', message: expect.stringMatching(/^Its job was not saved/) });
+    expect(runner.getSnapshot().pending).toEqual([]);
+  });
 });

@@ -136,8 +136,12 @@ export class ReadingQueueRunner {
       }),
     );
     const item = queued.pending.find((p) => p.key === key)!;
-    if (isLocalJobId(item.jobId)) return { status: 'queued', key };
-    return this.attempt(item);
+    if (!isLocalJobId(item.jobId)) return this.attempt(item);
+    if (queued.jobs.some((j) => j.localId === item.jobId && j.userId === item.userId)) return { status: 'queued', key };
+    // Its job was refused (or belongs to no one here): the reading cannot go anywhere; say so now.
+    const message = 'Its job was not saved, so the reading has nowhere to go. Add it to another job.';
+    await this.change((s) => rejectPending(s, key, 422, message));
+    return { status: 'rejected', message };
   };
 
   /**
