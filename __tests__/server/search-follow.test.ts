@@ -141,6 +141,7 @@ describe('GET /api/search limits', () => {
     expect(fresh.ageSeconds(now)).toBeLessThan(2);
     // Ten seconds on with no poll in between (the follower stopped): the index is ten seconds old.
     fresh.stop();
+    await fresh.follower.poll(); // nothing left in flight when the test ends
     expect(fresh.ageSeconds(now + 10_000)).toBeGreaterThanOrEqual(10);
     expect(fresh.ageSeconds(now + 10_000)).toBeLessThan(12);
   });

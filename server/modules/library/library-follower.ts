@@ -60,7 +60,7 @@ export class LibraryFollower {
     this.resets += 1;
   }
 
-  /** One poll; overlapping calls share it and one more poll runs after it. */
+  /** One poll; overlapping calls share it, and one more runs after it while the follower is started. */
   poll(): Promise<void> {
     if (this.polling) {
       this.again = true;
@@ -70,10 +70,9 @@ export class LibraryFollower {
       .catch(() => undefined)
       .finally(() => {
         this.polling = null;
-        if (this.again) {
-          this.again = false;
-          void this.poll();
-        }
+        const again = this.again && this.timer !== null;
+        this.again = false;
+        if (again) void this.poll();
       });
     return this.polling;
   }
