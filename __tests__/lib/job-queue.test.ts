@@ -16,6 +16,7 @@ import {
   nextLocalJobId,
   parseQueue,
   queuedJobSummary,
+  queuedJobsMatching,
   resolveJob,
   sendable,
   waitingFor,
@@ -121,6 +122,14 @@ describe('queued jobs: the pure rules', () => {
       notes: null,
       counts: { pass: 0, marginal: 0, fail: 0 },
     });
+  });
+
+  it('My jobs shows a queued job for a search on what it says, never under "closed"', () => {
+    const j = queuedJobSummary({ ...job(-1), body: { machineLabel: 'Blue quad', customerRef: 'R-77' } }, 'Dana');
+    expect(queuedJobsMatching([j], '  r-77 ', undefined)).toEqual([j]);
+    expect(queuedJobsMatching([j], 'blue', 'open')).toEqual([j]);
+    expect(queuedJobsMatching([j], 'green', undefined)).toEqual([]);
+    expect(queuedJobsMatching([j], '', 'closed')).toEqual([]);
   });
 
   it.each([

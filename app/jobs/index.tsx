@@ -14,6 +14,7 @@ import { describeError } from '@/lib/api/describe-error';
 import { useDebouncedValue } from '@/lib/hooks/use-debounced-value';
 import { useJobsQuery } from '@/lib/hooks/use-jobs';
 import { useReadingQueue } from '@/lib/hooks/use-reading-queue';
+import { queuedJobsMatching } from '@/lib/offline/reading-queue';
 import { useSession } from '@/lib/session/session-provider';
 import { Spacing } from '@/lib/theme';
 
@@ -71,17 +72,10 @@ export default function JobsScreen() {
 }
 
 function JobsArea({ q, status, onOpen }: { q: string; status: StatusFilter; onOpen: (id: number) => void }) {
-  const jobs = useJobsQuery({ q, status: status === 'all' ? undefined : status });
-  // Jobs started on this device and not sent yet: open, shown first, matched on what they say.
-  const words = q.trim().toLocaleLowerCase();
-  const queued = useReadingQueue().queuedJobs.filter(
-    (j) =>
-      status !== 'closed' &&
-      (!words ||
-        [j.modelTitle, j.machineLabel, j.machineId, j.customerRef, j.notes].some((f) =>
-          f?.toLocaleLowerCase().includes(words),
-        )),
-  );
+  const filter = status === 'all' ? undefined : status;
+  const jobs = useJobsQuery({ q, status: filter });
+  // Jobs started on this device and not sent yet come first.
+  const queued = queuedJobsMatching(useReadingQueue().queuedJobs, q, filter);
   const list = queued.length ? <JobList jobs={[...queued, ...(jobs.data ?? [])]} onOpen={onOpen} /> : null;
   if (jobs.isPending && jobs.fetchStatus === 'paused')
     return (

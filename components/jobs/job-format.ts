@@ -4,6 +4,7 @@
  */
 import { MEASUREMENT_MODE_LABEL, type MeasurementMode } from '@/lib/contracts/enums';
 import type { JobSummaryDto, ReadingDto } from '@/lib/contracts/jobs';
+import { capitalised } from '@/lib/format/capitalised';
 import { isLocalJobId } from '@/lib/offline/reading-queue';
 import { formatNumber, formatRange, type CanonicalUnit } from '@/lib/units';
 import type { VerdictResult, VerdictStep } from '@/lib/verdict';
@@ -19,8 +20,6 @@ export function jobRef(id: number): string {
 export function jobTag(id: number): string {
   return isLocalJobId(id) ? 'New, not sent yet' : `#${id}`;
 }
-
-export const capitalised = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
 export function machineName(job: Pick<JobSummaryDto, 'id' | 'modelTitle' | 'machineLabel'>): string {
   if (job.modelTitle && job.machineLabel) return `${job.modelTitle} — ${job.machineLabel}`;

@@ -5,12 +5,12 @@ import { fieldsWith, type FieldRule } from '@/lib/contracts/spec-fields';
 import { Spacing } from '@/lib/theme';
 import { Text } from '../ui/text';
 import { FormChoice, FormField, type SpecControl } from './form-field';
+import { capitalised } from '@/lib/format/capitalised';
 
 const UNITS = CANONICAL_UNITS.map((u) => ({ value: u, label: u }));
 const decimal = { inputMode: 'decimal', keyboardType: 'decimal-pad' } as const;
 /** Words for enum values the list names by code. */
 const VALUE_WORDS: Readonly<Record<string, string>> = { ...MEASUREMENT_MODE_LABEL };
-const capitalised = (v: string) => v.charAt(0).toUpperCase() + v.slice(1);
 
 type Field = ReturnType<typeof fieldsWith<'editable'>>[number];
 const FIELDS = fieldsWith('editable');

@@ -6,7 +6,7 @@
  */
 import { useState } from 'react';
 import type { RunDto, RunResultBody, RunResultDto } from '../contracts/plans';
-import { judgeOnDevice, StepResultError } from '../plans/judge-step';
+import { judgeOnDevice } from '../plans/judge-step';
 import { withWaiting, type LocalRun } from '../plans/local-run';
 import { useReadingQueue } from './use-reading-queue';
 
@@ -28,7 +28,8 @@ export function useRunAnswer(jobId: number, runId: number, run: RunDto | undefin
     try {
       judged = judgeOnDevice(step, full);
     } catch (err) {
-      setFailure(err instanceof StepResultError || err instanceof Error ? err.message : String(err));
+      // A result the step cannot take (StepResultError), or an input the engine refuses.
+      setFailure(err instanceof Error ? err.message : String(err));
       return;
     }
     setSending(true);

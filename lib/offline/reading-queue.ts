@@ -198,6 +198,25 @@ export function sentJobId(state: QueueState, userId: number, localId: number): n
   return state.sentJobs.find((j) => j.userId === userId && j.localId === localId)?.jobId ?? null;
 }
 
+/**
+ * The queued jobs My jobs shows for a search and a status filter: they are open, and match
+ * on what they say (machine, VIN, customer, notes, model), as the server's search does.
+ */
+export function queuedJobsMatching(
+  jobs: JobSummaryDto[],
+  q: string,
+  status: 'open' | 'closed' | undefined,
+): JobSummaryDto[] {
+  if (status === 'closed') return [];
+  const words = q.trim().toLocaleLowerCase();
+  if (!words) return jobs;
+  return jobs.filter((j) =>
+    [j.modelTitle, j.machineLabel, j.machineId, j.customerRef, j.notes].some((f) =>
+      f?.toLocaleLowerCase().includes(words),
+    ),
+  );
+}
+
 /** A queued job as the pickers and lists show jobs: open, no readings stored yet. */
 export function queuedJobSummary(job: QueuedJob, ownerName: string): JobSummaryDto {
   return {

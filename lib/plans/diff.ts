@@ -5,6 +5,7 @@
  * proposal and on the editor's review, so nobody has to read two JSON documents side by side.
  */
 import type { PlanBody, PlanStep } from '../contracts/plans';
+import { sameJson } from '../format/canonical-json';
 
 export const STEP_FIELDS = [
   'title',
@@ -52,21 +53,6 @@ export type PlanDiff = {
 /** The plan as compared: its fields (the model by id: the natural key is not compared) and its steps. */
 export type ComparablePlan = Partial<Omit<PlanBody, 'steps'>> & { steps: PlanStep[] };
 
-/** JSON with object keys sorted, so `{a, b}` equals `{b, a}`; absent and undefined are the same. */
-function canonical(v: unknown): string {
-  if (Array.isArray(v)) return `[${v.map(canonical).join(',')}]`;
-  if (v && typeof v === 'object')
-    return `{${Object.keys(v)
-      .filter((k) => (v as Record<string, unknown>)[k] !== undefined)
-      .sort()
-      .map((k) => `${JSON.stringify(k)}:${canonical((v as Record<string, unknown>)[k])}`)
-      .join(',')}}`;
-  return JSON.stringify(v ?? null);
-}
-
-/** The same JSON value, whatever the order of object keys. */
-export const sameValue = (a: unknown, b: unknown) => canonical(a) === canonical(b);
-const same = sameValue;
 /** Empty lists are what the schema defaults to, so a step without `cautions` has none. */
 const field = (s: PlanStep, f: StepField) => s[f] ?? (f === 'preconditions' || f === 'cautions' ? [] : undefined);
 
@@ -77,7 +63,7 @@ export function planDiff(before: ComparablePlan, after: ComparablePlan): PlanDif
   const changed: PlanDiff['changed'] = [];
   for (const s of after.steps) {
     const was = old.get(s.id);
-    const fields = was ? STEP_FIELDS.filter((f) => !same(field(was, f), field(s, f))) : [];
+    const fields = was ? STEP_FIELDS.filter((f) => !sameJson(field(was, f), field(s, f))) : [];
     if (fields.length) changed.push({ ...ref(s), fields });
   }
   const shared = (steps: PlanStep[], keep: (id: string) => boolean) => steps.map((s) => s.id).filter(keep);
@@ -85,12 +71,12 @@ export function planDiff(before: ComparablePlan, after: ComparablePlan): PlanDif
     added: after.steps.filter((s) => !old.has(s.id)).map(ref),
     removed: before.steps.filter((s) => !next.has(s.id)).map(ref),
     changed,
-    reordered: !same(
+    reordered: !sameJson(
       shared(before.steps, (id) => next.has(id)),
       shared(after.steps, (id) => old.has(id)),
     ),
     planFields: PLAN_FIELDS.filter((f) =>
-      f === 'model' ? !same(before.modelId, after.modelId) : !same(before[f], after[f]),
+      f === 'model' ? !sameJson(before.modelId, after.modelId) : !sameJson(before[f], after[f]),
     ),
   };
 }

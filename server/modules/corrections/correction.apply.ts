@@ -21,6 +21,23 @@ import { specProposalOf, type Correction } from './correction.entity';
 import { toReview } from './correction.view';
 
 /** The proposer as the author of the accepted change (the editor named beside it), and the revision's reason. */
+/** Accepting over a later version than the proposal's needs the editor's word that they compared (409 otherwise). */
+export async function assertNotStale(
+  c: Correction,
+  current: { version: number },
+  confirmStale: boolean,
+  what: string,
+  compare: string,
+) {
+  if (current.version === c.baseVersion || confirmStale) return;
+  throw new AppError(
+    409,
+    'stale_proposal',
+    `The ${what} changed after this proposal was made (version ${c.baseVersion} → ${current.version}). ${compare} and accept again with confirmStale: true.`,
+    { review: await toReview(c) },
+  );
+}
+
 export async function credit(m: EntityManager, c: Correction, editor: SignedInUser) {
   const proposer = await m.getRepository(User).findOneByOrFail({ id: c.proposerId });
   return {
@@ -53,14 +70,7 @@ async function applyChange(
     .getRepository(Spec)
     .findOne({ where: { id: c.specId! }, lock: { mode: 'pessimistic_write' } });
   if (!current) throw AppError.notFound('spec', c.specId!);
-  if (current.version !== c.baseVersion && !confirmStale) {
-    throw new AppError(
-      409,
-      'stale_proposal',
-      `The spec changed after this proposal was made (version ${c.baseVersion} → ${current.version}). Compare the three and accept again with confirmStale: true.`,
-      { review: await toReview(c) },
-    );
-  }
+  await assertNotStale(c, current, confirmStale, 'spec', 'Compare the three');
   const { spec, source } = await lockSpec(m, current.id, current.version);
   const values: SpecValues = {
     ...pickValues(spec),

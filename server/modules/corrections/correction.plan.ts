@@ -13,7 +13,8 @@ import {
   type PlanProposeBody,
   type ProposedPlan,
 } from '@/lib/contracts/corrections';
-import { isEmptyDiff, planDiff, sameValue } from '@/lib/plans/diff';
+import { sameJson } from '@/lib/format/canonical-json';
+import { isEmptyDiff, planDiff } from '@/lib/plans/diff';
 import { AppError } from '@/server/errors/app-error';
 import { roleAtLeast, type SignedInUser } from '@/server/auth/roles';
 import type { Plan } from '../plans/plan.entity';
@@ -21,9 +22,8 @@ import { toPlanBody } from '../plans/plan.mapper';
 import { PlanRepository } from '../plans/plan.repository';
 import { checkPlanChange, updatePlanIn } from '../plans/plan.service';
 import type { Correction } from './correction.entity';
-import { credit } from './correction.apply';
+import { assertNotStale, credit } from './correction.apply';
 import { proposedOver, proposedPlanOf } from './correction.plan-view';
-import { toReview } from './correction.view';
 
 /** The published plan a contributor may propose against; a draft is not theirs to see (404), nor an editor's to propose on. */
 async function proposablePlan(m: EntityManager, id: number, user: SignedInUser): Promise<Plan> {
@@ -55,7 +55,7 @@ async function checkedProposal(
   const { model, ...fields } = proposed;
   const all: ProposedPlan = model !== undefined || fields.modelId !== undefined ? { ...fields, modelId } : fields;
   const stored = Object.fromEntries(
-    Object.entries(all).filter(([k, v]) => !sameValue(v, before[k as keyof typeof before])),
+    Object.entries(all).filter(([k, v]) => !sameJson(v, before[k as keyof typeof before])),
   ) as ProposedPlan;
   if (isEmptyDiff(planDiff(before, proposedOver(before, { proposed: { plan: stored }, citation: { ...citation } }))))
     throw AppError.unprocessable('The proposal changes nothing in this plan.', [
@@ -101,14 +101,7 @@ export async function planTitle(m: EntityManager, c: Correction): Promise<string
 export async function applyPlanChange(m: EntityManager, c: Correction, editor: SignedInUser, confirmStale: boolean) {
   const current = await m.withRepository(PlanRepository).lockById(c.planId!);
   if (!current) throw AppError.notFound('plan', c.planId!);
-  if (current.version !== c.baseVersion && !confirmStale) {
-    throw new AppError(
-      409,
-      'stale_proposal',
-      `The plan changed after this proposal was made (version ${c.baseVersion} → ${current.version}). Compare the changes and accept again with confirmStale: true.`,
-      { review: await toReview(c) },
-    );
-  }
+  await assertNotStale(c, current, confirmStale, 'plan', 'Compare the changes');
   const { actor } = await credit(m, c, editor);
   const reason = `Correction #${c.id}: ${c.rationale.split('\n')[0].trim()}`.slice(0, 500);
   const body = { ...proposedPlanOf(c), citation: toPlanCitation(c.citation), version: current.version, reason };

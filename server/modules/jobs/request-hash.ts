@@ -6,18 +6,8 @@
  * turn a reading queued offline before an upgrade into a "different" request.
  */
 import { createHash } from 'node:crypto';
+import { canonicalJson } from '@/lib/format/canonical-json';
 import { AppError } from '@/server/errors/app-error';
-
-export function canonicalJson(value: unknown): string {
-  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(',')}]`;
-  if (value !== null && typeof value === 'object') {
-    const entries = Object.entries(value as Record<string, unknown>)
-      .filter(([, v]) => v !== undefined)
-      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
-    return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonicalJson(v)}`).join(',')}}`;
-  }
-  return JSON.stringify(value) ?? 'null';
-}
 
 export const requestHash = (body: unknown) => createHash('sha256').update(canonicalJson(body)).digest('hex');
 
