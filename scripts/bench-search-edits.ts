@@ -13,9 +13,9 @@ import type { IndexedSpec } from '@/server/modules/search/search.queries';
 import { foldKey } from '@/server/modules/library/keys';
 import { recordSpecChange } from '@/server/modules/library/library-changes';
 
-async function until(check: () => boolean): Promise<number> {
+async function until(check: () => Promise<boolean>): Promise<number> {
   const t = performance.now();
-  while (!check() && performance.now() - t < 10_000) await sleep(5);
+  while (!(await check()) && performance.now() - t < 10_000) await sleep(5);
   return performance.now() - t;
 }
 
@@ -30,8 +30,8 @@ async function setParameter(id: number, parameter: string) {
   });
 }
 
-const finds = (index: SearchIndex<IndexedSpec>, q: string, id: number) =>
-  index.search(q, 40).matches.some((m) => m.doc.specId === id);
+const finds = async (index: SearchIndex<IndexedSpec>, q: string, id: number) =>
+  (await index.searchAsync(q, 40)).matches.some((m) => m.doc.specId === id);
 
 export async function followEdits(engine: SearchEngine, index: SearchIndex<IndexedSpec>) {
   engine.follower.start();
@@ -42,7 +42,7 @@ export async function followEdits(engine: SearchEngine, index: SearchIndex<Index
   await setParameter(spec.id, `${word} resistance`);
   const edit = await until(() => finds(index, word, spec.id));
   await setParameter(spec.id, spec.parameter);
-  const revert = await until(() => !finds(index, word, spec.id));
+  const revert = await until(async () => !(await finds(index, word, spec.id)));
   const created = await AppDataSource.transaction(async (m) => {
     const r = await m.query(
       `INSERT INTO specs (component_id, parameter, parameter_key, quantity_kind, nominal_value, unit, status, version)

@@ -59,7 +59,7 @@ async function runMix(queries: BenchQuery[], search: (q: string) => Promise<stri
 }
 
 const ourKeys = (index: SearchIndex<IndexedSpec>) => async (q: string) =>
-  index.search(q, LIMIT).matches.map((m) => `${m.doc.make}|${m.doc.model}|${m.doc.parameter}`);
+  (await index.searchAsync(q, LIMIT)).matches.map((m) => `${m.doc.make}|${m.doc.model}|${m.doc.parameter}`);
 
 async function fulltextKeys(q: string): Promise<string[]> {
   const rows: { id: number }[] = await AppDataSource.query(
@@ -116,7 +116,7 @@ async function main() {
   for (const [what, q] of ADVERSARIAL) {
     for (let i = 0; i < 3; i += 1) {
       const t0 = performance.now();
-      index.search(q, LIMIT);
+      await index.searchAsync(q, LIMIT);
       const took = performance.now() - t0;
       if (took > worst.ms) worst = { what, ms: took };
       await tick();

@@ -1,8 +1,30 @@
 /**
  * The search index's storage (search-index.ts): posting lists and the slot table in
  * growable typed arrays, and the per-query working arrays. Typed arrays keep a million
- * specs' postings compact (5 bytes an entry) and their loops fast.
+ * specs' postings compact (5 bytes an entry) and their loops fast. The working arrays'
+ * loops are generators that pause every PAUSE_EVERY iterations, so a query over a million
+ * slots can give the event loop a turn (SearchIndex.searchAsync).
  */
+/** Loop iterations between two points where a query may pause. */
+export const PAUSE_EVERY = 16_384;
+
+/**
+ * Runs `work` over [0, n) in chunks of `chunk`, pausing (yielding) between two chunks; stops
+ * early, returning true, when `work` returns true. The hot loops stay in plain functions
+ * (`work`), which V8 optimises better than loops inside a generator.
+ */
+export function* inChunks(
+  n: number,
+  work: (from: number, to: number) => boolean | void,
+  chunk = PAUSE_EVERY,
+): Generator<void, boolean> {
+  for (let from = 0; from < n; from += chunk) {
+    if (work(from, Math.min(n, from + chunk)) === true) return true;
+    if (from + chunk < n) yield;
+  }
+  return false;
+}
+
 function grown<T extends Int32Array | Uint8Array | Int16Array | Float32Array>(a: T, size: number): T {
   const b = new (a.constructor as new (n: number) => T)(size);
   b.set(a);
@@ -75,7 +97,7 @@ export class SlotTable<D extends { specId: number; yearFrom: number; yearTo: num
   }
 }
 
-/** Per-slot working arrays, reused by every query (search is synchronous, so one set suffices). */
+/** Per-slot working arrays, reused by every query (the index runs one query at a time). */
 export class Scratch {
   score = new Float32Array(0);
   best = new Float32Array(0);
@@ -106,12 +128,14 @@ export class Scratch {
     return { slot: this.markSlot, weight: this.markWeight };
   }
 
-  reset() {
-    for (let i = 0; i < this.count; i += 1) {
-      const slot = this.touched[i];
-      this.score[slot] = 0;
-      this.hits[slot] = 0;
-    }
+  *reset(): Generator<void, void> {
+    const { touched, score, hits } = this;
+    yield* inChunks(this.count, (from, to) => {
+      for (let i = from; i < to; i += 1) {
+        score[touched[i]] = 0;
+        hits[touched[i]] = 0;
+      }
+    });
     this.count = 0;
   }
 
@@ -123,53 +147,75 @@ export class Scratch {
   }
 
   /** Adds the word's best match per slot into the scores. */
-  commitWord() {
-    for (let i = 0; i < this.wordCount; i += 1) {
-      const slot = this.wordTouched[i];
-      if (this.hits[slot] === 0) this.touched[this.count++] = slot;
-      this.score[slot] += this.best[slot];
-      this.hits[slot] += 1;
-      this.best[slot] = 0;
-    }
+  *commitWord(): Generator<void, void> {
+    const { wordTouched, touched, score, best, hits } = this;
+    yield* inChunks(this.wordCount, (from, to) => {
+      let count = this.count;
+      for (let i = from; i < to; i += 1) {
+        const slot = wordTouched[i];
+        if (hits[slot] === 0) touched[count++] = slot;
+        score[slot] += best[slot];
+        hits[slot] += 1;
+        best[slot] = 0;
+      }
+      this.count = count;
+    });
     this.wordCount = 0;
   }
 
-  hasHits(n: number) {
-    for (let i = 0; i < this.count; i += 1) if (this.hits[this.touched[i]] >= n) return true;
-    return false;
+  *hasHits(n: number): Generator<void, boolean> {
+    const { touched, hits } = this;
+    return yield* inChunks(this.count, (from, to) => {
+      for (let i = from; i < to; i += 1) if (hits[touched[i]] >= n) return true;
+      return false;
+    });
   }
 
-  mostHits() {
+  *mostHits(): Generator<void, number> {
+    const { touched, hits } = this;
     let most = 0;
-    for (let i = 0; i < this.count; i += 1) most = Math.max(most, this.hits[this.touched[i]]);
+    yield* inChunks(this.count, (from, to) => {
+      for (let i = from; i < to; i += 1) if (hits[touched[i]] > most) most = hits[touched[i]];
+    });
     return most;
   }
 
   /** The best `limit` slots with at least `needed` hits, and how many there are; clears the scores. */
-  top<D extends { specId: number }>(needed: number, limit: number, words: number, slots: (D | null)[]) {
+  *top<D extends { specId: number }>(
+    needed: number,
+    limit: number,
+    words: number,
+    slots: (D | null)[],
+  ): Generator<void, { matches: { doc: D; score: number }[]; total: number }> {
     const top: { doc: D; score: number }[] = [];
     let total = 0;
     // Compared as plain numbers first: most matches never enter the top and allocate nothing.
     let floorScore = -1;
     let floorId = 0;
-    for (let i = 0; i < this.count; i += 1) {
-      const slot = this.touched[i];
-      const doc = slots[slot];
-      if (needed === 0 || this.hits[slot] < needed || doc === null) continue;
-      total += 1;
-      const score = this.score[slot] / words;
-      if (top.length === limit && (score < floorScore || (score === floorScore && doc.specId > floorId))) continue;
-      let j = top.length;
-      while (j > 0 && (top[j - 1].score < score || (top[j - 1].score === score && top[j - 1].doc.specId > doc.specId)))
-        j -= 1;
-      top.splice(j, 0, { doc, score });
-      if (top.length > limit) top.pop();
-      if (top.length === limit) {
-        floorScore = top[limit - 1].score;
-        floorId = top[limit - 1].doc.specId;
+    const { touched, hits } = this;
+    yield* inChunks(this.count, (from, to) => {
+      for (let i = from; i < to; i += 1) {
+        const slot = touched[i];
+        const doc = slots[slot];
+        if (needed === 0 || hits[slot] < needed || doc === null) continue;
+        total += 1;
+        const score = this.score[slot] / words;
+        if (top.length === limit && (score < floorScore || (score === floorScore && doc.specId > floorId))) continue;
+        let j = top.length;
+        while (
+          j > 0 &&
+          (top[j - 1].score < score || (top[j - 1].score === score && top[j - 1].doc.specId > doc.specId))
+        )
+          j -= 1;
+        top.splice(j, 0, { doc, score });
+        if (top.length > limit) top.pop();
+        if (top.length === limit) {
+          floorScore = top[limit - 1].score;
+          floorId = top[limit - 1].doc.specId;
+        }
       }
-    }
-    this.reset();
+    });
+    yield* this.reset();
     return { matches: top, total };
   }
 }

@@ -3,7 +3,8 @@
  * build reads the published specs page by page and yields to the event loop between pages,
  * while the old index (if any) keeps answering; it swaps in when complete. After that the
  * index follows library_changes (library-follower.ts): the specs a change names are read
- * again and replaced or removed, so an edit anywhere shows here within a poll. A full
+ * again and replaced or removed between two queries, so an edit anywhere shows here within
+ * a poll. A full
  * build runs again only when a change names very many specs or replaced entries pile up.
  */
 import { setImmediate as yieldToLoop } from 'node:timers/promises';
@@ -85,8 +86,11 @@ export class SearchEngine {
       const docs = await loadPublishedByIds(slice);
       const index = this.index;
       const published = new Set(docs.map((d) => d.specId));
-      for (const id of slice) if (!published.has(id)) index.remove(id);
-      await addInSlices(index, docs);
+      // Between two queries, so a query in flight sees the index as it started.
+      await index.exclusive(async () => {
+        for (const id of slice) if (!published.has(id)) index.remove(id);
+        await addInSlices(index, docs);
+      });
     }
     if (this.index.wasted > MAX_WASTED && this.index.size > 10_000) void this.rebuild();
   }

@@ -10,11 +10,20 @@
  * words and POSTING_BUDGET posting entries per query. Specs are added, replaced and removed
  * one at a time (a removed slot is skipped until the next full build), so an edit needs no
  * rebuild.
+ *
+ * A query is a generator that pauses every PAUSE_EVERY loop iterations: `searchAsync` runs
+ * it in slices of at most SLICE_MS and gives the event loop a turn between them, so a query
+ * over a million slots never holds up other requests for long. Queries take turns (they
+ * share one set of working arrays), and changes wait for the query in flight
+ * (`exclusive`), so a query sees the index as it was when it started.
  */
+import { performance } from 'node:perf_hooks';
+import { setImmediate as yieldToLoop } from 'node:timers/promises';
+import { Mutex } from 'async-mutex';
 import { SEARCH_MAX_WORDS } from '@/lib/contracts/library';
 import { FIELD_WEIGHT, STOP_WORDS, cachedSynonymTokens, isNumber, tokenize, yearOf } from './search-tokens';
 import { TermVocabulary, type TermMatch } from './term-vocabulary';
-import { Posting, Scratch, SlotTable } from './postings';
+import { inChunks, Posting, Scratch, SlotTable } from './postings';
 
 export { tokenize } from './search-tokens';
 
@@ -38,6 +47,12 @@ export const MAX_QUERY_WORDS = SEARCH_MAX_WORDS;
 const POSTING_BUDGET = 2_500_000;
 /** What checking one candidate's own terms costs, in posting entries walked (measured roughly). */
 const FORWARD_COST = 24;
+/** The longest a query runs before it gives the event loop a turn. */
+const SLICE_MS = 8;
+/** Candidates checked between two pause points (each walks its own terms, FORWARD_COST entries). */
+const CANDIDATE_CHUNK = 1024;
+
+type Step<T> = Generator<void, T>;
 
 type Word = { year: number | null; terms: TermMatch[]; cost: number };
 
@@ -48,8 +63,13 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
   private readonly scratch = new Scratch();
   /** Term ids of a field's text, per distinct text (a million specs share a few thousand names). */
   private readonly textTerms = new Map<string, Int32Array>();
+  private readonly turn = new Mutex();
 
-  constructor(docs: Iterable<D> = []) {
+  private readonly sliceMs: number;
+
+  /** `sliceMs`: how long a query runs before giving the event loop a turn (tests use 0). */
+  constructor(docs: Iterable<D> = [], options: { sliceMs?: number } = {}) {
+    this.sliceMs = options.sliceMs ?? SLICE_MS;
     for (const d of docs) this.upsert(d);
   }
 
@@ -122,25 +142,30 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
    * Adds one word's best match per slot into the scores. With `only` (the number of words
    * already taken), slots that missed an earlier word are passed over. Returns the entries visited.
    */
-  private scoreWord(w: Word, budget: number, only: number | null): number {
+  private *scoreWord(w: Word, budget: number, only: number | null): Step<number> {
     const s = this.scratch;
     const { alive, yearFrom, yearTo } = this.table;
     const eligible = (slot: number) => alive[slot] === 1 && (only === null || s.hits[slot] === only);
     let visited = 0;
-    if (w.year !== null && only !== null && only > 0) {
-      for (let i = 0; i < s.count; i += 1) {
-        const slot = s.touched[i];
-        if (s.hits[slot] === only && yearFrom[slot] <= w.year && w.year <= yearTo[slot]) s.offer(slot, 1);
-      }
+    const year = w.year;
+    if (year !== null && only !== null && only > 0) {
+      const { touched, hits } = s;
+      yield* inChunks(s.count, (from, to) => {
+        for (let i = from; i < to; i += 1) {
+          const slot = touched[i];
+          if (hits[slot] === only && yearFrom[slot] <= year && year <= yearTo[slot]) s.offer(slot, 1);
+        }
+      });
       visited += s.count;
-    } else if (w.year !== null) {
-      for (let slot = 0; slot < alive.length && slot < this.table.slots.length; slot += 1) {
-        if (eligible(slot) && yearFrom[slot] <= w.year && w.year <= yearTo[slot]) s.offer(slot, 1);
-      }
+    } else if (year !== null) {
+      yield* inChunks(Math.min(alive.length, this.table.slots.length), (from, to) => {
+        for (let slot = from; slot < to; slot += 1)
+          if (eligible(slot) && yearFrom[slot] <= year && year <= yearTo[slot]) s.offer(slot, 1);
+      });
       visited += this.table.slots.length;
     }
     if (only !== null && only > 0 && w.year === null && s.count * FORWARD_COST < w.cost)
-      return visited + this.scoreCandidates(w, only);
+      return visited + (yield* this.scoreCandidates(w, only));
     for (const { term, quality } of w.terms) {
       const p = this.postings[term];
       if (!p || visited >= budget) continue;
@@ -149,14 +174,16 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
       const { slots, weights } = p;
       const hits = s.hits;
       const q = quality / 10;
-      if (only === null) {
-        for (let i = 0; i < end; i += 1) if (alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
-      } else {
-        for (let i = 0; i < end; i += 1)
-          if (hits[slots[i]] === only && alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
-      }
+      yield* inChunks(end, (from, to) => {
+        if (only === null) {
+          for (let i = from; i < to; i += 1) if (alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
+        } else {
+          for (let i = from; i < to; i += 1)
+            if (hits[slots[i]] === only && alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
+        }
+      });
     }
-    s.commitWord();
+    yield* s.commitWord();
     return visited;
   }
 
@@ -177,48 +204,92 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
    * A later word when few candidates are left: each candidate's own terms are checked
    * against the word's, instead of walking the word's (long) postings.
    */
-  private scoreCandidates(w: Word, only: number): number {
+  private *scoreCandidates(w: Word, only: number): Step<number> {
     const s = this.scratch;
     const quality = new Map(w.terms.map((t) => [t.term, t.quality]));
-    for (let i = 0; i < s.count; i += 1) {
-      const slot = s.touched[i];
-      const doc = this.table.slots[slot];
-      if (s.hits[slot] !== only || doc === null) continue;
-      let best = 0;
-      for (const [ids, weight] of this.fieldsOf(doc)) {
-        for (const id of ids) {
-          const q = quality.get(id);
-          if (q !== undefined && (q * weight) / 10 > best) best = (q * weight) / 10;
+    const check = (from: number, to: number) => {
+      for (let i = from; i < to; i += 1) {
+        const slot = s.touched[i];
+        const doc = this.table.slots[slot];
+        if (s.hits[slot] !== only || doc === null) continue;
+        let best = 0;
+        for (const [ids, weight] of this.fieldsOf(doc)) {
+          for (const id of ids) {
+            const q = quality.get(id);
+            if (q !== undefined && (q * weight) / 10 > best) best = (q * weight) / 10;
+          }
         }
+        if (best > 0) s.offer(slot, best);
       }
-      if (best > 0) s.offer(slot, best);
-    }
-    s.commitWord();
+    };
+    yield* inChunks(s.count, check, CANDIDATE_CHUNK);
+    yield* s.commitWord();
     return s.count * FORWARD_COST;
   }
 
   /** Scores every word over the index (`all`: each word only where the earlier ones all matched). */
-  private pass(words: Word[], all: boolean, budget: number): number {
-    this.scratch.reset();
+  private *pass(words: Word[], all: boolean, budget: number): Step<number> {
+    yield* this.scratch.reset();
     for (let k = 0; k < words.length; k += 1) {
-      budget = Math.max(0, budget - this.scoreWord(words[k], budget, all ? k : null));
+      budget = Math.max(0, budget - (yield* this.scoreWord(words[k], budget, all ? k : null)));
       if (all && this.scratch.count === 0) break;
     }
     return budget;
   }
 
-  search(query: string, limit: number): { matches: SearchMatch<D>[]; total: number } {
+  /** One query, pausing (yielding) every so often; the result is the generator's return value. */
+  private *query(query: string, limit: number): Step<{ matches: SearchMatch<D>[]; total: number }> {
     const unique = [...new Set(tokenize(query).filter((w) => !STOP_WORDS.has(w)))].slice(0, MAX_QUERY_WORDS);
     if (unique.length === 0) return { matches: [], total: 0 };
-    const words = unique.map((w) => this.lookUp(w)).sort((a, b) => a.cost - b.cost);
-    this.scratch.fit(this.table.slots.length);
-    const left = this.pass(words, true, POSTING_BUDGET);
-    let needed = words.length;
-    if (!this.scratch.hasHits(needed)) {
-      // No spec matches every word: show the ones that match the most.
-      this.pass(words, false, left);
-      needed = this.scratch.mostHits();
+    const words: Word[] = [];
+    for (const w of unique) {
+      words.push(this.lookUp(w));
+      yield;
     }
-    return this.scratch.top(needed, limit, words.length, this.table.slots);
+    words.sort((a, b) => a.cost - b.cost);
+    this.scratch.fit(this.table.slots.length);
+    const left = yield* this.pass(words, true, POSTING_BUDGET);
+    let needed = words.length;
+    if (!(yield* this.scratch.hasHits(needed))) {
+      // No spec matches every word: show the ones that match the most.
+      yield* this.pass(words, false, left);
+      needed = yield* this.scratch.mostHits();
+    }
+    return yield* this.scratch.top(needed, limit, words.length, this.table.slots);
+  }
+
+  /** Runs a query to the end at once (tests, scripts). Not while `searchAsync` or `exclusive` holds the index. */
+  search(query: string, limit: number): { matches: SearchMatch<D>[]; total: number } {
+    if (this.turn.isLocked())
+      throw new Error('The search index is busy: use searchAsync while queries run concurrently.');
+    const run = this.query(query, limit);
+    for (;;) {
+      const step = run.next();
+      if (step.done) return step.value;
+    }
+  }
+
+  /**
+   * Runs a query in slices of at most SLICE_MS, giving the event loop a turn between them.
+   * Queries take turns in arrival order (they share the working arrays).
+   */
+  searchAsync(query: string, limit: number): Promise<{ matches: SearchMatch<D>[]; total: number }> {
+    return this.turn.runExclusive(async () => {
+      const run = this.query(query, limit);
+      let sliceStart = performance.now();
+      for (;;) {
+        const step = run.next();
+        if (step.done) return step.value;
+        if (performance.now() - sliceStart >= this.sliceMs) {
+          await yieldToLoop();
+          sliceStart = performance.now();
+        }
+      }
+    });
+  }
+
+  /** Runs a change of the index between two queries: none is paused half-way while it runs. */
+  exclusive<T>(change: () => Promise<T>): Promise<T> {
+    return this.turn.runExclusive(change);
   }
 }

@@ -42,6 +42,6 @@ function group(matches: SearchMatch<IndexedSpec>[]): SearchGroupDto[] {
 
 export async function searchLibrary(query: SearchQuery, engine = searchEngine): Promise<SearchResultDto> {
   const index = await engine.current();
-  const { matches, total } = index.search(query.q, query.limit);
+  const { matches, total } = await index.searchAsync(query.q, query.limit);
   return { query: query.q, total, groups: group(matches) };
 }

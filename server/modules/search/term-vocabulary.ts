@@ -26,8 +26,9 @@ const bigramsOf = (word: string) => {
 export class TermVocabulary {
   readonly terms: string[] = [];
   private readonly ids = new Map<string, number>();
+  /** Term ids in the terms' order, for prefix look-ups; `unsorted` are the ids added since. */
   private readonly sorted: number[] = [];
-  private sortedDirty = false;
+  private unsorted: number[] = [];
   private readonly bigrams = new Map<string, number[]>();
 
   id(term: string): number | undefined {
@@ -41,8 +42,7 @@ export class TermVocabulary {
     id = this.terms.length;
     this.terms.push(term);
     this.ids.set(term, id);
-    this.sorted.push(id);
-    this.sortedDirty = true;
+    this.unsorted.push(id);
     if (term.length >= 3 && !isNumber(term)) {
       for (const g of bigramsOf(term)) {
         const list = this.bigrams.get(g);
@@ -57,16 +57,8 @@ export class TermVocabulary {
     return this.terms.length;
   }
 
-  private ensureSorted() {
-    if (!this.sortedDirty) return;
-    const t = this.terms;
-    this.sorted.sort((a, b) => (t[a] < t[b] ? -1 : t[a] > t[b] ? 1 : 0));
-    this.sortedDirty = false;
-  }
-
-  /** Terms that start with `word` (not `word` itself), at most PREFIX_LIMIT, shortest names first in order. */
-  prefixed(word: string): number[] {
-    this.ensureSorted();
+  /** First position in `sorted` whose term is not before `word`. */
+  private lowerBound(word: string) {
     const t = this.terms;
     let lo = 0;
     let hi = this.sorted.length;
@@ -75,6 +67,27 @@ export class TermVocabulary {
       if (t[this.sorted[mid]] < word) lo = mid + 1;
       else hi = mid;
     }
+    return lo;
+  }
+
+  /** Sorts the terms added since the last look-up in: one by one after an edit, all at once after a build. */
+  private ensureSorted() {
+    if (this.unsorted.length === 0) return;
+    const t = this.terms;
+    if (this.unsorted.length <= 256) {
+      for (const id of this.unsorted) this.sorted.splice(this.lowerBound(t[id]), 0, id);
+    } else {
+      for (const id of this.unsorted) this.sorted.push(id);
+      this.sorted.sort((a, b) => (t[a] < t[b] ? -1 : t[a] > t[b] ? 1 : 0));
+    }
+    this.unsorted = [];
+  }
+
+  /** Terms that start with `word` (not `word` itself), at most PREFIX_LIMIT, shortest names first in order. */
+  prefixed(word: string): number[] {
+    this.ensureSorted();
+    const t = this.terms;
+    const lo = this.lowerBound(word);
     const out: number[] = [];
     for (let i = lo; i < this.sorted.length && out.length < PREFIX_LIMIT; i += 1) {
       const term = t[this.sorted[i]];
