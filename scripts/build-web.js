@@ -6,13 +6,16 @@
  *    and code and the fonts precached; the library's public GET API cached at run time
  *    (network first, a few seconds' patience, bounded), never an answer sent with a token or
  *    marked no-store/private — the user's own data stays in the app's device storage;
- * 3. brotli and gzip twins of every text file and font, for server/http/static.ts.
+ * 3. the fonts (scripts/web-fonts.js): a cut-down WOFF2 of each weight, preloaded by every
+ *    page with its @font-face rules, the full font as a fallback face;
+ * 4. brotli and gzip twins of every text file and font, for server/http/static.ts.
  * Usage: node scripts/build-web.js [distDir]
  */
 const fs = require('node:fs');
 const path = require('node:path');
 const zlib = require('node:zlib');
 const { generateSW } = require('workbox-build');
+const { writeWebFonts } = require('./web-fonts');
 
 const ROOT = path.resolve(__dirname, '..');
 const dist = path.resolve(process.argv[2] ?? path.join(ROOT, 'dist'));
@@ -45,15 +48,25 @@ const HYDRATE_FLAG = /<script type="module">globalThis\.__EXPO_ROUTER_HYDRATE__=
  * the tree after a mismatch): without Expo Router's hydration flag the app renders afresh
  * over the page. Exact pages (/, /calculator) keep it and hydrate.
  */
+const htmlFiles = (dir) =>
+  fs.readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
+    const f = path.join(dir, e.name);
+    return e.isDirectory() ? htmlFiles(f) : e.name.endsWith('.html') ? [f] : [];
+  });
+
+/** Every page's <head> gets the fonts' preloads and @font-face rules. */
+function addToHeads(markup) {
+  for (const file of htmlFiles(dist)) {
+    const html = fs.readFileSync(file, 'utf8');
+    if (!html.includes('</head>')) throw new Error(`${file} has no </head>`);
+    fs.writeFileSync(file, html.replace('</head>', `${markup}</head>`));
+  }
+}
+
 function writeShells() {
-  const walk = (dir) =>
-    fs.readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
-      const f = path.join(dir, e.name);
-      return e.isDirectory() ? walk(f) : e.name.endsWith('.html') ? [f] : [];
-    });
   // Pages that read their query string (/verify?token=…, /reset?token=…) differ from their static render too.
   const byQuery = /[\\/](verify|reset)\.html$/;
-  for (const file of walk(dist).filter((f) => f.includes('[') || byQuery.test(f))) {
+  for (const file of htmlFiles(dist).filter((f) => f.includes('[') || byQuery.test(f))) {
     fs.writeFileSync(file, fs.readFileSync(file, 'utf8').replace(HYDRATE_FLAG, ''));
   }
   const index = fs.readFileSync(path.join(dist, 'index.html'), 'utf8');
@@ -83,8 +96,9 @@ async function writeServiceWorker() {
   const { count, size, warnings } = await generateSW({
     globDirectory: dist,
     globPatterns: ['**/*.{js,html,css,ttf,woff2,png,ico,webmanifest}'],
-    // Editors' and admins' pages are opened online; the sitemap is a development aid.
-    globIgnores: ['**/*.map', '_sitemap.html', '(auth)/**', 'sw.js', 'workbox-*.js'],
+    // Editors' and admins' pages are opened online; the sitemap is a development aid; the
+    // full fonts are fetched (and then cached) only when a page shows a rare character.
+    globIgnores: ['**/*.map', '_sitemap.html', '(auth)/**', 'sw.js', 'workbox-*.js', 'fonts/*.ttf'],
     swDest: path.join(dist, 'sw.js'),
     maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
     // Metro names bundles and assets by content hash: the browser's HTTP cache may answer them.
@@ -98,6 +112,11 @@ async function writeServiceWorker() {
     skipWaiting: false, // the app asks before it swaps (the "update available" notice)
     sourcemap: false,
     runtimeCaching: [
+      {
+        urlPattern: ({ url }) => url.origin === self.location.origin && url.pathname.startsWith('/fonts/'),
+        handler: 'CacheFirst',
+        options: { cacheName: 'fonts-v1', expiration: { maxEntries: 8 } },
+      },
       {
         urlPattern: isPublicLibraryRead,
         handler: 'NetworkFirst',
@@ -141,6 +160,7 @@ async function main() {
   if (!fs.existsSync(path.join(dist, 'index.html')))
     throw new Error(`${dist} has no index.html: run expo export first`);
   writeManifest();
+  addToHeads(await writeWebFonts(dist));
   writeShells();
   await writeServiceWorker();
   const { raw, br } = compressAll(dist);

@@ -1,4 +1,5 @@
 import { Platform } from 'react-native';
+import { faces } from './fonts.json';
 
 /**
  * The one theme module: colours for light and dark, spacing, radii and type.
@@ -53,15 +54,22 @@ export type ThemeColor = keyof ThemeColors;
 export const Spacing = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
 export const Radius = { sm: 4, md: 8, lg: 12 } as const;
 
-/** On the web a system sans-serif stands in until Source Sans 3 has loaded (no flash of serif text). */
-const withFallback = (family: string) =>
-  Platform.OS === 'web' ? `${family}, system-ui, -apple-system, "Segoe UI", Roboto, sans-serif` : family;
+/**
+ * A weight's font family. On the web: the build's cut-down font first, the full font for
+ * characters it lacks, and a system sans-serif until they have loaded (no flash of serif text).
+ */
+function family(weight: number): string {
+  const face = faces.find((f) => f.weight === weight)!;
+  return Platform.OS === 'web'
+    ? `"${face.webFamily}", ${face.family}, system-ui, -apple-system, "Segoe UI", Roboto, sans-serif`
+    : face.family;
+}
 
 export const Fonts = {
-  regular: withFallback('SourceSans3_400Regular'),
-  semibold: withFallback('SourceSans3_600SemiBold'),
+  regular: family(400),
+  semibold: family(600),
   // Two weights are bundled; headings use the semibold.
-  bold: withFallback('SourceSans3_600SemiBold'),
+  bold: family(600),
 } as const;
 
 export const Type = {

@@ -1,17 +1,13 @@
-import { Platform } from 'react-native';
-import { FontDisplay, useFonts } from 'expo-font';
+import { useFonts } from 'expo-font';
 import { SourceSans3_400Regular } from '@expo-google-fonts/source-sans-3/400Regular';
 import { SourceSans3_600SemiBold } from '@expo-google-fonts/source-sans-3/600SemiBold';
+import { faces } from './fonts.json';
 
-/**
- * Source Sans 3 in two weights. On the web the first screen does not wait for the font
- * files (about 380 KB each, on a phone with poor signal): text shows in the fallback
- * font and swaps when they arrive. Native apps wait, as usual.
- */
+/** The font files by family (lib/theme/fonts.json names them); Metro needs the imports written out. */
+const FILES: Record<string, number> = { SourceSans3_400Regular, SourceSans3_600SemiBold };
+
+/** The typeface's weights, loaded before the first screen (native apps; the web has use-app-fonts.web.ts). */
 export function useAppFonts(): boolean {
-  const [loaded, error] = useFonts({
-    SourceSans3_400Regular: { uri: SourceSans3_400Regular, display: FontDisplay.SWAP },
-    SourceSans3_600SemiBold: { uri: SourceSans3_600SemiBold, display: FontDisplay.SWAP },
-  });
-  return Platform.OS === 'web' || loaded || !!error;
+  const [loaded, error] = useFonts(Object.fromEntries(faces.map((f) => [f.family, FILES[f.family]])));
+  return loaded || !!error;
 }
