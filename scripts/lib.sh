@@ -111,8 +111,8 @@ build_server() {
 build_web() {
   cd "$ROOT"
   local hash
-  hash="$( { find app components lib assets -type f -print0 2>/dev/null || true; } | sort -z | xargs -0 -r sha1sum | \
-    cat - app.json babel.config.js metro.config.js scripts/build-web.js package-lock.json | sha1sum | cut -c1-40)"
+  hash="$( { find app components lib assets data -type f -print0 2>/dev/null || true; } | sort -z | xargs -0 -r sha1sum | \
+    cat - app.json babel.config.js metro.config.js scripts/build-web.js scripts/web-fonts.js package-lock.json | sha1sum | cut -c1-40)"
   if [ -f dist/index.html ] && [ "$(cat "$DATA_DIR/web-build.hash" 2>/dev/null)" = "$hash" ]; then
     log "web build is up to date"
     return 0
