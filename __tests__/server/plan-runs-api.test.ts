@@ -283,3 +283,25 @@ describe('GET /api/jobs/:jobId/runs/:runId', () => {
     );
   });
 });
+
+describe('the model parts a run judges against', () => {
+  it('follow an edit of the spec at once (the cache is dropped on a library change)', async () => {
+    const editor = await authHeader('editor');
+    const { run } = await startNoSpark();
+    const spec = run.currentStep.spec;
+    const edit = (version: number, min: number) =>
+      request(app)
+        .patch(`/api/specs/${spec.id}`)
+        .set(editor)
+        .send({ version, reason: 'Cache check edit', min });
+    const current = (await request(app).get(`/api/specs/${spec.id}`)).body;
+    expect((await edit(current.version, 12.2)).status).toBe(200);
+    try {
+      const again = await startNoSpark();
+      expect(again.run.currentStep.spec).toMatchObject({ id: spec.id, min: 12.2 });
+    } finally {
+      await edit(current.version + 1, spec.min).expect(200);
+    }
+    expect((await startNoSpark()).run.currentStep.spec.min).toBe(spec.min);
+  });
+});

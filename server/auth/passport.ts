@@ -7,9 +7,8 @@
  */
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
-import { config } from '../config';
 import { findSessionUser } from '../modules/accounts/token.repository';
-import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER } from './tokens';
+import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER, JWT_KEY } from './tokens';
 
 type Claims = { sub?: unknown; sid?: unknown; exp?: unknown };
 
@@ -30,7 +29,8 @@ passport.use(
   new JwtStrategy(
     {
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-      secretOrKey: config.jwtSecret,
+      // passport-jwt's types say string | Buffer; it hands the key to jsonwebtoken, which takes a KeyObject.
+      secretOrKey: JWT_KEY as unknown as Buffer,
       algorithms: [JWT_ALGORITHM],
       issuer: JWT_ISSUER,
       audience: JWT_AUDIENCE,

@@ -210,7 +210,10 @@ export async function answerStep(
     if ('step' in target) Object.assign(run, { currentStep: target.step, status: 'active', finding: null });
     else
       Object.assign(run, { currentStep: null, status: 'concluded', finding: { ...target.finding, stepId: step.id } });
-    await m.withRepository(PlanRunRepository).save(run);
+    // Only the columns that move (save() would read the row back first to compare).
+    run.updatedAt = new Date();
+    const { currentStep, status, finding, updatedAt } = run;
+    await m.withRepository(PlanRunRepository).update(run.id, { currentStep, status, finding, updatedAt });
     return { ...(await answerOf(m, run, saved, parts)), created: true };
   });
 }
