@@ -290,10 +290,7 @@ describe('the model parts a run judges against', () => {
     const { run } = await startNoSpark();
     const spec = run.currentStep.spec;
     const edit = (version: number, min: number) =>
-      request(app)
-        .patch(`/api/specs/${spec.id}`)
-        .set(editor)
-        .send({ version, reason: 'Cache check edit', min });
+      request(app).patch(`/api/specs/${spec.id}`).set(editor).send({ version, reason: 'Cache check edit', min });
     const current = (await request(app).get(`/api/specs/${spec.id}`)).body;
     expect((await edit(current.version, 12.2)).status).toBe(200);
     try {

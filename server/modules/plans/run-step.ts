@@ -10,7 +10,7 @@ import { defaultMode } from '@/lib/specs/classify';
 import { formatRange, unitKind, type CanonicalUnit } from '@/lib/units';
 import type { Component } from '../library/component.entity';
 import type { Spec } from '../specs/spec.entity';
-import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
+import { LibraryCache } from '../library/library-cache';
 import { libraryFollower } from '../library/library-follower';
 import { connectorsOf, modelParts } from './plan.repository';
 
@@ -24,25 +24,8 @@ export type JobModelParts = { components: Component[]; connectors: Map<number, C
  * each time (one small query; their edits are not in the change log). The entities are
  * shared between requests: nothing may change them.
  */
-const PARTS_TTL_MS = 5000;
-const PARTS_MAX = 500;
-const partsCache = new Map<number, { components: Component[]; at: number }>();
-onLibraryChanged(() => partsCache.clear());
+const partsCache = new LibraryCache<number, Component[]>(5000, 500);
 libraryFollower.subscribe(() => partsCache.clear());
-
-async function cachedModelParts(modelId: number): Promise<Component[]> {
-  libraryFollower.start();
-  const hit = partsCache.get(modelId);
-  if (hit && Date.now() - hit.at < PARTS_TTL_MS) return hit.components;
-  const generation = libraryGeneration();
-  const components = await modelParts(modelId);
-  // A write that landed while this read was under way may not be in it: do not keep it.
-  if (generation === libraryGeneration()) {
-    if (partsCache.size >= PARTS_MAX) partsCache.delete(partsCache.keys().next().value!);
-    partsCache.set(modelId, { components, at: Date.now() });
-  }
-  return components;
-}
 
 /**
  * The job's model's parts. The components come from the cache even inside a writer's
@@ -51,7 +34,7 @@ async function cachedModelParts(modelId: number): Promise<Component[]> {
  */
 export async function jobModelParts(modelId: number | null, m?: EntityManager): Promise<JobModelParts> {
   if (modelId === null) return { components: [], connectors: new Map() };
-  const components = await cachedModelParts(modelId);
+  const components = await partsCache.get(modelId, () => modelParts(modelId));
   const connectors = await connectorsOf(
     components.map((c) => c.id),
     m,

@@ -5,7 +5,7 @@ import { roleAtLeast, type SignedInUser } from '@/server/auth/roles';
 import { RevisionRepository, SpecRepository } from './spec.repository';
 import { toRevision, toSpecSummary, specValuesOf } from './spec.mapper';
 import { toComponent, toModelRef, toSource } from '../library/library.mapper';
-import { libraryGeneration, onLibraryChanged } from '../library/library-changes';
+import { LibraryCache } from '../library/library-cache';
 import { libraryFollower } from '../library/library-follower';
 
 /**
@@ -42,30 +42,13 @@ export async function getSpec(id: number): Promise<SpecDetailDto> {
  * trusted for at most a few seconds in any case. Writers use getSpec(), which always
  * reads the database.
  */
-const CACHE_TTL_MS = 5000;
-const CACHE_MAX = 5000;
-const cache = new Map<number, { dto: SpecDetailDto; at: number }>();
-onLibraryChanged(() => cache.clear());
+const cache = new LibraryCache<number, SpecDetailDto>(5000, 5000);
 libraryFollower.subscribe((ids) => {
   for (const id of ids) cache.delete(id);
 });
 
 export async function readSpec(id: number, viewer: SignedInUser | undefined): Promise<SpecDetailDto> {
-  const dto = await cachedSpec(id);
+  const dto = await cache.get(id, () => getSpec(id));
   checkVisible(dto, viewer);
-  return dto;
-}
-
-async function cachedSpec(id: number): Promise<SpecDetailDto> {
-  libraryFollower.start();
-  const hit = cache.get(id);
-  if (hit && Date.now() - hit.at < CACHE_TTL_MS) return hit.dto;
-  const generation = libraryGeneration();
-  const dto = await getSpec(id);
-  // A write that landed while this read was under way may not be in it: do not keep it.
-  if (generation === libraryGeneration()) {
-    if (cache.size >= CACHE_MAX) cache.delete(cache.keys().next().value!);
-    cache.set(id, { dto, at: Date.now() });
-  }
   return dto;
 }
