@@ -67,3 +67,20 @@ it('runs queries in turn and holds a change until the query in flight is done', 
   await change;
   expect(ids(await second)).not.toContain(target.specId);
 });
+
+it('falls back to the specs that match the most words when none matches them all', async () => {
+  const index = new SearchIndex(all, { sliceMs: 0 });
+  // No spec is both a pickup coil and a stator, so each answer matches one word of the two,
+  // and the answer is the specs of either word's own answer.
+  const either = await index.searchAsync('pickup stator', 40);
+  const pickup = index.search('pickup', 40).total;
+  const stator = index.search('stator', 40).total;
+  expect(index.search('pickup stator', 40).total).toBe(either.total);
+  expect(either.total).toBe(pickup + stator);
+  // A word nothing has does not empty the answer: the specs that match the other two are the answer.
+  const two = await index.searchAsync('make5 stator qqqqzz', 40);
+  const both = index.search('make5 stator', 40);
+  expect(both.total).toBeGreaterThan(0);
+  expect(two.total).toBe(both.total);
+  expect(ids(two)).toEqual(ids(both));
+});

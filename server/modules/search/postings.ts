@@ -102,8 +102,12 @@ export class Scratch {
   score = new Float32Array(0);
   best = new Float32Array(0);
   hits = new Uint8Array(0);
+  /** Hits as the first pass left them (search-index.ts matchRest). */
+  level = new Uint8Array(0);
   touched = new Int32Array(0);
   count = 0;
+  /** Slots the last committed word matched. */
+  committed = 0;
   private wordTouched = new Int32Array(0);
   private wordCount = 0;
   private markSlot = new Int32Array(0);
@@ -115,6 +119,7 @@ export class Scratch {
     this.score = new Float32Array(size);
     this.best = new Float32Array(size);
     this.hits = new Uint8Array(size);
+    this.level = new Uint8Array(size);
     this.touched = new Int32Array(size);
     this.wordTouched = new Int32Array(size);
   }
@@ -129,14 +134,23 @@ export class Scratch {
   }
 
   *reset(): Generator<void, void> {
-    const { touched, score, hits } = this;
+    const { touched, score, hits, level } = this;
     yield* inChunks(this.count, (from, to) => {
       for (let i = from; i < to; i += 1) {
         score[touched[i]] = 0;
         hits[touched[i]] = 0;
+        level[touched[i]] = 0;
       }
     });
     this.count = 0;
+  }
+
+  /** Copies each touched slot's hits into its level. */
+  *keepLevels(): Generator<void, void> {
+    const { touched, hits, level } = this;
+    yield* inChunks(this.count, (from, to) => {
+      for (let i = from; i < to; i += 1) level[touched[i]] = hits[touched[i]];
+    });
   }
 
   offer(slot: number, q: number) {
@@ -160,15 +174,8 @@ export class Scratch {
       }
       this.count = count;
     });
+    this.committed = this.wordCount;
     this.wordCount = 0;
-  }
-
-  *hasHits(n: number): Generator<void, boolean> {
-    const { touched, hits } = this;
-    return yield* inChunks(this.count, (from, to) => {
-      for (let i = from; i < to; i += 1) if (hits[touched[i]] >= n) return true;
-      return false;
-    });
   }
 
   *mostHits(): Generator<void, number> {

@@ -45,6 +45,8 @@ export type SearchMatch<D extends SearchDoc = SearchDoc> = { doc: D; score: numb
 export const MAX_QUERY_WORDS = SEARCH_MAX_WORDS;
 /** Posting entries one query may visit, over all its words and both passes. */
 const POSTING_BUDGET = 2_500_000;
+/** Of those, what the second pass (no spec matched every word) may visit: partial matches are a fallback. */
+const REST_BUDGET = 1_000_000;
 /** What checking one candidate's own terms costs, in posting entries walked (measured roughly). */
 const FORWARD_COST = 24;
 /** The longest a query runs before it gives the event loop a turn. */
@@ -139,13 +141,16 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
   }
 
   /**
-   * Adds one word's best match per slot into the scores. With `only` (the number of words
-   * already taken), slots that missed an earlier word are passed over. Returns the entries visited.
+   * Adds word `k`'s best match per slot into the scores, for the slots `mode` names: `all`,
+   * those that matched every earlier word (their hits are k); `rest`, those the first pass
+   * did not judge on this word (their level is below k). Returns the entries visited.
    */
-  private *scoreWord(w: Word, budget: number, only: number | null): Step<number> {
+  private *scoreWord(w: Word, budget: number, mode: 'all' | 'rest', k: number): Step<number> {
     const s = this.scratch;
     const { alive, yearFrom, yearTo } = this.table;
-    const eligible = (slot: number) => alive[slot] === 1 && (only === null || s.hits[slot] === only);
+    const { hits, level } = s;
+    const only = mode === 'all' ? k : null;
+    const eligible = (slot: number) => alive[slot] === 1 && (only === null ? level[slot] < k : hits[slot] === only);
     let visited = 0;
     const year = w.year;
     if (year !== null && only !== null && only > 0) {
@@ -172,11 +177,11 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
       const end = Math.min(p.length, budget - visited);
       visited += end;
       const { slots, weights } = p;
-      const hits = s.hits;
       const q = quality / 10;
       yield* inChunks(end, (from, to) => {
         if (only === null) {
-          for (let i = from; i < to; i += 1) if (alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
+          for (let i = from; i < to; i += 1)
+            if (level[slots[i]] < k && alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
         } else {
           for (let i = from; i < to; i += 1)
             if (hits[slots[i]] === only && alive[slots[i]] === 1) s.offer(slots[i], q * weights[i]);
@@ -227,14 +232,29 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
     return s.count * FORWARD_COST;
   }
 
-  /** Scores every word over the index (`all`: each word only where the earlier ones all matched). */
-  private *pass(words: Word[], all: boolean, budget: number): Step<number> {
+  /**
+   * The first pass: each word only where the earlier ones all matched. `complete` when some
+   * spec matched every word; otherwise it stops at the first word that no candidate left
+   * matched, and each slot's hits say how many words, from the first, it matched.
+   */
+  private *matchAll(words: Word[], budget: number): Step<{ budget: number; complete: boolean }> {
     yield* this.scratch.reset();
     for (let k = 0; k < words.length; k += 1) {
-      budget = Math.max(0, budget - (yield* this.scoreWord(words[k], budget, all ? k : null)));
-      if (all && this.scratch.count === 0) break;
+      budget = Math.max(0, budget - (yield* this.scoreWord(words[k], budget, 'all', k)));
+      if (this.scratch.committed === 0) return { budget, complete: false };
     }
-    return budget;
+    return { budget, complete: true };
+  }
+
+  /**
+   * When no spec matches every word: the words the first pass did not judge for each slot
+   * (all after the one it missed) are added, so each slot ends with every word it matches,
+   * without walking the first word's postings again.
+   */
+  private *matchRest(words: Word[], budget: number): Step<void> {
+    yield* this.scratch.keepLevels();
+    for (let k = 1; k < words.length; k += 1)
+      budget = Math.max(0, budget - (yield* this.scoreWord(words[k], budget, 'rest', k)));
   }
 
   /** One query, pausing (yielding) every so often; the result is the generator's return value. */
@@ -248,11 +268,11 @@ export class SearchIndex<D extends SearchDoc = SearchDoc> {
     }
     words.sort((a, b) => a.cost - b.cost);
     this.scratch.fit(this.table.slots.length);
-    const left = yield* this.pass(words, true, POSTING_BUDGET);
+    const first = yield* this.matchAll(words, POSTING_BUDGET);
     let needed = words.length;
-    if (!(yield* this.scratch.hasHits(needed))) {
+    if (!first.complete) {
       // No spec matches every word: show the ones that match the most.
-      yield* this.pass(words, false, left);
+      yield* this.matchRest(words, Math.min(first.budget, REST_BUDGET));
       needed = yield* this.scratch.mostHits();
     }
     return yield* this.scratch.top(needed, limit, words.length, this.table.slots);
