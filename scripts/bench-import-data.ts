@@ -3,7 +3,7 @@
  * (coil windings, pickup, stator, plug gap, battery, regulator, fuse). Every name and value
  * is invented; the values only need to pass validation, so they vary a little per model.
  */
-import { SPEC_CSV_COLUMNS } from '@/lib/csv';
+import { SPEC_CSV_COLUMNS, type SpecCsvColumn } from '@/lib/csv';
 
 type Spec = [
   component: string,
@@ -58,32 +58,29 @@ export function makeBenchCsv(rows: number, makePrefix = 'Benchmake'): string {
     const yearFrom = 1995 + (model % 25);
     for (const [component, parameter, min, nominal, max, unit, refTemp, material, testPoints] of SPECS) {
       if (lines.length > rows) break;
-      lines.push(
-        [
-          make,
-          name,
-          yearFrom,
-          yearFrom + 4,
-          model % 3 === 0 ? 'EU' : 'US',
-          component,
-          parameter,
-          vary(min, model),
-          vary(nominal, model),
-          vary(max, model),
-          unit,
-          refTemp,
-          material,
-          testPoints,
-          'engine cold',
-          `${make} Service Manual`,
-          '2nd edition',
-          `${1 + (model % 9)}-${10 + (model % 40)}`,
-          '',
-          '',
-        ]
-          .map(cell)
-          .join(','),
-      );
+      // By column name, written in the import format's own column order (lib/csv/columns.ts);
+      // a column not named here (mode, near limit, engine speed, notes) is left empty.
+      const row: Partial<Record<SpecCsvColumn, string | number>> = {
+        make,
+        model: name,
+        year_from: yearFrom,
+        year_to: yearFrom + 4,
+        variant: model % 3 === 0 ? 'EU' : 'US',
+        component,
+        parameter,
+        min: vary(min, model),
+        nominal: vary(nominal, model),
+        max: vary(max, model),
+        unit,
+        ref_temp_c: refTemp,
+        material,
+        test_points: testPoints,
+        conditions: 'engine cold',
+        source_title: `${make} Service Manual`,
+        source_edition: '2nd edition',
+        source_page: `${1 + (model % 9)}-${10 + (model % 40)}`,
+      };
+      lines.push(SPEC_CSV_COLUMNS.map((c) => cell(row[c] ?? '')).join(','));
     }
   }
   return lines.join('\r\n') + '\r\n';

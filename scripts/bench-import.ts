@@ -19,7 +19,7 @@ import { AppDataSource } from '@/server/db/data-source';
 import { ensureDatabase } from '@/server/db/ensure-database';
 import { commitImport, previewValidated, validateUpload } from '@/server/modules/imports/import.service';
 import { makeBenchCsv } from './bench-import-data';
-import { SPEC_CSV_COLUMNS } from '@/lib/csv';
+import { SPEC_CSV_COLUMNS, type SpecCsvColumn } from '@/lib/csv';
 import { MAX_CSV_ROWS } from '@/lib/csv/parse';
 
 const ROWS = 50_000;
@@ -48,7 +48,29 @@ async function timed<T>(fn: () => Promise<T> | T): Promise<{ value: T; seconds: 
 const BARE_TABLE = `CREATE TABLE IF NOT EXISTS bulk_specs (make varchar(120), model varchar(120), year_from smallint, year_to smallint NULL,
   variant varchar(120), component varchar(120), parameter varchar(120), min_value double NULL, nominal_value double NULL,
   max_value double NULL, unit varchar(8), ref_temp_c double NULL, material varchar(8), test_points text, conditions text,
-  source_title varchar(200), source_edition varchar(200), source_page varchar(200), source_url varchar(500) NULL, notes text) ENGINE=InnoDB`;
+  source_title varchar(200), source_edition varchar(200), source_page varchar(200), source_url varchar(500) NULL,
+  mode varchar(20) NULL, near_limit double NULL, engine_rpm int NULL, notes text) ENGINE=InnoDB`;
+
+/**
+ * LOAD DATA's column list, in the import format's own order (lib/csv/columns.ts): a column
+ * that may be empty goes through a variable so that an empty cell is NULL; the others land
+ * in the bulk_specs column of the same name.
+ */
+const NULLABLE: Partial<Record<SpecCsvColumn, string>> = {
+  year_to: 'year_to',
+  min: 'min_value',
+  nominal: 'nominal_value',
+  max: 'max_value',
+  ref_temp_c: 'ref_temp_c',
+  source_url: 'source_url',
+  mode: 'mode',
+  near_limit: 'near_limit',
+  engine_rpm: 'engine_rpm',
+};
+const LOAD_COLUMNS = SPEC_CSV_COLUMNS.map((c) => (NULLABLE[c] ? `@${c}` : c)).join(', ');
+const LOAD_SET = SPEC_CSV_COLUMNS.filter((c) => NULLABLE[c])
+  .map((c) => `${NULLABLE[c]} = NULLIF(@${c}, '')`)
+  .join(', ');
 
 /** The same file through MariaDB's own loader: parsing, type conversion and the insert, nothing else. */
 async function bulkLoad(file: string): Promise<number> {
@@ -60,14 +82,11 @@ async function bulkLoad(file: string): Promise<number> {
     database: DB,
   });
   try {
+    await conn.query('DROP TABLE IF EXISTS bulk_specs');
     await conn.query(BARE_TABLE);
-    await conn.query('TRUNCATE TABLE bulk_specs');
     const result = await conn.query(`LOAD DATA INFILE ${conn.escape(file)} INTO TABLE bulk_specs CHARACTER SET utf8mb4
       FIELDS TERMINATED BY ',' OPTIONALLY ENCLOSED BY '"' LINES TERMINATED BY '\\r\\n' IGNORE 1 LINES
-      (make, model, year_from, @year_to, variant, component, parameter, @min, @nominal, @max, unit, @ref, material,
-       test_points, conditions, source_title, source_edition, source_page, @url, notes)
-      SET year_to = NULLIF(@year_to, ''), min_value = NULLIF(@min, ''), nominal_value = NULLIF(@nominal, ''),
-          max_value = NULLIF(@max, ''), ref_temp_c = NULLIF(@ref, ''), source_url = NULLIF(@url, '')`);
+      (${LOAD_COLUMNS}) SET ${LOAD_SET}`);
     return Number(result.affectedRows);
   } finally {
     await conn.end();
