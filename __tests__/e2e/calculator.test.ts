@@ -34,6 +34,8 @@ describe.each([
     await calc.getByLabel('Counts', { exact: true }).fill('2');
     await calc.getByLabel('One count is worth', { exact: true }).fill('0.01');
     await expect(calc.getByTestId('verdict-word').innerText()).resolves.toBe('PASS');
+    // The picture is drawn once its width is known (after layout): wait for it, then there is one.
+    await calc.getByTestId('band-picture').locator('svg').first().waitFor({ state: 'attached' });
     await expect(calc.getByTestId('band-picture').locator('svg').count()).resolves.toBe(1);
     await calc.getByTestId('show-working').click();
     const steps = await calc.getByTestId('verdict-steps').innerText();
