@@ -17,6 +17,6 @@ export {
 export { SpecCsvRowSchema, validateSpecRow } from './row-schema';
 export { parseSpecCsvDetailed, type DetailedParse, type ParsedCsv } from './parse';
 export { checkCsvBytes, decodeCsv } from './encoding';
-export { naturalKey, validateSpecCsv, type ValidatedCsv } from './validate';
+export { naturalKey, validateSpecCsv, SpecCsvValidator, type AcceptedRow, type ValidatedCsv } from './validate';
 export { neutraliseCell } from './injection';
 export { toSpecCsv } from './write';

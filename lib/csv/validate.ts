@@ -1,16 +1,10 @@
 /**
- * Whole-file validation: parse, validate every row, then the cross-row rule that a
- * natural key (make + model + years + variant + component + parameter) appears once.
+ * File validation: parse, validate every row, and the cross-row rule that a natural key
+ * (make + model + years + variant + component + parameter) appears once. Whole files at
+ * once (validateSpecCsv), or row by row (SpecCsvValidator) for a caller that works in chunks.
  */
-import {
-  COLUMN_TO_FIELD,
-  KEY_COLUMNS,
-  SPEC_CSV_COLUMNS,
-  type RowProblem,
-  type SpecCsvColumn,
-  type SpecCsvRow,
-} from './columns';
-import { parseSpecCsvDetailed } from './parse';
+import { COLUMN_TO_FIELD, KEY_COLUMNS, SPEC_CSV_COLUMNS, type RowProblem, type SpecCsvRow } from './columns';
+import { parseSpecCsvDetailed, type DetailedParse } from './parse';
 import { validateSpecRow } from './row-schema';
 
 type KeyFields = Pick<SpecCsvRow, 'make' | 'model' | 'yearFrom' | 'yearTo' | 'variant' | 'component' | 'parameter'>;
@@ -34,13 +28,17 @@ export function naturalKey(row: KeyFields): string {
 
 const VALUE_COLUMNS = SPEC_CSV_COLUMNS.filter((c) => !KEY_COLUMNS.includes(c));
 
-/** Value columns (everything outside the key) that differ between two rows with one key. */
-function differingColumns(a: SpecCsvRow, b: SpecCsvRow): SpecCsvColumn[] {
-  return VALUE_COLUMNS.filter((c) => a[COLUMN_TO_FIELD[c]] !== b[COLUMN_TO_FIELD[c]]);
-}
+/** A row's value columns as one string, kept for the first row of each key (not the row itself). */
+const valueCells = (row: SpecCsvRow) =>
+  VALUE_COLUMNS.map((c) => {
+    const v = row[COLUMN_TO_FIELD[c]];
+    return v === undefined ? '' : JSON.stringify(v);
+  });
+
+export type AcceptedRow = { line: number; row: SpecCsvRow; warnings: RowProblem[] };
 
 export type ValidatedCsv = {
-  accepted: { line: number; row: SpecCsvRow; warnings: RowProblem[] }[];
+  accepted: AcceptedRow[];
   /** The problems of the first MAX_REJECTED_KEPT rejected rows, by line. */
   rejected: RowProblem[];
   /** How many rows were rejected in all. */
@@ -53,43 +51,50 @@ export type ValidatedCsv = {
 export const MAX_REJECTED_KEPT = 1000;
 
 /**
- * Parses and validates a whole file. `fileErrors` (empty file, bad header, unclosed quote…)
- * mean the file must not be committed. Rows with the wrong number of cells are reported in
- * `rejected` (the row is bad, the rest of the file is fine). A repeated natural key rejects
- * the later line: as a duplicate when every value is the same, as a conflict otherwise.
+ * The row rules of a parsed file, row by row, so that a caller can take the accepted rows
+ * in chunks and let them go (the importer stages each chunk). It keeps, across the file,
+ * only each natural key's first line and values (for the duplicate and conflict messages)
+ * and the problems of the first MAX_REJECTED_KEPT rejected rows.
  */
-export function validateSpecCsv(text: string): ValidatedCsv {
-  const parsed = parseSpecCsvDetailed(text);
-  const result: ValidatedCsv = {
-    accepted: [],
-    rejected: [...parsed.rowErrors],
-    rejectedRows: parsed.rowErrorCount,
-    fileErrors: parsed.fileErrors,
-    tooManyRows: parsed.tooManyRows,
-  };
-  let keptLines = new Set(parsed.rowErrors.map((e) => e.line)).size;
-  const reject = (line: number, problems: RowProblem[]) => {
-    result.rejectedRows += 1;
-    if (keptLines >= MAX_REJECTED_KEPT) return;
-    keptLines += 1;
-    result.rejected.push(...problems.map((p) => ({ ...p, line })));
-  };
-  const firstByKey = new Map<string, { line: number; row: SpecCsvRow }>();
-  for (const { line, raw } of parsed.rows) {
+export class SpecCsvValidator {
+  readonly result: Omit<ValidatedCsv, 'accepted'>;
+  private keptLines: number;
+  private readonly firstByKey = new Map<string, { line: number; values: string }>();
+
+  constructor(parsed: DetailedParse) {
+    this.result = {
+      rejected: [...parsed.rowErrors],
+      rejectedRows: parsed.rowErrorCount,
+      fileErrors: parsed.fileErrors,
+      tooManyRows: parsed.tooManyRows,
+    };
+    this.keptLines = new Set(parsed.rowErrors.map((e) => e.line)).size;
+  }
+
+  private reject(line: number, problems: RowProblem[]) {
+    this.result.rejectedRows += 1;
+    if (this.keptLines >= MAX_REJECTED_KEPT) return;
+    this.keptLines += 1;
+    this.result.rejected.push(...problems.map((p) => ({ ...p, line })));
+  }
+
+  /** The row if it is accepted; otherwise its problems are recorded and the answer is null. */
+  check(line: number, raw: Record<string, string>): AcceptedRow | null {
     const checked = validateSpecRow(raw, line);
     if (!checked.ok) {
-      reject(line, checked.errors);
-      continue;
+      this.reject(line, checked.errors);
+      return null;
     }
     const key = naturalKey(checked.row);
-    const first = firstByKey.get(key);
+    const values = valueCells(checked.row);
+    const first = this.firstByKey.get(key);
     if (!first) {
-      firstByKey.set(key, { line, row: checked.row });
-      result.accepted.push({ line, row: checked.row, warnings: checked.warnings });
-      continue;
+      this.firstByKey.set(key, { line, values: values.join('\u001f') });
+      return { line, row: checked.row, warnings: checked.warnings };
     }
-    const differing = differingColumns(first.row, checked.row);
-    reject(line, [
+    const before = first.values.split('\u001f');
+    const differing = VALUE_COLUMNS.filter((_, i) => before[i] !== values[i]);
+    this.reject(line, [
       {
         line,
         column: differing[0] ?? null,
@@ -99,7 +104,29 @@ export function validateSpecCsv(text: string): ValidatedCsv {
             : `conflicts with line ${first.line}: the same spec (make, model, years, variant, component, parameter) with a different ${differing.join(', ')}`,
       },
     ]);
+    return null;
   }
-  result.rejected.sort((a, b) => a.line - b.line);
-  return result;
+
+  /** The kept problems in line order, once every row is checked. */
+  finish(): Omit<ValidatedCsv, 'accepted'> {
+    this.result.rejected.sort((a, b) => a.line - b.line);
+    return this.result;
+  }
+}
+
+/**
+ * Parses and validates a whole file. `fileErrors` (empty file, bad header, unclosed quote…)
+ * mean the file must not be committed. Rows with the wrong number of cells are reported in
+ * `rejected` (the row is bad, the rest of the file is fine). A repeated natural key rejects
+ * the later line: as a duplicate when every value is the same, as a conflict otherwise.
+ */
+export function validateSpecCsv(text: string): ValidatedCsv {
+  const parsed = parseSpecCsvDetailed(text);
+  const validator = new SpecCsvValidator(parsed);
+  const accepted: AcceptedRow[] = [];
+  for (const { line, raw } of parsed.rows) {
+    const row = validator.check(line, raw);
+    if (row) accepted.push(row);
+  }
+  return { accepted, ...validator.finish() };
 }

@@ -132,6 +132,34 @@ export function byLine(problems: RowProblem[]): Map<number, RowProblem[]> {
   return lines;
 }
 
+/**
+ * Stages a batch's rows chunk by chunk, in file order, inside the caller's transaction:
+ * the numbering of models, components and sources runs across every chunk.
+ */
+export class Stager {
+  private readonly numbering = new Numbering();
+
+  constructor(
+    private readonly m: EntityManager,
+    private readonly batchId: number,
+  ) {}
+
+  async planned(plan: PlannedRow[], warnings: Map<number, RowProblem[]>) {
+    const rows: Cell[][] = [];
+    for (const p of plan) {
+      rows.push(plannedCells(this.batchId, p, warnings.get(p.line) ?? [], this.numbering));
+      if (rows.length >= CHUNK) await insertChunked(this.m, rows.splice(0, rows.length));
+    }
+    await insertChunked(this.m, rows);
+  }
+
+  async rejected(rejected: Map<number, RowProblem[]>) {
+    const rows: Cell[][] = [];
+    for (const [line, problems] of rejected) rows.push(rejectedCells(this.batchId, line, problems));
+    await insertChunked(this.m, rows);
+  }
+}
+
 export async function stageRows(
   m: EntityManager,
   batchId: number,
@@ -139,12 +167,7 @@ export async function stageRows(
   warnings: Map<number, RowProblem[]>,
   rejected: Map<number, RowProblem[]>,
 ) {
-  const rows: Cell[][] = [];
-  const numbering = new Numbering();
-  for (const p of plan) {
-    rows.push(plannedCells(batchId, p, warnings.get(p.line) ?? [], numbering));
-    if (rows.length >= CHUNK) await insertChunked(m, rows.splice(0, rows.length));
-  }
-  for (const [line, problems] of rejected) rows.push(rejectedCells(batchId, line, problems));
-  await insertChunked(m, rows);
+  const stager = new Stager(m, batchId);
+  await stager.planned(plan, warnings);
+  await stager.rejected(rejected);
 }

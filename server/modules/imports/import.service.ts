@@ -1,11 +1,20 @@
 /**
- * The spec importer: bytes → text → validated rows → plan → staged batch (the preview) →
- * one transaction (the commit). Editors upload, look at the preview and commit; the demo
+ * The spec importer: bytes → text → records → (validated rows → plan → staged rows, a
+ * chunk at a time) = the preview → one transaction (the commit). Editors upload, look at the preview and commit; the demo
  * library loader goes through the same steps at once (importCsvNow).
  */
 import { createHash } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import { checkCsvBytes, decodeCsv, validateSpecCsv, type RowProblem, type ValidatedCsv } from '@/lib/csv';
+import {
+  SpecCsvValidator,
+  checkCsvBytes,
+  decodeCsv,
+  parseSpecCsvDetailed,
+  validateSpecCsv,
+  type AcceptedRow,
+  type RowProblem,
+  type ValidatedCsv,
+} from '@/lib/csv';
 import { MAX_CSV_ROWS } from '@/lib/csv/parse';
 import type { ImportBatchSummaryDto, ImportPreviewDto, ImportPreviewQuery } from '@/lib/contracts/imports';
 import { AppDataSource } from '@/server/db/data-source';
@@ -15,7 +24,7 @@ import { lastRevisionId, markLibraryChanged, recordImportChanges } from '../libr
 import { ImportBatch, type ImportCounts } from './import-batch.entity';
 import { planImport, type PlannedRow } from './import-plan';
 import { applyImport, type Actor } from './import-apply';
-import { byLine, stageRows } from './import-stage';
+import { byLine, stageRows, Stager } from './import-stage';
 import { buildPreview, toBatchSummary } from './import-preview';
 
 export type ImportSummary = { batchId: number | null; counts: ImportCounts; rejected: RowProblem[] };
@@ -26,13 +35,6 @@ const FIRST_PAGE: ImportPreviewQuery = { offset: 0, limit: 1000 };
 
 /** `line 3, column min`: where a problem is, as the 422 `errors[].path` says it. */
 export const problemPath = (p: RowProblem) => `line ${p.line}${p.column ? `, column ${p.column}` : ''}`;
-
-/** Bytes → validated rows; file-level problems (encoding, header, quotes, no rows) in fileErrors. */
-export function validateUpload(bytes: Uint8Array): ValidatedCsv {
-  const encoding = checkCsvBytes(bytes);
-  if (encoding) return { accepted: [], rejected: [], rejectedRows: 0, fileErrors: [encoding] };
-  return validateSpecCsv(decodeCsv(bytes));
-}
 
 function countsOf(plan: PlannedRow[], checked: ValidatedCsv): ImportCounts {
   const n = (action: PlannedRow['action']) => plan.filter((p) => p.action === action).length;
@@ -90,28 +92,56 @@ async function rejectFile(upload: Upload, actor: Actor, fileErrors: RowProblem[]
 }
 
 /** 413 for a file over the row limit (MAX_CSV_ROWS): nothing of it is staged. */
-const tooManyRows = (upload: Upload, checked: ValidatedCsv) =>
-  new AppError(413, 'payload_too_large', `${upload.fileName} cannot be imported: ${checked.fileErrors[0].reason}.`, {
+const tooManyRows = (upload: Upload, fileErrors: RowProblem[]) =>
+  new AppError(413, 'payload_too_large', `${upload.fileName} cannot be imported: ${fileErrors[0].reason}.`, {
     limit: MAX_CSV_ROWS,
   });
 
-/** Upload → preview. Nothing is written but the batch and its staged rows. */
-export async function previewImport(upload: Upload, actor: Actor, page = FIRST_PAGE): Promise<ImportPreviewDto> {
-  return previewValidated(upload, validateUpload(upload.bytes), actor, page);
-}
+/** Accepted rows validated, planned and staged at a time: the rows' objects of one chunk only are alive at once. */
+const PREVIEW_CHUNK = 2000;
 
-/** The preview of an upload already validated (the benchmark times the two steps apart). */
-export async function previewValidated(
-  upload: Upload,
-  checked: ValidatedCsv,
-  actor: Actor,
-  page = FIRST_PAGE,
-): Promise<ImportPreviewDto> {
-  if (checked.tooManyRows) throw tooManyRows(upload, checked);
-  if (checked.fileErrors.length) return rejectFile(upload, actor, checked.fileErrors);
-  const batch = await writeTransaction(async (m) =>
-    stageBatch(m, checked, await planImport(m, checked.accepted), uploaderOf(upload, actor)),
-  );
+/**
+ * Upload → preview. Nothing is written but the batch and its staged rows, in one transaction.
+ * The file's records are read first (file-level problems refuse it before anything is
+ * staged); then the rows are validated, planned against the library and staged a chunk at a
+ * time, each record let go once it is staged, so the server never holds every row's objects.
+ */
+export async function previewImport(upload: Upload, actor: Actor, page = FIRST_PAGE): Promise<ImportPreviewDto> {
+  const encoding = checkCsvBytes(upload.bytes);
+  if (encoding) return rejectFile(upload, actor, [encoding]);
+  const batch = await writeTransaction(async (m) => {
+    // Inside the transaction, so that a retried transaction reads the file afresh.
+    const parsed = parseSpecCsvDetailed(decodeCsv(upload.bytes));
+    if (parsed.tooManyRows) throw tooManyRows(upload, parsed.fileErrors);
+    if (parsed.fileErrors.length) return parsed.fileErrors;
+    const zero = { created: 0, updated: 0, unchanged: 0, rejected: 0, warnings: 0 };
+    const batch = await m
+      .getRepository(ImportBatch)
+      .save({ ...uploaderOf(upload, actor), counts: zero, rowErrors: [], status: 'previewed' as const });
+    const validator = new SpecCsvValidator(parsed);
+    const stager = new Stager(m, batch.id);
+    const counts = { ...zero };
+    const rows = parsed.rows as ((typeof parsed.rows)[number] | null)[];
+    for (let from = 0; from < rows.length; from += PREVIEW_CHUNK) {
+      const accepted: AcceptedRow[] = [];
+      for (let i = from; i < Math.min(rows.length, from + PREVIEW_CHUNK); i += 1) {
+        const row = validator.check(rows[i]!.line, rows[i]!.raw);
+        rows[i] = null;
+        if (row) accepted.push(row);
+      }
+      const plan = await planImport(m, accepted);
+      for (const p of plan)
+        counts[p.action === 'create' ? 'created' : p.action === 'update' ? 'updated' : 'unchanged'] += 1;
+      counts.warnings += accepted.reduce((sum, a) => sum + a.warnings.length, 0);
+      await stager.planned(plan, new Map(accepted.map((a) => [a.line, a.warnings])));
+    }
+    const { rejected, rejectedRows } = validator.finish();
+    await stager.rejected(byLine(rejected));
+    batch.counts = { ...counts, rejected: rejectedRows };
+    await m.getRepository(ImportBatch).update(batch.id, { counts: batch.counts });
+    return batch;
+  });
+  if (Array.isArray(batch)) return rejectFile(upload, actor, batch);
   return buildPreview(AppDataSource.manager, batch, page);
 }
 
