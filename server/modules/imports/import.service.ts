@@ -1,7 +1,8 @@
 /**
  * The spec importer: bytes → text → records → (validated rows → plan → staged rows, a
- * chunk at a time) = the preview → one transaction (the commit). Editors upload, look at the preview and commit; the demo
- * library loader goes through the same steps at once (importCsvNow).
+ * chunk at a time) = the preview → one transaction (the commit). Editors upload, look at
+ * the preview and commit; the demo library loader goes through the same steps at once
+ * (importCsvNow).
  */
 import { createHash } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
@@ -36,15 +37,18 @@ const FIRST_PAGE: ImportPreviewQuery = { offset: 0, limit: 1000 };
 /** `line 3, column min`: where a problem is, as the 422 `errors[].path` says it. */
 export const problemPath = (p: RowProblem) => `line ${p.line}${p.column ? `, column ${p.column}` : ''}`;
 
+const COUNTED = { create: 'created', update: 'updated', unchanged: 'unchanged' } as const;
+const noCounts = (): ImportCounts => ({ created: 0, updated: 0, unchanged: 0, rejected: 0, warnings: 0 });
+
+/** Adds planned rows (a whole file, or one chunk of it) and their warnings into `counts`. */
+function addCounts(counts: ImportCounts, plan: PlannedRow[], accepted: AcceptedRow[]): ImportCounts {
+  for (const p of plan) counts[COUNTED[p.action]] += 1;
+  counts.warnings = (counts.warnings ?? 0) + accepted.reduce((sum, a) => sum + a.warnings.length, 0);
+  return counts;
+}
+
 function countsOf(plan: PlannedRow[], checked: ValidatedCsv): ImportCounts {
-  const n = (action: PlannedRow['action']) => plan.filter((p) => p.action === action).length;
-  return {
-    created: n('create'),
-    updated: n('update'),
-    unchanged: n('unchanged'),
-    rejected: checked.rejectedRows,
-    warnings: checked.accepted.reduce((sum, a) => sum + a.warnings.length, 0),
-  };
+  return { ...addCounts(noCounts(), plan, checked.accepted), rejected: checked.rejectedRows };
 }
 
 /** Stores the planned rows with a new batch, inside the caller's transaction. */
@@ -114,13 +118,12 @@ export async function previewImport(upload: Upload, actor: Actor, page = FIRST_P
     const parsed = parseSpecCsvDetailed(decodeCsv(upload.bytes));
     if (parsed.tooManyRows) throw tooManyRows(upload, parsed.fileErrors);
     if (parsed.fileErrors.length) return parsed.fileErrors;
-    const zero = { created: 0, updated: 0, unchanged: 0, rejected: 0, warnings: 0 };
     const batch = await m
       .getRepository(ImportBatch)
-      .save({ ...uploaderOf(upload, actor), counts: zero, rowErrors: [], status: 'previewed' as const });
+      .save({ ...uploaderOf(upload, actor), counts: noCounts(), rowErrors: [], status: 'previewed' as const });
     const validator = new SpecCsvValidator(parsed);
     const stager = new Stager(m, batch.id);
-    const counts = { ...zero };
+    const counts = noCounts();
     const rows = parsed.rows as ((typeof parsed.rows)[number] | null)[];
     for (let from = 0; from < rows.length; from += PREVIEW_CHUNK) {
       const accepted: AcceptedRow[] = [];
@@ -130,9 +133,7 @@ export async function previewImport(upload: Upload, actor: Actor, page = FIRST_P
         if (row) accepted.push(row);
       }
       const plan = await planImport(m, accepted);
-      for (const p of plan)
-        counts[p.action === 'create' ? 'created' : p.action === 'update' ? 'updated' : 'unchanged'] += 1;
-      counts.warnings += accepted.reduce((sum, a) => sum + a.warnings.length, 0);
+      addCounts(counts, plan, accepted);
       await stager.planned(plan, new Map(accepted.map((a) => [a.line, a.warnings])));
     }
     const { rejected, rejectedRows } = validator.finish();

@@ -4,8 +4,8 @@
  * while the old index (if any) keeps answering; it swaps in when complete. After that the
  * index follows library_changes (library-follower.ts): the specs a change names are read
  * again and replaced or removed between two queries, so an edit anywhere shows here within
- * a poll. A full
- * build runs again only when a change names very many specs or replaced entries pile up.
+ * a poll. A full build runs again only when a change names very many specs or replaced
+ * entries pile up.
  */
 import { setImmediate as yieldToLoop } from 'node:timers/promises';
 import { lastChangeId } from '../library/library-changes';
