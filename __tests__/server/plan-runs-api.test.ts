@@ -1,6 +1,7 @@
 /** Plan runs on a job: start (generic plans checked against the job's model), results judged on the server, branching to a finding. */
 import request from 'supertest';
 import { createApp } from '@/server/app';
+import { AppDataSource } from '@/server/db/data-source';
 import { useTestDatabase } from '../helpers/test-db';
 import { authHeader } from '../helpers/auth';
 import { expectProblem } from '../helpers/problems';
@@ -130,6 +131,8 @@ describe('POST /api/jobs/:jobId/runs/:runId/results', () => {
     const again = await answer(jobId, run.id, body, `resend-${run.id}`);
     expect([first.status, again.status]).toEqual([201, 200]);
     expect(again.body.judged.id).toBe(first.body.judged.id);
+    // The replay is read back from the database; the first answer was built from what was written.
+    expect(again.body).toEqual(first.body);
     const job = await request(app)
       .get(`/api/jobs/${jobId}`)
       .set(await tech());
@@ -300,5 +303,35 @@ describe('the model parts a run judges against', () => {
       await edit(current.version + 1, spec.min).expect(200);
     }
     expect((await startNoSpark()).run.currentStep.spec.min).toBe(spec.min);
+  });
+
+  it("follow a connector edit at once: the step's test point shows the new face", async () => {
+    const editor = await authHeader('editor');
+    const { run } = await startNoSpark();
+    // The battery step names no test-point component: its face is its spec's component's.
+    const [{ id }] = await AppDataSource.query('SELECT component_id AS id FROM specs WHERE id = ?', [
+      run.currentStep.spec.id,
+    ]);
+    const before = run.currentStep.connector;
+    const face = {
+      rows: 1,
+      columns: 2,
+      numbering: 'left-to-right',
+      view: 'component',
+      key: 'top',
+      pins: [
+        { number: 1, name: 'Plus', wire: 'red' },
+        { number: 2, name: 'Minus', wire: 'black' },
+      ],
+    };
+    const put = (connector: object | null) =>
+      request(app).put(`/api/components/${id}/connector`).set(editor).send({ connector });
+    expect((await put(face)).status).toBe(200);
+    try {
+      expect((await startNoSpark()).run.currentStep.connector).toMatchObject({ view: 'component', columns: 2 });
+    } finally {
+      await put(before).expect(200);
+    }
+    expect((await startNoSpark()).run.currentStep.connector).toEqual(before);
   });
 });

@@ -4,6 +4,7 @@ import type { ConnectorDto } from '@/lib/contracts/plans';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import { Component } from '../library/component.entity';
+import { markLibraryChanged } from '../library/library-changes';
 import { ComponentConnector } from './component-connector.entity';
 
 export async function setConnectorIn(m: EntityManager, componentId: number, connector: ConnectorDto | null) {
@@ -14,5 +15,9 @@ export async function setConnectorIn(m: EntityManager, componentId: number, conn
   return { componentId, connector };
 }
 
-export const setConnector = (componentId: number, connector: ConnectorDto | null) =>
-  AppDataSource.transaction((m) => setConnectorIn(m, componentId, connector));
+export async function setConnector(componentId: number, connector: ConnectorDto | null) {
+  const set = await AppDataSource.transaction((m) => setConnectorIn(m, componentId, connector));
+  // The runs' cached parts carry the connector faces (run-step.ts).
+  markLibraryChanged();
+  return set;
+}

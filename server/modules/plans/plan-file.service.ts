@@ -12,6 +12,7 @@ import { findComponent } from '@/lib/plans/applicability';
 import { AppError } from '@/server/errors/app-error';
 import { Component } from '../library/component.entity';
 import { foldKey } from '../library/keys';
+import { markLibraryChanged } from '../library/library-changes';
 import { ComponentConnector } from './component-connector.entity';
 import { setConnectorIn } from './connector.service';
 import { toPlanBody, toPlanSummary } from './plan.mapper';
@@ -36,7 +37,7 @@ export async function importPlanFile(
   actor: Actor,
   options: { createOnly?: boolean } = {},
 ): Promise<PlanImportResult> {
-  return AppDataSource.transaction(async (m) => {
+  const imported = await AppDataSource.transaction(async (m) => {
     const result: PlanImportResult = { created: 0, updated: 0, unchanged: 0, connectors: 0, plans: [] };
     for (const [i, body] of file.plans.entries()) {
       const prefix = `plans.${i}.`;
@@ -75,6 +76,9 @@ export async function importPlanFile(
     }
     return result;
   });
+  // The runs' cached parts carry the connector faces (run-step.ts).
+  if (imported.connectors > 0) markLibraryChanged();
+  return imported;
 }
 
 export async function exportPlanFile(): Promise<PlanFile> {

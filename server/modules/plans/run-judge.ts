@@ -41,7 +41,7 @@ async function judgeMeasured(step: PlanStep, body: RunResultBody, parts: JobMode
     reading: { value, unit },
     ...(found ? { specId: found.spec.id } : { spec: typed }),
   };
-  const { input, specVersion } = await toVerdictInput(verdictBody);
+  const { input, specVersion } = await toVerdictInput(verdictBody, found?.spec);
   const r = judge(input);
   const citation = found?.spec.source ? citationText(found.spec.source, found.spec.sourcePage) : null;
   return {

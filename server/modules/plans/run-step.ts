@@ -3,7 +3,6 @@
  * against on the job's model (by component and parameter), or null when the step offers
  * typed limits, and the connector face of its test point's component.
  */
-import type { EntityManager } from 'typeorm';
 import type { ConnectorDto, PlanStep, RunStepDto, SpecForStepDto } from '@/lib/contracts/plans';
 import { findComponent, findSpec } from '@/lib/plans/applicability';
 import { defaultMode } from '@/lib/specs/classify';
@@ -17,29 +16,31 @@ import { connectorsOf, modelParts } from './plan.repository';
 export type JobModelParts = { components: Component[]; connectors: Map<number, ConnectorDto> };
 
 /**
- * A model's components with their published specs change only with the library, and every
- * step of every run reads them: they are kept per model, dropped on any library change
- * (this process: onLibraryChanged; any process: libraryFollower) and trusted for at most a
- * few seconds in any case, like the spec cards (specs/spec.service.ts). Connectors are read
- * each time (one small query; their edits are not in the change log). The entities are
- * shared between requests: nothing may change them.
+ * A model's components with their published specs, and their connector faces, change only
+ * with the library, and every step of every run reads them: they are kept per model, dropped
+ * on any library change (this process: onLibraryChanged, which a connector edit also fires;
+ * any process: libraryFollower) and trusted for at most a few seconds in any case, like the
+ * spec cards (specs/spec.service.ts). Connector edits are not in the change log, so another
+ * process shows one within that TTL. The values are shared between requests: nothing may
+ * change them.
  */
-const partsCache = new LibraryCache<number, Component[]>(5000, 500);
+const partsCache = new LibraryCache<number, JobModelParts>(5000, 500);
 libraryFollower.subscribe(() => partsCache.clear());
 
-/**
- * The job's model's parts. The components come from the cache even inside a writer's
- * transaction (`m`, used for the connectors): a step is judged against the spec as the
- * technician's screen showed it, at most one library poll behind an edit.
- */
-export async function jobModelParts(modelId: number | null, m?: EntityManager): Promise<JobModelParts> {
-  if (modelId === null) return { components: [], connectors: new Map() };
-  const components = await partsCache.get(modelId, () => modelParts(modelId));
-  const connectors = await connectorsOf(
-    components.map((c) => c.id),
-    m,
-  );
+async function loadParts(modelId: number): Promise<JobModelParts> {
+  const components = await modelParts(modelId);
+  const connectors = await connectorsOf(components.map((c) => c.id));
   return { components, connectors: new Map(connectors.map((c) => [c.componentId, c.connector])) };
+}
+
+/**
+ * The job's model's parts, from the cache even inside a writer's transaction: a step is
+ * judged against the spec as the technician's screen showed it, at most one library poll
+ * behind an edit.
+ */
+export function jobModelParts(modelId: number | null): Promise<JobModelParts> {
+  if (modelId === null) return Promise.resolve({ components: [], connectors: new Map() });
+  return partsCache.get(modelId, () => loadParts(modelId));
 }
 
 /** The published spec a step's check names on this model, or null. */

@@ -15,6 +15,7 @@ import type { SignedInUser } from '@/server/auth/roles';
 import { AppDataSource } from '@/server/db/data-source';
 import { AppError } from '@/server/errors/app-error';
 import type { Job } from '../jobs/job.entity';
+import type { Reading } from '../jobs/reading.entity';
 import { ownJobOr404 } from '../jobs/job-access';
 import { toReadingDto } from '../jobs/job.mapper';
 import { JobRepository, ReadingRepository } from '../jobs/job.repository';
@@ -84,7 +85,7 @@ export async function startRun(user: SignedInUser, jobId: number, planId: number
       throw AppError.unprocessable('This plan is for another model.', [
         { path: 'planId', message: 'Plan is for another model' },
       ]);
-    const parts = await jobModelParts(job.modelId, m);
+    const parts = await jobModelParts(job.modelId);
     if (job.modelId !== null && plan.modelId === null) {
       const problems = fitProblems(plan.steps, parts.components, false);
       if (problems.length) throw AppError.unprocessable(problems[0].message, problems);
@@ -129,16 +130,14 @@ export async function listRuns(user: SignedInUser, jobId: number): Promise<RunDt
   );
 }
 
-async function answerOf(
-  m: EntityManager,
+/** The answer to a result: `results` are the run's results with `result` among them. */
+function answerOf(
   run: PlanRun,
+  results: PlanRunResult[],
   result: PlanRunResult,
+  reading: Reading | null,
   parts: JobModelParts,
-): Promise<RunAnswerDto> {
-  const results = await m.withRepository(PlanRunResultRepository).listFor([run.id]);
-  const reading = result.readingId
-    ? await m.withRepository(ReadingRepository).findOneBy({ id: result.readingId })
-    : null;
+): RunAnswerDto {
   const dto = toRunDto(run, results, parts);
   return {
     judged: toResultDto(result, run),
@@ -154,7 +153,7 @@ async function lockRun(m: EntityManager, user: SignedInUser, jobId: number, runI
   ownerOnly(user, job);
   const run = await m.withRepository(PlanRunRepository).lockOnJob(runId, jobId);
   if (!run) throw AppError.notFound('run', runId);
-  return { job, run, parts: await jobModelParts(job.modelId, m) };
+  return { job, run, parts: await jobModelParts(job.modelId) };
 }
 
 export async function answerStep(
@@ -168,14 +167,18 @@ export async function answerStep(
   return AppDataSource.transaction(async (m) => {
     const { run, parts } = await lockRun(m, user, jobId, runId);
     const results = m.withRepository(PlanRunResultRepository);
-    const seen = await results.findOneBy({ runId, idempotencyKey });
+    const readings = m.withRepository(ReadingRepository);
+    // Read once under the run's lock: the replay check, a re-answered step's old reading and the answer.
+    const earlier = await results.listFor([runId]);
+    const seen = earlier.find((r) => r.idempotencyKey === idempotencyKey);
     if (seen) {
       assertSameRequest(seen.requestHash, request.hash, 'result on this run');
-      return { ...(await answerOf(m, run, seen, parts)), created: false };
+      const reading = seen.readingId ? await readings.findOneBy({ id: seen.readingId }) : null;
+      return { ...answerOf(run, earlier, seen, reading, parts), created: false };
     }
     // The step's reading is kept under the same key: a key already spent on this job (a reading,
     // or another run's result) is another request, refused before anything is written.
-    if (await m.withRepository(ReadingRepository).findByKey(jobId, idempotencyKey))
+    if (await readings.findByKey(jobId, idempotencyKey))
       throw new AppError(
         422,
         'idempotency_key_reused',
@@ -189,8 +192,8 @@ export async function answerStep(
       });
     const step = run.steps.find((s) => s.id === run.currentStep)!;
     const judged = await judgeStep(step, body, parts);
-    const readingId = judged.reading
-      ? await keepReading(m, jobId, runId, step.id, judged.reading, idempotencyKey)
+    const reading = judged.reading
+      ? await keepReading(m, jobId, earlier, step.id, judged.reading, idempotencyKey)
       : null;
     const saved = await results.save(
       results.create({
@@ -199,7 +202,7 @@ export async function answerStep(
         outcome: judged.outcome,
         verdict: judged.verdict,
         reason: judged.reason,
-        readingId,
+        readingId: reading?.id ?? null,
         skipReason: body.skipReason ?? null,
         idempotencyKey,
         requestHash: request.hash,
@@ -214,30 +217,30 @@ export async function answerStep(
     run.updatedAt = new Date();
     const { currentStep, status, finding, updatedAt } = run;
     await m.withRepository(PlanRunRepository).update(run.id, { currentStep, status, finding, updatedAt });
-    return { ...(await answerOf(m, run, saved, parts)), created: true };
+    return { ...answerOf(run, [...earlier, saved], saved, reading, parts), created: true };
   });
 }
 
-/** Saves the step's reading on the job; a step answered again after going back re-takes its old reading. */
+/**
+ * Saves the step's reading on the job; a step answered again after going back re-takes its
+ * old reading (the newest undone result of the step in the run's `earlier` results).
+ */
 async function keepReading(
   m: EntityManager,
   jobId: number,
-  runId: number,
+  earlier: PlanRunResult[],
   stepId: string,
   reading: NonNullable<Awaited<ReturnType<typeof judgeStep>>['reading']>,
   idempotencyKey: string,
-): Promise<number> {
+): Promise<Reading> {
   const readings = m.withRepository(ReadingRepository);
   const saved = await readings.save({ ...reading, jobId, idempotencyKey, supersededBy: null, takenAt: new Date() });
-  const undone = await m
-    .withRepository(PlanRunResultRepository)
-    .find({ where: { runId, stepId, undone: true }, order: { id: 'DESC' } });
-  const old = undone.find((r) => r.readingId !== null);
+  const old = [...earlier].reverse().find((r) => r.stepId === stepId && r.undone && r.readingId !== null);
   if (old) {
     const previous = await readings.findOneBy({ id: old.readingId! });
     if (previous && previous.supersededBy === null) await readings.markSuperseded(previous.id, saved.id);
   }
-  return saved.id;
+  return saved;
 }
 
 /** Goes back one step: the last result is marked undone (kept), the run waits at that step again. */

@@ -24,12 +24,15 @@ function unitAt(text: string, field: string): CanonicalUnit {
   return parsed.unit;
 }
 
-async function specLimits(body: VerdictBody): Promise<{ limits: SpecLimits; version?: number }> {
+async function specLimits(body: VerdictBody, known?: Spec): Promise<{ limits: SpecLimits; version?: number }> {
   if (body.spec) {
     const { unit, ...rest } = body.spec;
     return { limits: { ...rest, unit: unitAt(unit, 'spec.unit') } };
   }
-  const spec = await AppDataSource.getRepository(Spec).findOneBy({ id: body.specId!, status: 'published' });
+  const spec =
+    known?.id === body.specId
+      ? known
+      : await AppDataSource.getRepository(Spec).findOneBy({ id: body.specId!, status: 'published' });
   if (!spec) throw AppError.notFound('spec', body.specId);
   const unit = spec.unit as CanonicalUnit;
   return {
@@ -38,9 +41,15 @@ async function specLimits(body: VerdictBody): Promise<{ limits: SpecLimits; vers
   };
 }
 
-/** The body with canonical units, ready for the engine. */
-export async function toVerdictInput(body: VerdictBody): Promise<{ input: VerdictInput; specVersion?: number }> {
-  const { limits, version } = await specLimits(body);
+/**
+ * The body with canonical units, ready for the engine. `known` is the published spec the
+ * caller already holds for `body.specId` (a plan run's cached parts), saving the read.
+ */
+export async function toVerdictInput(
+  body: VerdictBody,
+  known?: Spec,
+): Promise<{ input: VerdictInput; specVersion?: number }> {
+  const { limits, version } = await specLimits(body, known);
   return { input: verdictInputOf(limits, body, unitAt), specVersion: version };
 }
 
