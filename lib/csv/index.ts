@@ -1,6 +1,6 @@
 /**
  * Spec-table CSV import and export (DESIGN.md §5), shared by the browser and the server:
- * bytes → text (checkCsvBytes, decodeCsv) → records (parseSpecCsvDetailed) → rows
+ * bytes → text (checkCsvBytes, decodeCsv) → records (parseSpecCsvDetailed; eachSpecCsvChunk in chunks) → rows
  * (validateSpecRow / SpecCsvRowSchema) → file verdict (validateSpecCsv); and back out with
  * toSpecCsv. Pure TypeScript: no React, no Node I/O.
  */

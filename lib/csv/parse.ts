@@ -34,11 +34,21 @@ const QUOTE_REASONS: Record<string, string> = {
 
 /**
  * Hands each record to `onRecord` as papaparse reads it, so no list of every record is
- * built; `onRecord` returns false to stop reading (a file over the row limit).
+ * built. `onRecord` answers true to go on, false to stop reading (a file over the row
+ * limit), or a promise: the parse pauses until it settles and stops if it fails. `done`
+ * runs once the reading ends, with the failure if there was one. Without promises the
+ * whole parse runs before readRecords returns.
  */
-function readRecords(text: string, onRecord: (record: CsvRecord) => boolean) {
+function readRecords(
+  text: string,
+  onRecord: (record: CsvRecord) => boolean | Promise<void>,
+  done?: (failure?: { error: unknown }) => void,
+) {
+  // papaparse's cursor counts from where the parse last resumed (`base` in the text).
+  let base = 0;
   let pos = 0;
   let line = 1;
+  let failure: { error: unknown } | undefined;
   Papa.parse<string[]>(text, {
     delimiter: ',',
     header: false,
@@ -46,10 +56,23 @@ function readRecords(text: string, onRecord: (record: CsvRecord) => boolean) {
     step: (result, parser) => {
       const record = { line, cells: result.data, errors: result.errors };
       const end = result.meta.cursor;
-      line += (text.slice(pos, end).match(LINE_BREAK) ?? []).length;
+      line += (text.slice(base + pos, base + end).match(LINE_BREAK) ?? []).length;
       pos = end;
-      if (!onRecord(record)) parser.abort();
+      const next = onRecord(record);
+      if (next === true) return;
+      if (next === false) return parser.abort();
+      parser.pause();
+      base += pos;
+      pos = 0;
+      next.then(
+        () => parser.resume(),
+        (error: unknown) => {
+          failure = { error };
+          parser.abort();
+        },
+      );
     },
+    complete: () => done?.(failure),
   });
 }
 
@@ -137,57 +160,128 @@ export const MAX_CSV_ROWS = 200_000;
 const MAX_ROW_ERRORS = 1000;
 
 /**
+ * The record-by-record rules of a spec CSV: the header, blank lines, the row limit, quote
+ * errors and cell counts. `take` answers the record's row when it is one, and whether to
+ * stop reading; `end` adds the problems of a file that ended without data rows.
+ */
+class RecordRules {
+  readonly result: DetailedParse = { rows: [], fileErrors: [], rowErrors: [], rowErrorCount: 0 };
+  private header: string[] | null = null;
+  private headerLine = 1;
+  private data = 0;
+
+  constructor(private readonly maxRows: number) {}
+
+  take(record: CsvRecord): { row?: ParsedCsv['rows'][number]; stop?: boolean } {
+    const result = this.result;
+    if (isBlank(record.cells) && record.errors.length === 0) return {};
+    if (this.header === null) {
+      this.headerLine = record.line;
+      if (record.errors.length) result.fileErrors.push(...quoteProblems(record));
+      else
+        result.fileErrors.push(
+          ...checkHeader((this.header = record.cells.map(normaliseHeader)), record.cells, record.line),
+        );
+      return { stop: result.fileErrors.length > 0 };
+    }
+    this.data += 1;
+    if (this.data > this.maxRows) {
+      result.fileErrors.push({
+        line: record.line,
+        column: null,
+        reason: `the file has more than ${this.maxRows.toLocaleString('en')} rows, the most one import takes; split it into smaller files`,
+      });
+      result.tooManyRows = true;
+      return { stop: true };
+    }
+    if (record.errors.length) {
+      result.fileErrors.push(...quoteProblems(record));
+      return {};
+    }
+    const countProblem = cellCountProblem(record.cells, this.header.length, record.line);
+    if (countProblem) {
+      result.rowErrorCount += 1;
+      if (result.rowErrors.length < MAX_ROW_ERRORS) result.rowErrors.push(countProblem);
+      return {};
+    }
+    const raw: Record<string, string> = {};
+    this.header.forEach((column, i) => (raw[column] = record.cells[i]));
+    return { row: { line: record.line, raw } };
+  }
+
+  end(): DetailedParse {
+    if (this.data === 0 && !this.result.fileErrors.length)
+      this.result.fileErrors.push({
+        line: this.headerLine,
+        column: null,
+        reason: 'the file has a header but no data rows',
+      });
+    return this.result;
+  }
+}
+
+const withoutBom = (input: string) => (input.startsWith('\uFEFF') ? input.slice(1) : input);
+
+const emptyFile = (): DetailedParse => ({
+  rows: [],
+  fileErrors: [{ line: 1, column: null, reason: 'the file is empty' }],
+  rowErrors: [],
+  rowErrorCount: 0,
+});
+
+/**
  * Parses a spec CSV (header row required), record by record. `line` is the physical 1-based
  * line where each record starts. When the header is unusable, `rows` is empty. Rows with the
  * wrong number of cells are left out and reported in `rowErrors` with their line (the rest of
  * the file is fine); `fileErrors` mean the file cannot be used. A file of more than `maxRows`
- * rows stops at once with `tooManyRows`.
+ * rows stops at once with `tooManyRows`. With `keepRows: false` the rows are only checked
+ * (a caller that takes them later in chunks, see eachSpecCsvChunk).
  */
-export function parseSpecCsvDetailed(input: string, maxRows = MAX_CSV_ROWS): DetailedParse {
-  const text = input.startsWith('\uFEFF') ? input.slice(1) : input;
-  const result: DetailedParse = { rows: [], fileErrors: [], rowErrors: [], rowErrorCount: 0 };
-  if (text.trim() === '') {
-    result.fileErrors.push({ line: 1, column: null, reason: 'the file is empty' });
-    return result;
-  }
-  let header: string[] | null = null;
-  let headerLine = 1;
-  let data = 0;
+export function parseSpecCsvDetailed(
+  input: string,
+  maxRows = MAX_CSV_ROWS,
+  { keepRows = true }: { keepRows?: boolean } = {},
+): DetailedParse {
+  const text = withoutBom(input);
+  if (text.trim() === '') return emptyFile();
+  const rules = new RecordRules(maxRows);
   readRecords(text, (record) => {
-    if (isBlank(record.cells) && record.errors.length === 0) return true;
-    if (header === null) {
-      headerLine = record.line;
-      if (record.errors.length) result.fileErrors.push(...quoteProblems(record));
-      else
-        result.fileErrors.push(...checkHeader((header = record.cells.map(normaliseHeader)), record.cells, record.line));
-      return result.fileErrors.length === 0;
-    }
-    data += 1;
-    if (data > maxRows) {
-      result.fileErrors.push({
-        line: record.line,
-        column: null,
-        reason: `the file has more than ${maxRows.toLocaleString('en')} rows, the most one import takes; split it into smaller files`,
-      });
-      result.tooManyRows = true;
-      return false;
-    }
-    if (record.errors.length) {
-      result.fileErrors.push(...quoteProblems(record));
-      return true;
-    }
-    const countProblem = cellCountProblem(record.cells, header.length, record.line);
-    if (countProblem) {
-      result.rowErrorCount += 1;
-      if (result.rowErrors.length < MAX_ROW_ERRORS) result.rowErrors.push(countProblem);
-      return true;
-    }
-    const raw: Record<string, string> = {};
-    header.forEach((column, i) => (raw[column] = record.cells[i]));
-    result.rows.push({ line: record.line, raw });
-    return true;
+    const { row, stop } = rules.take(record);
+    if (row && keepRows) rules.result.rows.push(row);
+    return !stop;
   });
-  if (data === 0 && !result.fileErrors.length)
-    result.fileErrors.push({ line: headerLine, column: null, reason: 'the file has a header but no data rows' });
-  return result;
+  return rules.end();
+}
+
+/**
+ * The rows of a file that parseSpecCsvDetailed found usable, `size` at a time: `onRows`
+ * runs for each chunk in file order, and the parse waits for it (papaparse's pause and
+ * resume), so no more than one chunk of rows is ever held. Same rows and lines as
+ * parseSpecCsvDetailed's.
+ */
+export function eachSpecCsvChunk(
+  input: string,
+  size: number,
+  onRows: (rows: ParsedCsv['rows']) => Promise<void>,
+  maxRows = MAX_CSV_ROWS,
+): Promise<void> {
+  const text = withoutBom(input);
+  if (text.trim() === '') return Promise.resolve();
+  const rules = new RecordRules(maxRows);
+  return new Promise((resolve, reject) => {
+    let pending: ParsedCsv['rows'] = [];
+    readRecords(
+      text,
+      (record) => {
+        const { row, stop } = rules.take(record);
+        if (stop) return false;
+        if (row) pending.push(row);
+        if (pending.length < size) return true;
+        const rows = pending;
+        pending = [];
+        return onRows(rows);
+      },
+      (failure) => (failure ? reject(failure.error) : onRows(pending).then(resolve, reject)),
+    );
+  });
 }

@@ -144,13 +144,13 @@ export class Stager {
     private readonly batchId: number,
   ) {}
 
-  async planned(plan: PlannedRow[], warnings: Map<number, RowProblem[]>) {
-    const rows: Cell[][] = [];
-    for (const p of plan) {
-      rows.push(plannedCells(this.batchId, p, warnings.get(p.line) ?? [], this.numbering));
-      if (rows.length >= CHUNK) await insertChunked(this.m, rows.splice(0, rows.length));
-    }
-    await insertChunked(this.m, rows);
+  /**
+   * Numbers the rows at once (in the order of the calls) and then writes them: a caller may
+   * go on with its next chunk while the INSERTs run, and await this before its next call.
+   */
+  planned(plan: PlannedRow[], warnings: Map<number, RowProblem[]>): Promise<void> {
+    const rows = plan.map((p) => plannedCells(this.batchId, p, warnings.get(p.line) ?? [], this.numbering));
+    return insertChunked(this.m, rows);
   }
 
   async rejected(rejected: Map<number, RowProblem[]>) {

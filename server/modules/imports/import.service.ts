@@ -16,7 +16,7 @@ import {
   type RowProblem,
   type ValidatedCsv,
 } from '@/lib/csv';
-import { MAX_CSV_ROWS } from '@/lib/csv/parse';
+import { MAX_CSV_ROWS, eachSpecCsvChunk } from '@/lib/csv/parse';
 import type { ImportBatchSummaryDto, ImportPreviewDto, ImportPreviewQuery } from '@/lib/contracts/imports';
 import { AppDataSource } from '@/server/db/data-source';
 import { writeTransaction } from '@/server/db/deadlock-retry';
@@ -101,21 +101,27 @@ const tooManyRows = (upload: Upload, fileErrors: RowProblem[]) =>
     limit: MAX_CSV_ROWS,
   });
 
-/** Accepted rows validated, planned and staged at a time: the rows' objects of one chunk only are alive at once. */
-const PREVIEW_CHUNK = 2000;
+/**
+ * Rows validated, planned and staged at a time: the row objects of one chunk only are alive
+ * at once. Smaller chunks kept the heap lower (a 50 000-row preview peaked at 260–340 MB RSS
+ * with 500, 410–450 MB with 2 000) at about the same speed.
+ */
+const PREVIEW_CHUNK = 500;
 
 /**
  * Upload → preview. Nothing is written but the batch and its staged rows, in one transaction.
- * The file's records are read first (file-level problems refuse it before anything is
- * staged); then the rows are validated, planned against the library and staged a chunk at a
- * time, each record let go once it is staged, so the server never holds every row's objects.
+ * The file's records are checked first without keeping them (file-level problems and the row
+ * limit refuse it before anything is staged); then a second read hands the rows over a chunk
+ * at a time, each validated, planned against the library and staged before the next is read,
+ * so the server never holds every row's objects.
  */
 export async function previewImport(upload: Upload, actor: Actor, page = FIRST_PAGE): Promise<ImportPreviewDto> {
   const encoding = checkCsvBytes(upload.bytes);
   if (encoding) return rejectFile(upload, actor, [encoding]);
   const batch = await writeTransaction(async (m) => {
     // Inside the transaction, so that a retried transaction reads the file afresh.
-    const parsed = parseSpecCsvDetailed(decodeCsv(upload.bytes));
+    const text = decodeCsv(upload.bytes);
+    const parsed = parseSpecCsvDetailed(text, MAX_CSV_ROWS, { keepRows: false });
     if (parsed.tooManyRows) throw tooManyRows(upload, parsed.fileErrors);
     if (parsed.fileErrors.length) return parsed.fileErrors;
     const batch = await m
@@ -124,18 +130,22 @@ export async function previewImport(upload: Upload, actor: Actor, page = FIRST_P
     const validator = new SpecCsvValidator(parsed);
     const stager = new Stager(m, batch.id);
     const counts = noCounts();
-    const rows = parsed.rows as ((typeof parsed.rows)[number] | null)[];
-    for (let from = 0; from < rows.length; from += PREVIEW_CHUNK) {
+    // A chunk's staging INSERTs run in MariaDB while the next chunk is read and validated here.
+    let staging: Promise<void> = Promise.resolve();
+    await eachSpecCsvChunk(text, PREVIEW_CHUNK, async (rows) => {
       const accepted: AcceptedRow[] = [];
-      for (let i = from; i < Math.min(rows.length, from + PREVIEW_CHUNK); i += 1) {
-        const row = validator.check(rows[i]!.line, rows[i]!.raw);
-        rows[i] = null;
+      for (const { line, raw } of rows) {
+        const row = validator.check(line, raw);
         if (row) accepted.push(row);
       }
       const plan = await planImport(m, accepted);
       addCounts(counts, plan, accepted);
-      await stager.planned(plan, new Map(accepted.map((a) => [a.line, a.warnings])));
-    }
+      await staging;
+      staging = stager.planned(plan, new Map(accepted.map((a) => [a.line, a.warnings])));
+      // Awaited on the next chunk or below; until then a failure must not count as unhandled.
+      staging.catch(() => undefined);
+    });
+    await staging;
     const { rejected, rejectedRows } = validator.finish();
     await stager.rejected(byLine(rejected));
     batch.counts = { ...counts, rejected: rejectedRows };
