@@ -1,4 +1,5 @@
 /** The server process: connect to MariaDB, then serve the app on config.PORT; drain on SIGTERM. */
+import './heap';
 import 'reflect-metadata';
 import type { Server } from 'node:http';
 import { config } from './config';
