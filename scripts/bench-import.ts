@@ -8,8 +8,12 @@
  * The development machine is shared, so one pair of timings can be off by a factor of two
  * either way. The bench runs three rounds (each a new invented file of new makes, so every
  * row is created), times the bulk load right after the commit in rounds 1 and 3 and right
- * before it in round 2, prints every pair and judges the medians.
+ * before it in round 2, prints every pair and judges the medians. Before the rounds, the
+ * server's own process previews two such files over HTTP (bench-import-server.ts): its peak
+ * resident memory is the figure the memory goal judges.
  */
+// The server's own heap tuning (server/heap.ts), so the figures are the server's.
+import '@/server/heap';
 import fs from 'node:fs';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
@@ -20,6 +24,7 @@ import { ensureDatabase } from '@/server/db/ensure-database';
 import { commitImport, previewImport } from '@/server/modules/imports/import.service';
 import { AppError } from '@/server/errors/app-error';
 import { makeBenchCsv } from './bench-import-data';
+import { serverImportMemory } from './bench-import-server';
 import { SPEC_CSV_COLUMNS, type SpecCsvColumn } from '@/lib/csv';
 import { MAX_CSV_ROWS } from '@/lib/csv/parse';
 
@@ -160,6 +165,8 @@ async function main() {
     console.log(`import benchmark: ${ROWS.toLocaleString('en')} invented rows per file, three rounds`);
     // First, while the process holds nothing of the rounds (RSS does not shrink back after them).
     await tinyRows();
+    // The goal is the server's: its own process, on the same (still empty) database.
+    await serverImportMemory(ROWS, 250);
     const rounds: Round[] = [];
     for (const n of [1, 2, 3]) rounds.push(await round(n, file));
     const [{ specs, revisions }] = await AppDataSource.query(
@@ -177,9 +184,8 @@ async function main() {
     );
     const changed = again.value.counts.created + again.value.counts.updated;
     const peak = (phase: number) => Math.max(...rounds.map((r) => r.peakMb[phase]));
-    const worst = Math.max(peak(0), peak(1));
     console.log(
-      `import: peak RSS ${peak(0).toFixed(0)} / ${peak(1).toFixed(0)} MB (validation and preview / commit; the commit runs in MariaDB) · goal ≤ 250 MB → ${worst <= 250 ? 'met' : 'MISSED'} · end to end goal ≤ 6 s → ${total <= 6 ? 'met' : 'MISSED'} · re-import of the same file: ${again.value.counts.unchanged.toLocaleString('en')} unchanged, ${changed} changed, in ${s(again.seconds)}`,
+      `import: peak RSS of this bench process ${peak(0).toFixed(0)} / ${peak(1).toFixed(0)} MB (validation and preview / commit; it also holds the rounds' files; the server's own figure is above) · end to end goal ≤ 6 s → ${total <= 6 ? 'met' : 'MISSED'} · re-import of the same file: ${again.value.counts.unchanged.toLocaleString('en')} unchanged, ${changed} changed, in ${s(again.seconds)}`,
     );
     console.log(`bulk load (LOAD DATA INFILE, bare table, median of 3): ${s(m('load'))} (${rate(m('load'))})`);
     console.log(
