@@ -10,6 +10,8 @@ import { MAX_REJECTED_KEPT } from '@/lib/csv/validate';
 import { createApp } from '@/server/app';
 import { AppDataSource } from '@/server/db/data-source';
 import { cleanUpImports } from '@/server/modules/imports/import-cleanup';
+import { PREVIEWS_AT_ONCE } from '@/server/modules/imports/import.service';
+import * as transactions from '@/server/db/deadlock-retry';
 import { lastChangeId } from '@/server/modules/library/library-changes';
 import { useTestDatabase } from '../helpers/test-db';
 import { expectProblem } from '../helpers/problems';
@@ -51,6 +53,33 @@ describe('POST /api/imports limits', () => {
     const res = await upload(toCsv([validRow(make), ...bad])).expect(201);
     expect(res.body.counts).toMatchObject({ created: 1, rejected: MAX_REJECTED_KEPT + 50 });
     expect(await staged(res.body.id)).toBe(1 + MAX_REJECTED_KEPT);
+  });
+
+  it('previews a burst of uploads all, no more than PREVIEWS_AT_ONCE at a time', async () => {
+    // Each preview holds its transaction's connection and reads through a second one: unbounded,
+    // a burst as large as the pool would leave every transaction waiting for a connection.
+    let running = 0;
+    let most = 0;
+    const real = transactions.writeTransaction;
+    const spy = jest.spyOn(transactions, 'writeTransaction').mockImplementation(async (work) => {
+      running += 1;
+      most = Math.max(most, running);
+      try {
+        return await real(work);
+      } finally {
+        running -= 1;
+      }
+    });
+    try {
+      const makes = Array.from({ length: PREVIEWS_AT_ONCE + 3 }, () => uniqueMake('Burstmake'));
+      const answers = await Promise.all(makes.map((make) => upload(validFile(make, 40))));
+      expect(answers.map((a) => a.status)).toEqual(makes.map(() => 201));
+      expect(answers.map((a) => a.body.counts.created)).toEqual(makes.map(() => 40));
+      expect(most).toBeGreaterThan(0);
+      expect(most).toBeLessThanOrEqual(PREVIEWS_AT_ONCE);
+    } finally {
+      spy.mockRestore();
+    }
   });
 });
 

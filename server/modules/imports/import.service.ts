@@ -5,6 +5,7 @@
  * (importCsvNow).
  */
 import { createHash } from 'node:crypto';
+import pLimit from 'p-limit';
 import type { EntityManager } from 'typeorm';
 import {
   SpecCsvValidator,
@@ -109,13 +110,26 @@ const tooManyRows = (upload: Upload, fileErrors: RowProblem[]) =>
 const PREVIEW_CHUNK = 500;
 
 /**
+ * Previews that run at once in one server process; later uploads wait their turn. Each one
+ * holds two connections (its transaction, and the pool's for the reads that plan it) and a
+ * chunk's memory, so a burst of uploads can neither drain the pool (a transaction waiting for
+ * a second connection that other waiting transactions hold) nor add up to the server's memory.
+ */
+export const PREVIEWS_AT_ONCE = 2;
+const previewTurn = pLimit(PREVIEWS_AT_ONCE);
+
+/**
  * Upload → preview. Nothing is written but the batch and its staged rows, in one transaction.
  * The file's records are checked first without keeping them (file-level problems and the row
  * limit refuse it before anything is staged); then a second read hands the rows over a chunk
  * at a time, each validated, planned against the library and staged before the next is read,
  * so the server never holds every row's objects.
  */
-export async function previewImport(upload: Upload, actor: Actor, page = FIRST_PAGE): Promise<ImportPreviewDto> {
+export function previewImport(upload: Upload, actor: Actor, page = FIRST_PAGE): Promise<ImportPreviewDto> {
+  return previewTurn(() => previewNow(upload, actor, page));
+}
+
+async function previewNow(upload: Upload, actor: Actor, page: ImportPreviewQuery): Promise<ImportPreviewDto> {
   const encoding = checkCsvBytes(upload.bytes);
   if (encoding) return rejectFile(upload, actor, [encoding]);
   const batch = await writeTransaction(async (m) => {
@@ -138,7 +152,10 @@ export async function previewImport(upload: Upload, actor: Actor, page = FIRST_P
         const row = validator.check(line, raw);
         if (row) accepted.push(row);
       }
-      const plan = await planImport(m, accepted);
+      // Planned through the pool, not the transaction's connection: that read then runs in
+      // MariaDB beside the previous chunk's INSERTs instead of queueing behind them. The
+      // preview writes nothing the plan reads; the commit checks each spec's version.
+      const plan = await planImport(AppDataSource.manager, accepted);
       addCounts(counts, plan, accepted);
       await staging;
       staging = stager.planned(plan, new Map(accepted.map((a) => [a.line, a.warnings])));
