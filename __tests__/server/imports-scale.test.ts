@@ -3,6 +3,7 @@
  * the staged-row cleanup (safe when several processes run it at once), and an import
  * commit logged in library_changes for every process to follow.
  */
+import { setTimeout as sleep } from 'node:timers/promises';
 import request from 'supertest';
 import { SPEC_CSV_COLUMNS } from '@/lib/csv';
 import { MAX_CSV_ROWS } from '@/lib/csv/parse';
@@ -104,6 +105,31 @@ describe('staged-row cleanup', () => {
     for (const id of [old, first, committed]) expect(await staged(id)).toBe(0);
     expect(await staged(second)).toBe(2);
     expectProblem(await request(app).post(`/api/imports/${old}/commit`).set(editor).send({}), 422);
+  });
+
+  it('deletes dead rows without waiting on a preview that is still staging its own', async () => {
+    const committed = (await upload(validFile(uniqueMake(), 2)).expect(201)).body.id;
+    await request(app).post(`/api/imports/${committed}/commit`).set(editor).send({}).expect(200);
+    // A preview halfway through: its batch and first rows written, its transaction still open.
+    const staging = AppDataSource.createQueryRunner();
+    await staging.connect();
+    await staging.startTransaction();
+    try {
+      const { insertId } = await staging.query(
+        `INSERT INTO import_batches (file_name, sha256, file_size, counts, row_errors, status, uploader_name)
+         VALUES ('staging.csv', REPEAT('a', 64), 1, '{}', '[]', 'previewed', 'test')`,
+      );
+      await staging.query(
+        `INSERT INTO import_batch_rows (batch_id, line, action) VALUES (?, 2, 'create'), (?, 3, 'create')`,
+        [insertId, insertId],
+      );
+      const outcome = await Promise.race([cleanUpImports().then(() => 'done'), sleep(5000).then(() => 'waited')]);
+      expect(outcome).toBe('done');
+      expect(await staged(committed)).toBe(0);
+    } finally {
+      await staging.rollbackTransaction();
+      await staging.release();
+    }
   });
 });
 

@@ -38,19 +38,29 @@ async function closeStalePreviews(): Promise<number> {
   });
 }
 
-/** Deletes, chunk by chunk, the staged rows no preview will show again; returns how many. */
+/**
+ * Deletes, chunk by chunk, the staged rows no preview will show again; returns how many.
+ * The dead batches are read first (a plain read) and their rows deleted a batch at a time
+ * through the primary key (batch_id, line): a DELETE whose batch came from a subquery scanned
+ * the whole table, locking every row it passed, so it waited on the rows a preview was still
+ * staging, and held up that preview's INSERTs meanwhile.
+ */
 async function deleteDeadRows(): Promise<number> {
+  const dead: { id: number }[] = await AppDataSource.query(
+    `SELECT b.id FROM import_batches b
+      WHERE b.status IN ('committed', 'failed') AND EXISTS (SELECT 1 FROM ${STAGED_TABLE} st WHERE st.batch_id = b.id)
+      ORDER BY b.id`,
+  );
   let deleted = 0;
-  for (;;) {
-    const result = await AppDataSource.query(
-      `DELETE FROM ${STAGED_TABLE} WHERE batch_id IN (
-         SELECT id FROM (SELECT id FROM import_batches WHERE status IN ('committed', 'failed')) AS done) LIMIT ?`,
-      [CHUNK],
-    );
-    const n = Number(result.affectedRows ?? 0);
-    deleted += n;
-    if (n < CHUNK) return deleted;
+  for (const { id } of dead) {
+    for (;;) {
+      const result = await AppDataSource.query(`DELETE FROM ${STAGED_TABLE} WHERE batch_id = ? LIMIT ?`, [id, CHUNK]);
+      const n = Number(result.affectedRows ?? 0);
+      deleted += n;
+      if (n < CHUNK) break;
+    }
   }
+  return deleted;
 }
 
 export type CleanupReport = { closedPreviews: number; deletedRows: number; prunedChanges: number };
