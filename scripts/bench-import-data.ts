@@ -85,3 +85,33 @@ export function makeBenchCsv(rows: number, makePrefix = 'Benchmake'): string {
   }
   return lines.join('\r\n') + '\r\n';
 }
+
+/**
+ * The largest file the importer accepts: `rows` rows (the row limit) of short specs in the
+ * required columns only (and min, max), each padded in its test points so that the file
+ * comes to just under `bytes` (the upload limit). Models × components make every natural key
+ * distinct.
+ */
+export function makeLargestCsv(rows: number, bytes: number, make: string): string {
+  const cells = (i: number, pad: string): Partial<Record<SpecCsvColumn, string | number>> => ({
+    make,
+    model: `L${i % 1000}`,
+    year_from: 2001,
+    component: `p${Math.floor(i / 1000)}`,
+    parameter: 'r',
+    min: 1,
+    max: 2,
+    unit: 'Ω',
+    test_points: pad,
+    source_title: 'BM',
+    source_page: '1',
+  });
+  const columns = SPEC_CSV_COLUMNS.filter((c) => c in cells(0, ''));
+  const line = (i: number, pad: string) => columns.map((c) => cell(cells(i, pad)[c] ?? '')).join(',');
+  const header = columns.join(',');
+  // Bytes a row may take, less what the longest unpadded row (the last) already takes.
+  const room = Math.floor((bytes - header.length - 2) / rows) - 2 - Buffer.byteLength(line(rows - 1, ''));
+  if (room < 0) throw new Error(`${rows} rows of the shortest specs do not fit in ${bytes} bytes`);
+  const pad = 'x'.repeat(room);
+  return [header, ...Array.from({ length: rows }, (_, i) => line(i, pad))].join('\r\n') + '\r\n';
+}
