@@ -53,6 +53,10 @@ function readRecords(
     delimiter: ',',
     header: false,
     skipEmptyLines: false,
+    // Papaparse's fast mode (taken when no quote is left in the text) splits the whole rest of
+    // the text into lines, again on every resume after a pause: quadratic in the chunked read
+    // (4.4 s for 200 000 unquoted rows, against 0.5 s for the same rows read straight through).
+    fastMode: false,
     step: (result, parser) => {
       const record = { line, cells: result.data, errors: result.errors };
       const end = result.meta.cursor;
