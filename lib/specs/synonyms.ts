@@ -23,10 +23,13 @@ export const normalisePhrase = (s: string) =>
     .replace(/[^\p{L}\p{N}]+/gu, ' ')
     .trim();
 
+/** Each group's phrases normalised and padded once (the import classifies every row with them). */
+const PADDED_GROUPS = SYNONYM_GROUPS.map((group) => ({ group, phrases: group.map((p) => ` ${normalisePhrase(p)} `) }));
+
 /** The groups with a phrase that `text` contains as whole words. */
 export function synonymGroupsIn(text: string): string[][] {
   const padded = ` ${normalisePhrase(text)} `;
-  return SYNONYM_GROUPS.filter((g) => g.some((p) => padded.includes(` ${normalisePhrase(p)} `)));
+  return PADDED_GROUPS.filter(({ phrases }) => phrases.some((p) => padded.includes(p))).map(({ group }) => group);
 }
 
 /** `text` with every synonym of the phrases it contains, each normalised (for matching, not for showing). */
