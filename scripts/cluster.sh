@@ -181,6 +181,13 @@ http {
       proxy_next_upstream_tries 2;
       proxy_connect_timeout 2s;
       proxy_read_timeout 30s;
+      # An upload answers when its preview is ready: 30 s or more for the largest file
+      # accepted (200 000 rows), longer when it waits behind the two a replica previews at
+      # once; its commit is as long. Not retried (POST), whatever the timeout.
+      location ~ ^/api/imports(/[0-9]+/commit)?\$ {
+        proxy_pass http://specbench;
+        proxy_read_timeout 180s;
+      }
     }
   }
 }
