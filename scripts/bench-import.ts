@@ -9,8 +9,8 @@
  * either way. The bench runs three rounds (each a new invented file of new makes, so every
  * row is created), times the bulk load right after the commit in rounds 1 and 3 and right
  * before it in round 2, prints every pair and judges the medians. Before the rounds, the
- * server's own process previews two such files over HTTP (bench-import-server.ts): its peak
- * resident memory is the figure the memory goal judges.
+ * server's own process previews two such files over HTTP, and a fresh one the largest file
+ * accepted (bench-import-server.ts): their peak resident memory is what the memory goals judge.
  */
 // The server's own heap tuning (server/heap.ts), so the figures are the server's.
 import '@/server/heap';
