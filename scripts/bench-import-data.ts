@@ -44,6 +44,11 @@ const SPECS: Spec[] = [
 const cell = (value: string | number) =>
   /[",\r\n]/.test(String(value)) ? `"${String(value).replace(/"/g, '""')}"` : String(value);
 
+type CsvRow = Partial<Record<SpecCsvColumn, string | number>>;
+
+/** One row as a CSV line of `columns` (a column the row does not name is left empty). */
+const csvLine = (columns: readonly SpecCsvColumn[], row: CsvRow) => columns.map((c) => cell(row[c] ?? '')).join(',');
+
 const FAMILIES = ['Trail', 'Urban', 'Ridge', 'Drift', 'Surge', 'Vela', 'Strale', 'Moor', 'Quill', 'Fen'];
 
 /** Varies a value by model (±5 %), keeping min ≤ nominal ≤ max. */
@@ -60,7 +65,7 @@ export function makeBenchCsv(rows: number, makePrefix = 'Benchmake'): string {
       if (lines.length > rows) break;
       // By column name, written in the import format's own column order (lib/csv/columns.ts);
       // a column not named here (mode, near limit, engine speed, notes) is left empty.
-      const row: Partial<Record<SpecCsvColumn, string | number>> = {
+      const row: CsvRow = {
         make,
         model: name,
         year_from: yearFrom,
@@ -80,7 +85,7 @@ export function makeBenchCsv(rows: number, makePrefix = 'Benchmake'): string {
         source_edition: '2nd edition',
         source_page: `${1 + (model % 9)}-${10 + (model % 40)}`,
       };
-      lines.push(SPEC_CSV_COLUMNS.map((c) => cell(row[c] ?? '')).join(','));
+      lines.push(csvLine(SPEC_CSV_COLUMNS, row));
     }
   }
   return lines.join('\r\n') + '\r\n';
@@ -93,7 +98,7 @@ export function makeBenchCsv(rows: number, makePrefix = 'Benchmake'): string {
  * distinct.
  */
 export function makeLargestCsv(rows: number, bytes: number, make: string): string {
-  const cells = (i: number, pad: string): Partial<Record<SpecCsvColumn, string | number>> => ({
+  const cells = (i: number, pad: string): CsvRow => ({
     make,
     model: `L${i % 1000}`,
     year_from: 2001,
@@ -107,7 +112,7 @@ export function makeLargestCsv(rows: number, bytes: number, make: string): strin
     source_page: '1',
   });
   const columns = SPEC_CSV_COLUMNS.filter((c) => c in cells(0, ''));
-  const line = (i: number, pad: string) => columns.map((c) => cell(cells(i, pad)[c] ?? '')).join(',');
+  const line = (i: number, pad: string) => csvLine(columns, cells(i, pad));
   const header = columns.join(',');
   // Bytes a row may take, less what the longest unpadded row (the last) already takes.
   const room = Math.floor((bytes - header.length - 2) / rows) - 2 - Buffer.byteLength(line(rows - 1, ''));

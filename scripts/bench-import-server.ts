@@ -11,12 +11,12 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { config } from '@/server/config';
-import { ensureDemoAccounts } from '@/server/db/seeds/demo-accounts';
+import { DEMO_ACCOUNTS, ensureDemoAccounts } from '@/server/db/seeds/demo-accounts';
 import { makeBenchCsv, makeLargestCsv } from './bench-import-data';
 
 const PORT = Number(process.env.BENCH_IMPORT_PORT ?? 8094);
 const BASE = `http://127.0.0.1:${PORT}`;
-const EDITOR = 'editor@specbench.example';
+const EDITOR = DEMO_ACCOUNTS.find((a) => a.role === 'editor')!.email;
 
 /** A field of /proc/<pid>/status, in MB. */
 function procMb(pid: number, field: 'VmRSS' | 'VmHWM'): number {
@@ -49,7 +49,9 @@ async function signIn(): Promise<string> {
   return body.accessToken;
 }
 
-async function upload(token: string, file: { name: string; text: string; rows: number }): Promise<number> {
+type Upload = { name: string; text: string; rows: number };
+
+async function upload(token: string, file: Upload): Promise<number> {
   const form = new FormData();
   form.append('file', new Blob([file.text], { type: 'text/csv' }), `${file.name}.csv`);
   const t = performance.now();
@@ -64,7 +66,6 @@ async function upload(token: string, file: { name: string; text: string; rows: n
   return (performance.now() - t) / 1000;
 }
 
-type Upload = { name: string; text: string; rows: number };
 type Measured = { idle: number; peaks: number[]; seconds: number[] };
 
 /** A fresh server process, the files uploaded one after another, its high-water mark after each. */
@@ -115,7 +116,7 @@ export async function serverImportMemory(
     () => {
       const text = makeLargestCsv(largest.rows, largest.bytes, 'Lg');
       size = Buffer.byteLength(text);
-      return { name: 'Srvmake largest', text, rows: largest.rows };
+      return { name: 'Lg largest', text, rows: largest.rows };
     },
   ]);
   console.log(

@@ -4,7 +4,7 @@
  * an import preview: a 50 000-row file allocates about 1.8 GB of short-lived objects around
  * a live set of 70–80 MB, and the server's peak resident memory reached 350–460 MB before
  * the next full collection. A fixed 1.5× collects sooner: the same preview peaks at
- * 215–245 MB, at no measurable cost in time (npm run bench, import). Imported first by the
+ * 213–245 MB, at no measurable cost in time (npm run bench, import). Imported first by the
  * server's entry point, so that every process of it, and its worker threads, share the flag.
  */
 import v8 from 'node:v8';
